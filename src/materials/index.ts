@@ -1,0 +1,7 @@
+/** The built-in fluid catalogue and its resolver. */
+export * from './types.js';
+export * from './references.js';
+export * from './water.js';
+export * from './seawater.js';
+export * from './catalogue.js';
+export * from './resolve.js';
