@@ -1,0 +1,24 @@
+# syntax=docker/dockerfile:1
+# Build stage: install all dependencies, compile TypeScript.
+FROM node:20-bookworm-slim AS build
+WORKDIR /app
+COPY package.json package-lock.json tsconfig.json tsconfig.build.json ./
+COPY src ./src
+RUN npm ci --ignore-scripts && npx tsc -p tsconfig.build.json
+
+# Runtime stage: production dependencies only, non-root.
+FROM node:20-bookworm-slim AS runtime
+ENV NODE_ENV=production \
+    OILSKIN_PORT=8080 \
+    OILSKIN_HOST=0.0.0.0
+WORKDIR /app
+COPY package.json package-lock.json ./
+RUN npm ci --omit=dev --ignore-scripts && npm cache clean --force
+COPY --from=build /app/dist ./dist
+COPY bin ./bin
+USER node
+EXPOSE 8080
+HEALTHCHECK --interval=15s --timeout=3s --start-period=10s --retries=3 \
+  CMD node -e "fetch('http://127.0.0.1:'+(process.env.OILSKIN_PORT||8080)+'/healthz').then(r=>process.exit(r.ok?0:1)).catch(()=>process.exit(1))"
+STOPSIGNAL SIGTERM
+CMD ["node", "dist/src/api/server.js"]

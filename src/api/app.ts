@@ -1,0 +1,109 @@
+/**
+ * The fastify application, assembled from plugins: third-party ones first
+ * (CORS, rate limit), then ours (errors, metrics, health, auth, docs, routes).
+ */
+import { randomUUID, timingSafeEqual } from 'node:crypto';
+import Fastify, { type FastifyInstance } from 'fastify';
+import cors from '@fastify/cors';
+import rateLimit from '@fastify/rate-limit';
+import type { ServiceConfig } from './config.js';
+import { safeStringify } from './envelope.js';
+import { problem } from './problem.js';
+import errorsPlugin, { sendProblem } from './plugins/errors.js';
+import metricsPlugin from './plugins/metrics.js';
+import healthPlugin from './plugins/health.js';
+import docsPlugin from './plugins/docs.js';
+import calculationRoutes from './routes/calculations.js';
+import catalogueRoutes from './routes/catalogue.js';
+import { createSolverPool, type SolverPool } from './pool.js';
+import { computeSafely } from './worker.js';
+
+declare module 'fastify' {
+  interface FastifyInstance {
+    solverPool: SolverPool;
+  }
+}
+
+const REQUEST_ID = /^[A-Za-z0-9._:-]{1,128}$/;
+
+function keyMatches(given: string, keys: readonly string[]): boolean {
+  const a = Buffer.from(given);
+  return keys.some((k) => {
+    const b = Buffer.from(k);
+    return a.length === b.length && timingSafeEqual(a, b);
+  });
+}
+
+export async function buildApp(config: ServiceConfig): Promise<FastifyInstance> {
+  const app = Fastify({
+    logger: {
+      level: config.logLevel,
+      redact: ['req.headers["x-api-key"]', 'req.headers.authorization'],
+    },
+    bodyLimit: config.bodyLimit,
+    // A client's request id is kept when it is safe to log; otherwise a fresh one.
+    genReqId: (req) => {
+      const given = req.headers['x-request-id'];
+      return typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
+    },
+    return503OnClosing: true,
+    forceCloseConnections: 'idle',
+    onProtoPoisoning: 'error',
+    onConstructorPoisoning: 'error',
+    routerOptions: { ignoreTrailingSlash: true },
+  });
+
+  app.setReplySerializer((payload) => safeStringify(payload));
+  // Only JSON bodies: text/plain would otherwise reach the handlers as a string.
+  app.removeContentTypeParser('text/plain');
+
+  const pool = createSolverPool({
+    threads: config.workerThreads,
+    maxQueued: config.maxQueuedSolves,
+    timeoutMs: config.solveTimeoutMs,
+    inline: computeSafely,
+  });
+  app.decorate('solverPool', pool);
+  app.addHook('onClose', async () => pool.close());
+
+  app.addHook('onSend', async (request, reply, payload) => {
+    reply.header('x-request-id', request.id);
+    return payload;
+  });
+
+  if (config.corsOrigins.length > 0) {
+    await app.register(cors, { origin: config.corsOrigins.includes('*') ? true : config.corsOrigins, exposedHeaders: ['x-request-id'] });
+  }
+  await app.register(errorsPlugin);
+  if (config.rateLimitPerMinute > 0) {
+    await app.register(rateLimit, {
+      max: config.rateLimitPerMinute,
+      timeWindow: '1 minute',
+      allowList: (request) => ['/healthz', '/readyz', '/metrics'].includes(request.url),
+      errorResponseBuilder: (_request, context) => {
+        const err = new Error(`Rate limit of ${context.max} requests per ${context.after} exceeded; retry in ${context.after}.`) as Error & { statusCode: number };
+        err.statusCode = 429;
+        return err;
+      },
+    });
+  }
+  await app.register(metricsPlugin, { queueDepth: () => pool.queueDepth() });
+  await app.register(healthPlugin);
+
+  if (config.apiKeys.length > 0) {
+    app.addHook('onRequest', async (request, reply) => {
+      if (!request.url.startsWith('/v1/')) return;
+      const key = request.headers['x-api-key'];
+      if (typeof key !== 'string' || !keyMatches(key, config.apiKeys)) {
+        return sendProblem(reply, problem(401, 'unauthorized', 'Missing or wrong API key', 'Send a valid key in the x-api-key header.'), {
+          'www-authenticate': 'ApiKey header="x-api-key"',
+        });
+      }
+    });
+  }
+
+  await app.register(docsPlugin);
+  await app.register(catalogueRoutes);
+  await app.register(calculationRoutes, { pool });
+  return app;
+}

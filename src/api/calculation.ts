@@ -1,0 +1,93 @@
+/**
+ * How a calculation endpoint is defined once and served three ways: over HTTP
+ * (inline or in the worker pool), from the CLI, and in the OpenAPI document.
+ */
+import type { ZodType, output } from 'zod';
+import { ConvergenceError, DomainError } from '../physics/common.js';
+import { envelope, findNonFinite, type CalculationOutput, type Envelope } from './envelope.js';
+import { problem, ProblemError, validationProblem, zodFieldErrors, type Problem } from './problem.js';
+
+export interface CalculationDefinition<Body extends ZodType = ZodType> {
+  /** Short name, also the CLI sub-command (`oilskin flow scenario.json`). */
+  name: string;
+  /** HTTP path under which it is served (POST). */
+  path: string;
+  summary: string;
+  description: string;
+  /** Request body schema: validation, TypeScript type and OpenAPI in one. */
+  body: Body;
+  /** Response envelope schema (OpenAPI only). */
+  response: ZodType;
+  /** Heavy solves run in the worker-thread pool; closed forms inline. */
+  heavy: boolean;
+  /** Example request body for the docs (an invented demo scenario). */
+  example: unknown;
+  compute(input: output<Body>): CalculationOutput;
+}
+
+export function defineCalculation<Body extends ZodType>(definition: CalculationDefinition<Body>): CalculationDefinition<Body> {
+  return definition;
+}
+
+/** Validate a request body against the calculation's schema; throws a 422 ProblemError naming every bad field. */
+export function parseBody<Body extends ZodType>(definition: CalculationDefinition<Body>, body: unknown): output<Body> {
+  if (body === undefined || body === null || typeof body !== 'object' || Array.isArray(body)) {
+    throw validationProblem([{ path: '', message: 'the request body must be a JSON object' }]);
+  }
+  const parsed = definition.body.safeParse(body);
+  if (!parsed.success) throw validationProblem(zodFieldErrors(parsed.error));
+  return parsed.data;
+}
+
+/** Map anything a calculation can throw to a problem document. Unknown errors are not the client's fault. */
+export function problemFromError(error: unknown): Problem {
+  if (error instanceof ProblemError) return error.problem;
+  if (error instanceof ConvergenceError) {
+    return problem(422, 'not-converged', 'The solver did not converge', error.message, {
+      iterations: error.iterations,
+      ...(error.field ? { errors: [{ path: error.field, message: error.message }] } : {}),
+    });
+  }
+  if (error instanceof DomainError) {
+    return problem(422, error.code, 'The input is physically impossible', error.message, {
+      errors: [{ path: error.field ?? '', message: error.message }],
+    });
+  }
+  return problem(500, 'internal', 'Internal error', 'The calculation failed unexpectedly; the failure was logged.');
+}
+
+/** Serializable form of a failure inside a worker thread (class identity does not cross threads). */
+export interface ComputeFailure {
+  failed: true;
+  problem: Problem;
+  message: string;
+}
+
+/** Run the compute step and refuse any result that holds a non-finite number. */
+export function computeChecked<Body extends ZodType>(definition: CalculationDefinition<Body>, input: output<Body>): CalculationOutput {
+  const out = definition.compute(input);
+  const bad = findNonFinite({ result: out.result, verdict: out.verdict, inputs: out.inputs });
+  if (bad) {
+    throw new ProblemError(
+      problem(422, 'non-finite-result', 'The calculation has no finite answer for this input', `the value at ${bad} is not finite; the input lies outside the numerical range of the model`, {
+        errors: [{ path: '', message: `non-finite value at ${bad}` }],
+      }),
+    );
+  }
+  return out;
+}
+
+/** Run a calculation to an envelope, the same way for HTTP and CLI. Throws ProblemError. */
+export function runInline<Body extends ZodType>(definition: CalculationDefinition<Body>, body: unknown): Envelope {
+  const input = parseBody(definition, body);
+  const start = performance.now();
+  let out: CalculationOutput;
+  try {
+    out = computeChecked(definition, input);
+  } catch (error) {
+    const p = problemFromError(error);
+    if (p.status >= 500) throw error;
+    throw new ProblemError(p);
+  }
+  return envelope(out, performance.now() - start);
+}

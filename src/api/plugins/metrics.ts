@@ -1,0 +1,59 @@
+/**
+ * Prometheus metrics at GET /metrics: request count and duration histogram per
+ * route and status, event-loop lag and process metrics (prom-client defaults),
+ * and the worker-pool queue.
+ */
+import type { FastifyInstance } from 'fastify';
+import fp from 'fastify-plugin';
+import { Counter, Gauge, Histogram, Registry, collectDefaultMetrics } from 'prom-client';
+
+declare module 'fastify' {
+  interface FastifyRequest {
+    startedAt?: bigint;
+  }
+}
+
+export default fp(
+  async function metricsPlugin(app: FastifyInstance, options: { queueDepth: () => number }) {
+    const registry = new Registry();
+    collectDefaultMetrics({ register: registry, prefix: 'oilskin_', eventLoopMonitoringPrecision: 20 });
+    const requests = new Counter({
+      name: 'oilskin_http_requests_total',
+      help: 'HTTP requests by route, method and status code',
+      labelNames: ['route', 'method', 'status_code'],
+      registers: [registry],
+    });
+    const duration = new Histogram({
+      name: 'oilskin_http_request_duration_seconds',
+      help: 'HTTP request duration by route, method and status code',
+      labelNames: ['route', 'method', 'status_code'],
+      buckets: [0.0005, 0.001, 0.0025, 0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5, 5, 10],
+      registers: [registry],
+    });
+    new Gauge({
+      name: 'oilskin_solver_queue_depth',
+      help: 'Heavy solves waiting for a worker thread',
+      registers: [registry],
+      collect() {
+        this.set(options.queueDepth());
+      },
+    });
+
+    app.addHook('onRequest', async (request) => {
+      request.startedAt = process.hrtime.bigint();
+    });
+    app.addHook('onResponse', async (request, reply) => {
+      // Unmatched URLs share one label so scanners cannot blow up the label set.
+      const route = request.routeOptions.url ?? 'unmatched';
+      const labels = { route, method: request.method, status_code: String(reply.statusCode) };
+      requests.inc(labels);
+      if (request.startedAt !== undefined) duration.observe(labels, Number(process.hrtime.bigint() - request.startedAt) / 1e9);
+    });
+
+    app.get('/metrics', { schema: { hide: true } }, async (_request, reply) => {
+      reply.type(registry.contentType);
+      return registry.metrics();
+    });
+  },
+  { name: 'oilskin-metrics' },
+);

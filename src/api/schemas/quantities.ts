@@ -1,0 +1,285 @@
+/**
+ * One schema per physical quantity: SI unit, bounds and description, reused by
+ * every route. A JSON number is SI; a string carries its unit and is converted
+ * (src/api/units.ts). Bounds exclude only the impossible and the absurd;
+ * meaningful but unusual values pass and the physics warns.
+ */
+import { z } from './zod.js';
+import { parseQuantity, UnitError } from '../units.js';
+
+export interface QuantityDefinition {
+  /** Physical quantity, e.g. "length". */
+  quantity: string;
+  /** SI unit as a mathjs expression ("m", "N/m", "Pa*s", "K", "deg"). */
+  siUnit: string;
+  /** Unit shown to people in the OpenAPI document. */
+  unitLabel: string;
+  min: number;
+  minInclusive: boolean;
+  max: number;
+  description: string;
+  example: number | string;
+  /** Whether a unit string is accepted (false: JSON number only). */
+  acceptsUnitString?: boolean;
+}
+
+function describe(def: QuantityDefinition): string {
+  const lower = `${def.minInclusive ? '≥' : '>'} ${def.min}`;
+  const strings = def.acceptsUnitString === false ? '' : ` A string with a unit (e.g. "${def.example}") is converted.`;
+  return `${def.description} [${def.unitLabel}; ${lower}, ≤ ${def.max}].${strings}`;
+}
+
+/** Build the schema of one physical quantity; its parsed value is a finite SI number. */
+export function quantity(def: QuantityDefinition) {
+  const input = def.acceptsUnitString === false ? z.number() : z.union([z.number(), z.string()]);
+  return input
+    .transform((raw, ctx): number => {
+      let value: number;
+      if (typeof raw === 'number') {
+        value = raw;
+      } else {
+        try {
+          value = parseQuantity(raw, def.siUnit);
+        } catch (error) {
+          ctx.addIssue({ code: 'custom', message: error instanceof UnitError ? error.message : 'unreadable quantity' });
+          return z.NEVER;
+        }
+      }
+      if (!Number.isFinite(value)) {
+        ctx.addIssue({ code: 'custom', message: `${def.quantity} must be a finite number` });
+        return z.NEVER;
+      }
+      const belowMin = def.minInclusive ? value < def.min : value <= def.min;
+      if (belowMin || value > def.max) {
+        ctx.addIssue({
+          code: 'custom',
+          message: `${def.quantity} ${value} ${def.unitLabel} is outside ${def.minInclusive ? '[' : '('}${def.min}, ${def.max}]`,
+        });
+        return z.NEVER;
+      }
+      return value;
+    })
+    .openapi({ description: describe(def), example: def.example });
+}
+
+export const TextureLength = quantity({
+  quantity: 'texture length',
+  siUnit: 'm',
+  unitLabel: 'm',
+  min: 0,
+  minInclusive: false,
+  max: 0.05,
+  description: 'A texture dimension',
+  example: '50 um',
+});
+
+export const FlowLength = quantity({
+  quantity: 'length',
+  siUnit: 'm',
+  unitLabel: 'm',
+  min: 0,
+  minInclusive: false,
+  max: 1000,
+  description: 'A flow dimension (channel height, pipe diameter, distance)',
+  example: '10 mm',
+});
+
+export const Roughness = quantity({
+  quantity: 'roughness',
+  siUnit: 'm',
+  unitLabel: 'm',
+  min: 0,
+  minInclusive: true,
+  max: 1,
+  description: 'Equivalent sand-grain roughness ε of the pipe wall',
+  example: '0.05 mm',
+});
+
+export const Velocity = quantity({
+  quantity: 'velocity',
+  siUnit: 'm/s',
+  unitLabel: 'm/s',
+  min: 0,
+  minInclusive: false,
+  max: 200,
+  description: 'A flow velocity',
+  example: '1 m/s',
+});
+
+export const ShearStress = quantity({
+  quantity: 'shear stress',
+  siUnit: 'Pa',
+  unitLabel: 'Pa',
+  min: 0,
+  minInclusive: false,
+  max: 1e5,
+  description: 'A shear stress',
+  example: '2 Pa',
+});
+
+export const Density = quantity({
+  quantity: 'density',
+  siUnit: 'kg/m^3',
+  unitLabel: 'kg/m³',
+  min: 0.01,
+  minInclusive: true,
+  max: 25000,
+  description: 'Mass density',
+  example: '998 kg/m^3',
+});
+
+export const DynamicViscosity = quantity({
+  quantity: 'dynamic viscosity',
+  siUnit: 'Pa*s',
+  unitLabel: 'Pa·s',
+  min: 0,
+  minInclusive: false,
+  max: 1e4,
+  description: 'Dynamic viscosity',
+  example: '1 mPa.s',
+});
+
+export const KinematicViscosity = quantity({
+  quantity: 'kinematic viscosity',
+  siUnit: 'm^2/s',
+  unitLabel: 'm²/s',
+  min: 0,
+  minInclusive: false,
+  max: 10,
+  description: 'Kinematic viscosity (converted to dynamic viscosity with the density)',
+  example: '10 cSt',
+});
+
+export const SurfaceTension = quantity({
+  quantity: 'surface tension',
+  siUnit: 'N/m',
+  unitLabel: 'N/m',
+  min: 0,
+  minInclusive: false,
+  max: 1,
+  description: 'Surface or interfacial tension',
+  example: '52 mN/m',
+});
+
+export const Temperature = quantity({
+  quantity: 'temperature',
+  siUnit: 'K',
+  unitLabel: 'K',
+  min: 0,
+  minInclusive: false,
+  max: 2000,
+  description: 'Temperature; a number is kelvin',
+  example: '20 degC',
+});
+
+export const ThermalConductivity = quantity({
+  quantity: 'thermal conductivity',
+  siUnit: 'W/(m*K)',
+  unitLabel: 'W/(m·K)',
+  min: 0,
+  minInclusive: false,
+  max: 5000,
+  description: 'Thermal conductivity',
+  example: '0.6 W/(m*K)',
+});
+
+export const SpecificHeat = quantity({
+  quantity: 'specific heat capacity',
+  siUnit: 'J/(kg*K)',
+  unitLabel: 'J/(kg·K)',
+  min: 0,
+  minInclusive: false,
+  max: 1e5,
+  description: 'Specific heat capacity at constant pressure',
+  example: '4180 J/(kg*K)',
+});
+
+export const ContactAngle = quantity({
+  quantity: 'contact angle',
+  siUnit: 'deg',
+  unitLabel: 'degrees',
+  min: 0,
+  minInclusive: true,
+  max: 180,
+  description: 'Contact angle in degrees',
+  example: 30,
+});
+
+export const FlowAngle = quantity({
+  quantity: 'flow angle',
+  siUnit: 'deg',
+  unitLabel: 'degrees',
+  min: 0,
+  minInclusive: true,
+  max: 90,
+  description: 'Angle between the mean flow and the grooves in degrees (0 = flow along the grooves, 90 = across)',
+  example: 0,
+});
+
+export const Inclination = quantity({
+  quantity: 'inclination',
+  siUnit: 'deg',
+  unitLabel: 'degrees',
+  min: -90,
+  minInclusive: true,
+  max: 90,
+  description: 'Inclination of the wall from horizontal in degrees',
+  example: 0,
+});
+
+export const Fraction = quantity({
+  quantity: 'fraction',
+  siUnit: '1',
+  unitLabel: '1',
+  min: 0,
+  minInclusive: true,
+  max: 1,
+  description: 'A fraction between 0 and 1',
+  example: 1,
+  acceptsUnitString: false,
+});
+
+export const Duration = quantity({
+  quantity: 'duration',
+  siUnit: 's',
+  unitLabel: 's',
+  min: 0,
+  minInclusive: false,
+  max: 1e10,
+  description: 'A duration',
+  example: '2 h',
+});
+
+export const Concentration = quantity({
+  quantity: 'concentration',
+  siUnit: 'mol/m^3',
+  unitLabel: 'mol/m³',
+  min: 0,
+  minInclusive: true,
+  max: 1e4,
+  description: 'Molar bulk concentration (1 mM = 1 mol/m³)',
+  example: '0.1 mM',
+});
+
+export const MassConcentration = quantity({
+  quantity: 'mass concentration',
+  siUnit: 'kg/m^3',
+  unitLabel: 'kg/m³',
+  min: 0,
+  minInclusive: true,
+  max: 1000,
+  description: 'Mass per volume (solubility, salinity)',
+  example: '0.01 mg/L',
+});
+
+export const Salinity = quantity({
+  quantity: 'absolute salinity',
+  siUnit: '1',
+  unitLabel: 'g/kg',
+  min: 0,
+  minInclusive: true,
+  max: 120,
+  description: 'Absolute salinity of seawater in g/kg',
+  example: 35,
+  acceptsUnitString: false,
+});

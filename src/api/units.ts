@@ -1,0 +1,77 @@
+/**
+ * Parsing of quantity strings typed by people ("30 um", "52 mN/m", "20 degC",
+ * "3.4 mPa.s", "10 cSt") into SI numbers, with mathjs's unit system doing the
+ * conversion and the dimension check.
+ */
+import { create, all, type Unit } from 'mathjs';
+
+const math = create(all);
+// Units the trade uses that mathjs lacks: the stokes (kinematic viscosity) and
+// molar concentration (M = mol/L).
+math.createUnit('St', { definition: '1e-4 m^2/s', prefixes: 'short' });
+math.createUnit('M', { definition: '1 mol/L', prefixes: 'short' });
+
+export class UnitError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'UnitError';
+  }
+}
+
+/** Normalise the spellings people type into mathjs syntax. */
+function normalise(text: string): string {
+  return text
+    .trim()
+    .replace(/[µμ]/g, 'u')
+    .replace(/°\s*C\b/g, 'degC')
+    .replace(/°\s*F\b/g, 'degF')
+    .replace(/°/g, 'deg')
+    .replace(/[·⋅×]/g, '*')
+    .replace(/(?<=[A-Za-z])\.(?=[A-Za-z])/g, '*')
+    .replace(/²/g, '^2')
+    .replace(/³/g, '^3')
+    .replace(/−/g, '-');
+}
+
+/**
+ * Convert a quantity string to a number in the SI unit `siUnit` (a mathjs unit
+ * expression such as "m", "N/m", "Pa*s", "K"). Throws {@link UnitError} with a
+ * person-readable reason for an unknown unit, a missing number or a wrong
+ * dimension.
+ */
+export function parseQuantity(text: string, siUnit: string): number {
+  if (text.length > 100) throw new UnitError('quantity string is longer than 100 characters');
+  const key = `${siUnit}|${text}`;
+  const hit = cache.get(key);
+  if (hit !== undefined) return hit;
+  const value = convert(text, siUnit);
+  // Engineers repeat the same few strings ("50 um", "20 degC"): a bounded memo saves the parser.
+  if (cache.size >= CACHE_LIMIT) cache.clear();
+  cache.set(key, value);
+  return value;
+}
+
+const CACHE_LIMIT = 10_000;
+const cache = new Map<string, number>();
+
+function convert(text: string, siUnit: string): number {
+  const normalised = normalise(text);
+  let unit: Unit;
+  try {
+    unit = math.unit(normalised);
+  } catch (error) {
+    // A bare number in a string is SI, like a JSON number.
+    const n = Number(normalised);
+    if (normalised !== '' && Number.isFinite(n)) return n;
+    throw new UnitError(`cannot read "${text}" as a quantity: ${(error as Error).message}`);
+  }
+  if (unit.value === null) throw new UnitError(`"${text}" has a unit but no number`);
+  const reference = math.unit(siUnit);
+  if (!unit.equalBase(reference)) {
+    throw new UnitError(`"${text}" has the wrong dimension: expected a quantity convertible to ${siUnit}`);
+  }
+  const value = unit.toNumber(siUnit);
+  if (!Number.isFinite(value)) throw new UnitError(`"${text}" is not a finite quantity`);
+  // Strip binary noise from prefix scaling (30 um → 3e-5, not 2.9999999999999997e-5).
+  return Number(value.toPrecision(15));
+}

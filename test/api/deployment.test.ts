@@ -1,0 +1,65 @@
+/** No Docker engine here: check what can be checked without building the image. */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { parse, parseAllDocuments } from 'yaml';
+import type { FastifyInstance } from 'fastify';
+import { makeApp } from './helpers.js';
+import { loadConfig } from '../../src/api/config.js';
+
+const read = (p: string) => readFileSync(new URL(`../../${p}`, import.meta.url), 'utf8');
+
+let app: FastifyInstance;
+beforeAll(async () => {
+  app = await makeApp();
+});
+afterAll(async () => {
+  await app.close();
+});
+
+describe('Kubernetes manifests', () => {
+  const deployment = parse(read('docker/k8s/deployment.yaml'));
+  const service = parse(read('docker/k8s/service.yaml'));
+  const hpa = parse(read('docker/k8s/hpa.yaml'));
+  const container = deployment.spec.template.spec.containers[0];
+
+  it('probes point at routes that answer 200', async () => {
+    for (const probe of [container.livenessProbe, container.readinessProbe]) {
+      const res = await app.inject({ method: 'GET', url: probe.httpGet.path });
+      expect(res.statusCode).toBe(200);
+    }
+  });
+  it('ports agree: container port = service target = the port the service listens on', () => {
+    const port = container.ports.find((p: { name: string }) => p.name === service.spec.ports[0].targetPort);
+    expect(port).toBeDefined();
+    const envPort = container.env.find((e: { name: string }) => e.name === 'OILSKIN_PORT').value;
+    expect(Number(envPort)).toBe(port.containerPort);
+    expect(loadConfig({ OILSKIN_PORT: envPort }).port).toBe(port.containerPort);
+  });
+  it('has resource requests and limits, a SIGTERM grace period, and the HPA targets the Deployment', () => {
+    expect(container.resources.requests.cpu).toBeDefined();
+    expect(container.resources.limits.memory).toBeDefined();
+    expect(deployment.spec.template.spec.terminationGracePeriodSeconds).toBeGreaterThanOrEqual(10);
+    expect(hpa.spec.scaleTargetRef.name).toBe(deployment.metadata.name);
+    expect(service.spec.selector).toEqual(deployment.spec.selector.matchLabels);
+  });
+});
+
+describe('Dockerfile and compose', () => {
+  const dockerfile = read('Dockerfile');
+  it('is multi-stage on an official Node 20 slim image, runs as non-root, has a HEALTHCHECK on /healthz', () => {
+    expect(dockerfile.match(/^FROM node:20[\w.-]*slim/gm)?.length).toBeGreaterThanOrEqual(2);
+    expect(dockerfile).toMatch(/--omit=dev/);
+    expect(dockerfile).toMatch(/^USER node/m);
+    expect(dockerfile).toMatch(/HEALTHCHECK[\s\S]*\/healthz/);
+  });
+  it('starts the compiled server that `npm run build` produces', () => {
+    const pkg = JSON.parse(read('package.json'));
+    expect(dockerfile).toContain('dist/src/api/server.js');
+    expect(pkg.scripts.start).toContain('dist/src/api/server.js');
+  });
+  it('compose maps the container port the service listens on', () => {
+    const docs = parseAllDocuments(read('docker/compose.yaml')).map((d) => d.toJS());
+    const svc = docs[0].services.oilskin;
+    expect(svc.ports[0]).toBe(`8080:${svc.environment.OILSKIN_PORT}`);
+  });
+});
