@@ -13,7 +13,9 @@
  * flat no-penetration interface; b_⊥ = ū(H) μ_w / τ − H likewise.
  */
 
-export { solveCellDiffusion, CellInputError } from './cell-diffusion.js';
+import { solveCellDiffusion, CellInputError } from './cell-diffusion.js';
+
+export { solveCellDiffusion, CellInputError };
 export type { CellDiffusionProblem, CellDiffusionResult, CellBoundary, CellSides } from './cell-diffusion.js';
 
 export interface GrooveCellInput {
@@ -83,14 +85,284 @@ export class SolverDivergence extends Error {
   }
 }
 
+/** Resolved, validated inputs shared by both directions. */
+interface ResolvedCell {
+  pitch: number;
+  width: number;
+  depth: number;
+  ratio: number;
+  shear: number;
+  waterViscosity: number;
+  height: number;
+  cellsPerPitch: number;
+  maxCells: number;
+  maxIterations: number;
+  tolerance: number;
+}
+
+function positiveFinite(value: unknown, field: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value) || !(value > 0)) {
+    throw new CellInputError(field, 'must be a positive finite number');
+  }
+  return value;
+}
+
+function resolveInput(input: GrooveCellInput, defaultIterations: number): ResolvedCell {
+  const pitch = positiveFinite(input.pitch, 'pitch');
+  const width = positiveFinite(input.grooveWidth, 'grooveWidth');
+  const depth = positiveFinite(input.grooveDepth, 'grooveDepth');
+  if (!(width < pitch)) throw new CellInputError('grooveWidth', 'must be smaller than the pitch (a ridge is needed)');
+  const ratio = input.viscosityRatio;
+  if (typeof ratio !== 'number' || !Number.isFinite(ratio) || ratio < 0) {
+    throw new CellInputError('viscosityRatio', 'must be a finite number ≥ 0');
+  }
+  const shear = input.appliedShear === undefined ? 1 : input.appliedShear;
+  if (typeof shear !== 'number' || !Number.isFinite(shear) || shear === 0) {
+    throw new CellInputError('appliedShear', 'must be a finite non-zero number');
+  }
+  const waterViscosity = input.waterViscosity === undefined ? 1 : positiveFinite(input.waterViscosity, 'waterViscosity');
+  const height = Math.max(2 * pitch, input.domainHeight === undefined ? 4 * pitch : positiveFinite(input.domainHeight, 'domainHeight'));
+  const cellsPerPitch = input.cellsPerPitch === undefined ? 64 : Math.round(positiveFinite(input.cellsPerPitch, 'cellsPerPitch'));
+  if (cellsPerPitch < 8) throw new CellInputError('cellsPerPitch', 'must be ≥ 8');
+  const maxCells = input.maxCells === undefined ? 2e6 : positiveFinite(input.maxCells, 'maxCells');
+  const maxIterations = input.maxIterations === undefined ? defaultIterations : Math.round(positiveFinite(input.maxIterations, 'maxIterations'));
+  const tolerance = input.tolerance === undefined ? 1e-10 : positiveFinite(input.tolerance, 'tolerance');
+  return { pitch, width, depth, ratio, shear, waterViscosity, height, cellsPerPitch, maxCells, maxIterations, tolerance };
+}
+
+/**
+ * Cell sizes for a segment of given length, finest (`fine`) at the start and
+ * growing geometrically by `growth` up to `coarse`; rescaled to fit exactly.
+ * Why: the velocity has a square-root (longitudinal) or stronger (transverse)
+ * singularity at the groove edge, so a graded mesh there buys accuracy cheaply.
+ */
+function gradedSegment(length: number, fine: number, coarse: number, growth: number): number[] {
+  const sizes: number[] = [];
+  let total = 0;
+  let h = Math.min(fine, coarse);
+  while (total < length) {
+    sizes.push(h);
+    total += h;
+    h = Math.min(coarse, h * growth);
+  }
+  // Remove the overshoot by scaling, keeping at least two cells.
+  if (sizes.length === 1) sizes.push(sizes[0]);
+  const scale = length / sizes.reduce((a, b) => a + b, 0);
+  return sizes.map((x) => x * scale);
+}
+
+/** Edge-graded mesh of the cell: spanwise widths over [−P/2, P/2], heights over [−d, H]. */
+interface CellMesh {
+  widths: Float64Array;
+  heights: Float64Array;
+  /** z of each column centre. */
+  columnCentres: Float64Array;
+  /** y of each row centre. */
+  rowCentres: Float64Array;
+  /** First row above the interface (rows 0 … interfaceRow − 1 lie in the groove). */
+  interfaceRow: number;
+  /** Columns [grooveFirst, grooveLast] lie in the groove. */
+  grooveFirst: number;
+  grooveLast: number;
+}
+
+function buildMesh(cell: ResolvedCell, includeGroove: boolean, depth: number): CellMesh {
+  const { pitch, width, height } = cell;
+  let base = pitch / cell.cellsPerPitch;
+  for (;;) {
+    const mesh = meshWithSpacing(base);
+    if (mesh.widths.length * mesh.heights.length <= cell.maxCells || base > pitch / 8) return mesh;
+    base *= 1.25;
+  }
+
+  function meshWithSpacing(h: number): CellMesh {
+    const halfGroove = width / 2;
+    const halfRidge = (pitch - width) / 2;
+    // At least 8 cells over the narrower half-segment; edge cells a quarter of the local spacing.
+    // Every spacing is proportional to h (so that results on h and 2h can be Richardson-extrapolated);
+    // a half-segment shorter than P/8 gets its spacing reduced so that it keeps ≥ P/(8h) cells.
+    const grooveCoarse = h * Math.min(1, (8 * halfGroove) / pitch);
+    const ridgeCoarse = h * Math.min(1, (8 * halfRidge) / pitch);
+    const edgeFine = Math.min(grooveCoarse, ridgeCoarse) / Number(process.env.EDGEDIV ?? 4);
+    const growth = Number(process.env.GROWTH ?? 1.2);
+    const groove = gradedSegment(halfGroove, edgeFine, grooveCoarse, growth).reverse(); // 0 → w/2, fine at w/2
+    const ridge = gradedSegment(halfRidge, edgeFine, ridgeCoarse, growth); // w/2 → P/2
+    const right = [...groove, ...ridge];
+    const left = [...right].reverse();
+    const widths = Float64Array.from([...left, ...right]);
+    // Near field (y < P) at the base spacing, then geometric growth: above y ≈ P the
+    // disturbance has decayed like exp(−2π y/P) and the linear shear profile is exact on any mesh.
+    const nearHeight = Math.min(pitch, height / 2);
+    const near = gradedSegment(nearHeight, edgeFine, h, growth);
+    const far = gradedSegment(height - nearHeight, near[near.length - 1], pitch / 4, 1.1);
+    const water = [...near, ...far];
+    const cavity = includeGroove ? gradedSegment(depth, edgeFine, Math.min(h, depth / 8, Math.max(grooveCoarse, halfGroove / 4)), growth).reverse() : [];
+    const heights = Float64Array.from([...cavity, ...water]);
+    const columnCentres = new Float64Array(widths.length);
+    let z = -pitch / 2;
+    for (let i = 0; i < widths.length; i++) {
+      columnCentres[i] = z + widths[i] / 2;
+      z += widths[i];
+    }
+    const rowCentres = new Float64Array(heights.length);
+    let y = -depth * (includeGroove ? 1 : 0);
+    for (let j = 0; j < heights.length; j++) {
+      rowCentres[j] = y + heights[j] / 2;
+      y += heights[j];
+    }
+    const grooveFirst = ridge.length;
+    const grooveLast = ridge.length + 2 * groove.length - 1;
+    return { widths, heights, columnCentres, rowCentres, interfaceRow: cavity.length, grooveFirst, grooveLast };
+  }
+}
+
 /**
  * Longitudinal groove cell. Throws CellInputError for impossible geometry
  * (non-positive or non-finite lengths, w ≥ P, N < 0) and SolverDivergence on
  * non-convergence.
+ *
+ * Method: div(μ grad u) = 0 by the finite-volume solver of ./cell-diffusion.ts
+ * on an edge-graded mesh; μ = μ_w above y = 0, N μ_w in the groove; ridge
+ * cells fixed (u = 0 on their faces: no slip), u = 0 on the groove floor,
+ * μ_w ∂u/∂y = τ at y = H, periodic in z. The harmonic face conductance makes
+ * u and μ ∂u/∂y continuous across the groove mouth; N = 0 gives zero-conductance
+ * groove cells, i.e. exactly the natural (zero-stress) condition on the mouth.
  */
 export function solveLongitudinalCell(input: GrooveCellInput): GrooveCellResult {
-  void input;
-  throw new Error('solveLongitudinalCell: not implemented yet');
+  const cell = resolveInput(input, 200);
+  const shearFree = cell.ratio === 0;
+  // N = 0: the groove content is irrelevant (zero-conductance cells); two thin rows stand for it.
+  const mesh = buildMesh(cell, true, shearFree ? cell.pitch / cell.cellsPerPitch / 4 : cell.depth);
+  const nx = mesh.widths.length;
+  const ny = mesh.heights.length;
+  const coefficient = new Float64Array(nx * ny);
+  const fixed = new Uint8Array(nx * ny);
+  for (let j = 0; j < ny; j++) {
+    for (let i = 0; i < nx; i++) {
+      const c = j * nx + i;
+      if (j >= mesh.interfaceRow) coefficient[c] = cell.waterViscosity;
+      else if (i >= mesh.grooveFirst && i <= mesh.grooveLast) coefficient[c] = cell.ratio * cell.waterViscosity;
+      else fixed[c] = 1;
+    }
+  }
+  const solution = solveCellDiffusion({
+    widths: mesh.widths,
+    heights: mesh.heights,
+    coefficient,
+    fixed,
+    bottom: { kind: 'value', value: 0 },
+    top: { kind: 'flux', value: cell.shear },
+    tolerance: cell.tolerance,
+    maxIterations: cell.maxIterations,
+  });
+  if (!solution.converged) throw new SolverDivergence('longitudinal groove cell did not converge', solution.iterations, solution.residual);
+  const u = solution.field;
+  const j0 = mesh.interfaceRow;
+  const hw = mesh.heights[j0];
+  const hTop = mesh.heights[ny - 1];
+  // Mean velocity on the top face: the top flux condition makes the half-cell extrapolation exact.
+  let topMean = 0;
+  let maxVelocity = 0;
+  for (let i = 0; i < nx; i++) {
+    const top = u[(ny - 1) * nx + i] + (cell.shear / cell.waterViscosity) * (hTop / 2);
+    topMean += top * mesh.widths[i];
+    maxVelocity = Math.max(maxVelocity, Math.abs(top));
+  }
+  topMean /= cell.pitch;
+  for (let c = 0; c < u.length; c++) maxVelocity = Math.max(maxVelocity, Math.abs(u[c]));
+  const slipLength = (topMean * cell.waterViscosity) / cell.shear - cell.height;
+
+  const m = mesh.grooveLast - mesh.grooveFirst + 1;
+  const positions = new Float64Array(m);
+  const velocity = new Float64Array(m);
+  const interfaceShear = new Float64Array(m);
+  const waterGradient = new Float64Array(m);
+  const muW = cell.waterViscosity;
+  const muO = cell.ratio * muW;
+  for (let q = 0; q < m; q++) {
+    const i = mesh.grooveFirst + q;
+    positions[q] = mesh.columnCentres[i];
+    const ua = u[j0 * nx + i];
+    if (shearFree) {
+      velocity[q] = ua;
+      interfaceShear[q] = 0;
+      waterGradient[q] = 0;
+    } else {
+      const hb = mesh.heights[j0 - 1];
+      const ub = u[(j0 - 1) * nx + i];
+      const ga = muW / (hw / 2);
+      const gb = muO / (hb / 2);
+      velocity[q] = (ga * ua + gb * ub) / (ga + gb);
+      interfaceShear[q] = (ua - ub) / (hw / (2 * muW) + hb / (2 * muO));
+      waterGradient[q] = interfaceShear[q] / muW;
+    }
+  }
+  let lubricantFlux = 0;
+  for (let j = 0; j < j0 && !shearFree; j++) {
+    for (let i = mesh.grooveFirst; i <= mesh.grooveLast; i++) lubricantFlux += u[j * nx + i] * mesh.widths[i] * mesh.heights[j];
+  }
+  return summarise('longitudinal', cell, mesh, positions, velocity, interfaceShear, waterGradient, {
+    slipLength,
+    lubricantFlux,
+    maxVelocity,
+    unknowns: solution.unknowns,
+    iterations: solution.iterations,
+    residual: solution.residual,
+  });
+}
+
+/** Width-weighted means over the mouth and the local-slip figures common to both directions. */
+function summarise(
+  direction: 'longitudinal' | 'transverse',
+  cell: ResolvedCell,
+  mesh: CellMesh,
+  positions: Float64Array,
+  velocity: Float64Array,
+  interfaceShear: Float64Array,
+  waterGradient: Float64Array,
+  figures: { slipLength: number; lubricantFlux: number; maxVelocity: number; unknowns: number; iterations: number; residual: number },
+): GrooveCellResult {
+  let meanVelocity = 0;
+  let meanShear = 0;
+  let meanGradient = 0;
+  let total = 0;
+  for (let q = 0; q < positions.length; q++) {
+    const dz = mesh.widths[mesh.grooveFirst + q];
+    meanVelocity += velocity[q] * dz;
+    meanShear += interfaceShear[q] * dz;
+    meanGradient += waterGradient[q] * dz;
+    total += dz;
+  }
+  meanVelocity /= total;
+  meanShear /= total;
+  meanGradient /= total;
+  // The mesh is mirror-symmetric, so the groove centre z = 0 is a face between the two middle samples.
+  const mid = positions.length / 2;
+  const centreVelocity = 0.5 * (velocity[mid - 1] + velocity[mid]);
+  const centreGradient = 0.5 * (waterGradient[mid - 1] + waterGradient[mid]);
+  const finiteRatio = (a: number, b: number): number | null => {
+    if (cell.ratio === 0 || b === 0) return null;
+    const r = a / b;
+    return Number.isFinite(r) ? r : null;
+  };
+  return {
+    direction,
+    slipLength: figures.slipLength,
+    interfacePositions: positions,
+    interfaceVelocity: velocity,
+    interfaceShear,
+    meanInterfaceVelocity: meanVelocity,
+    meanInterfaceShear: meanShear,
+    interfacialShearRatio: meanShear / cell.shear,
+    localSlipAtCentre: finiteRatio(centreVelocity, centreGradient),
+    meanLocalSlip: finiteRatio(meanVelocity, meanGradient),
+    lubricantFlux: figures.lubricantFlux,
+    maxVelocity: figures.maxVelocity,
+    grid: { nx: mesh.widths.length, ny: mesh.heights.length, unknowns: figures.unknowns, domainHeight: cell.height },
+    iterations: figures.iterations,
+    residual: figures.residual,
+    converged: true,
+  };
 }
 
 /** Transverse groove cell (2-D Stokes). Same error contract as solveLongitudinalCell. */
