@@ -31,7 +31,7 @@
  *
  * References:
  *  1. Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability,
- *     ch. XI. Oxford: Clarendon Press.
+ *     chs. X (Rayleigh–Taylor) and XI (Kelvin–Helmholtz). Oxford: Clarendon Press.
  *  2. Lamb, H. (1932). Hydrodynamics, 6th ed., §§267–268. Cambridge
  *     University Press.
  *  3. Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, §4.
@@ -63,7 +63,8 @@ import {
 export const WAVE_REFERENCES = {
   chandrasekhar1961: {
     key: 'chandrasekhar1961',
-    citation: 'Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability, ch. XI (Kelvin–Helmholtz instability). Oxford: Clarendon Press.',
+    citation:
+      'Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability, ch. X (Rayleigh–Taylor instability) and ch. XI (Kelvin–Helmholtz instability). Oxford: Clarendon Press.',
   },
   lamb1932: {
     key: 'lamb1932',
@@ -631,6 +632,8 @@ function largestMeanVelocity(flow: FlowState, slipVelocity: number, kinematicVis
   const halfSize = flow.kind === 'channel' ? (flow.height ?? 0) / 2 : (flow.diameter ?? 0) / 2;
   const frictionReynolds = flow.frictionReynoldsNumber ?? (halfSize * flow.frictionVelocity) / kinematicViscosity;
   if (frictionReynolds > 0 && Number.isFinite(frictionReynolds)) {
+    // Wall law at y⁺ = Re_τ; the outer wake is neglected, so this reads the
+    // centreline a little low (a screen, not a profile calculation).
     return slipVelocity + flow.frictionVelocity * velocityPlusAtWallDistance(frictionReynolds);
   }
   return bulk !== undefined && bulk > 0 ? bulk : null;
@@ -680,10 +683,25 @@ export function waveRoughnessWarning(regime: WaveRegime): Warning | null {
  *  - p′_rms band 2.5–3.4 τ_w; the upper value is used for the check
  *    (conservative); zero in laminar flow. Transitional flow is treated as
  *    turbulent.
+ *  - Critical layer: the slowest confined wave travels at u_s + c_min
+ *    relative to the wall (drift of the interface plus its intrinsic speed;
+ *    advection by the outer stream is left out), and its critical height is
+ *    where the mean velocity relative to the interface equals c_min. The
+ *    largest mean velocity is the Poiseuille centreline (laminar), the wall
+ *    law at y⁺ = Re_τ (turbulent channel or pipe), the free stream (plate), or
+ *    unknown (wall-shear input).
  *  - Rayleigh–Taylor: the pinned fundamental mode with k → 0 (long grooves)
- *    is stable while Δρ g_⊥ w²/γ < π².
+ *    is stable while Δρ g_⊥ w²/γ < π² (the capillary cut-off √(Δρg/γ) of
+ *    Chandrasekhar 1961 ch. X must stay below π/w).
  *  - Design limits vary one quantity with everything else fixed (for the
  *    friction velocity: the flow class and p′/τ_w band stay as given).
+ *
+ * Worked example (examples/waves-worked-example.json, an invented demo):
+ * 30 µm wide, 30 µm deep n-hexadecane grooves (γ = 53 mN/m), water at 1 m/s
+ * in a 10 mm channel (u_τ = 0.0604 m/s): w⁺ = 1.81, We_τ = 1.14×10⁻³,
+ * Λ = 0.189 → calm, margin 0.987; ΔU_c = 5.75 m/s against ΔU = 0.020 m/s;
+ * widest calm groove 126 µm (w⁺ = 7.6), lowest calm tension 0.71 mN/m,
+ * highest calm friction velocity 0.177 m/s.
  *
  * @throws DomainError when interfacialTension is absent or a length,
  *   density, viscosity or the friction velocity is not positive and finite.
@@ -861,7 +879,7 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const boundaryAtDesign = Math.cbrt(1 / designWeT);
   const wPlusLow = Math.min(designWPlus, boundaryAtDesign) / 10;
   const wPlusHigh = Math.max(designWPlus, boundaryAtDesign) * 10;
-  const logSpace = (lo: number, hi: number, i: number) => lo * (hi / lo) ** (resolution === 1 ? 0 : i / (resolution - 1));
+  const logSpace = (lo: number, hi: number, i: number) => lo * (hi / lo) ** (i / (resolution - 1));
   const frictionCapillaryNumbers = Array.from({ length: resolution }, (_, i) => logSpace(designWeT / 100, designWeT * 100, i));
   const grooveWidthsPlus = Array.from({ length: resolution }, (_, i) => logSpace(wPlusLow, wPlusHigh, i));
   const viscousLength = at.viscousLength;

@@ -132,7 +132,7 @@ describe('unconfined limits (published)', () => {
     expect(Math.abs(numeric - 6.46)).toBeLessThan(0.02); // Lamb's 646 cm/s (from memory)
   });
 
-  it('gravity–capillary minimum phase speed ≈ 23 cm/s at λ ≈ 1.7 cm (Lamb 1932 §267; 23.1 cm/s at 1.73 cm, Encyclopaedia Britannica "capillary wave")', () => {
+  it('gravity–capillary minimum phase speed ≈ 23 cm/s at λ ≈ 1.7 cm (Lamb 1932 §267; 23.1 cm/s at 1.73 cm in Encyclopaedia Britannica "capillary wave", as quoted at cnblogs.com/erichf/p/14010544.html)', () => {
     const rhoWater = 998.2;
     const rhoAir = 1.204;
     const gamma = 0.0728;
