@@ -4,8 +4,8 @@
  * carries `note: 'from memory …'`. Temperatures are kelvin, values SI.
  */
 import type { Reference } from '../physics/common.js';
+import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101 } from './dippr.js';
 import {
-  CRC_HANDBOOK,
   FOWKES_1964,
   IAPWS_CONDUCTIVITY_2011,
   IAPWS_SR6_08,
@@ -15,6 +15,10 @@ import {
   MINERAL_OIL_DATA,
   PDMS_FLUID_DATA,
   PERFLUORODECALIN_DATA,
+  PERRY_CONDUCTIVITY,
+  PERRY_DENSITY,
+  PERRY_HEAT_CAPACITY,
+  PERRY_VISCOSITY,
   PFPE_FLUID_DATA,
   SHARQAWY_2010,
   TEOS10_SALINITY,
@@ -175,87 +179,114 @@ interface AlkaneData {
   id: string;
   name: string;
   formula: string;
+  carbonAtoms: number;
   meltingPoint: number;
   boilingPoint: number;
-  /** kg/m³ at 20 °C */
-  density20: number;
-  /** Pa·s at 25 °C */
-  viscosity25: number;
-  /** Jasper γ = a − b t: a in N/m, b in N/(m·K) */
-  tensionIntercept: number;
-  tensionSlope: number;
+  /** Perry's Table 2-32, DIPPR Eq. 105: C1 (mol/m³), C2, C3 (K), C4; range min..max K. */
+  density: readonly [number, number, number, number];
+  densityRange: Range;
+  /** Perry's Table 2-313, DIPPR Eq. 101: C1..C5; range min..max K. */
+  viscosity: readonly [number, number, number, number, number];
+  viscosityRange: Range;
+  /** Perry's Table 2-315, DIPPR Eq. 100 (W/(m·K)); range min..max K. */
+  thermalConductivity: readonly number[];
+  thermalConductivityRange: Range;
+  /** Perry's Table 2-153, DIPPR Eq. 100 (J/(kmol·K)); range min..max K. */
+  specificHeat: readonly number[];
+  specificHeatRange: Range;
+  /** Jasper (1972) γ = a − b t, t in °C: a in mN/m, b in mN/(m·K). */
+  jasper: readonly [number, number];
   /** N/m at 25 °C */
   interfacialTensionWater25: number;
-  /** W/(m·K) at 25 °C */
-  thermalConductivity25: number;
-  /** J/(kg·K) at 25 °C */
-  specificHeat25: number;
   flashPointCelsius: number;
 }
 
+const PERRY_NOTE =
+  'DIPPR coefficients of the Perry table, taken from a public transcription of the table (not re-checked ' +
+  'against the printed page); worked values agree with CRC Handbook data to within 2 %.';
+const JASPER_NOTE =
+  "Coefficients a, b of γ = a − b·t (t in °C) as reproduced in Lange's Handbook of Chemistry; the " +
+  'linear form holds over the measured range, so far from room temperature it is an extrapolation.';
+
 function alkane(data: AlkaneData): CatalogueFluid {
   const freezing = data.meltingPoint;
+  const molarMass = alkaneMolarMass(data.carbonAtoms);
+  const [a, b] = data.jasper;
+  const tension = linearInCelsius(a * 1e-3, b * 1e-3, { min: freezing, max: data.boilingPoint }, JASPER_1972, JASPER_NOTE);
   return {
     id: data.id,
     name: data.name,
     role: 'lubricant',
     description:
-      `${data.name} (${data.formula}), a model hydrocarbon lubricant. Surface tension varies linearly with ` +
-      'temperature after Jasper (1972); the other properties are single values near room temperature ' +
-      '(narrow valid range; outside it the value is returned with a warning).',
+      `${data.name} (${data.formula}), a model hydrocarbon lubricant. Density, viscosity, thermal ` +
+      "conductivity and specific heat from the DIPPR correlations in Perry's Handbook (8th ed.), surface " +
+      'tension linear in temperature after Jasper (1972), interfacial tension against water at 25 °C.',
     freezingPoint: freezing,
     boilingPoint: data.boilingPoint,
-    referenceTemperature: Math.max(298.15, Math.ceil(freezing + 5)),
+    referenceTemperature: 298.15,
     safety:
       `Flammable liquid (flash point about ${data.flashPointCelsius} °C, from memory); aspiration hazard. ` +
       "Consult the supplier's safety data sheet.",
     properties: {
-      density: constant(data.density20, around(20, 10, freezing), CRC_HANDBOOK, `at 20 °C; ${FROM_MEMORY}`),
-      viscosity: constant(data.viscosity25, around(25, 5, freezing), CRC_HANDBOOK, `at 25 °C; ${FROM_MEMORY}`),
-      surfaceTension: linearInCelsius(
-        data.tensionIntercept,
-        data.tensionSlope,
-        { min: freezing, max: CELSIUS_ZERO + 100 },
-        JASPER_1972,
-        FROM_MEMORY,
-      ),
-      surfaceTensionDispersive: linearInCelsius(
-        data.tensionIntercept,
-        data.tensionSlope,
-        { min: freezing, max: CELSIUS_ZERO + 100 },
-        FOWKES_1964,
-        'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
-      ),
+      density: {
+        at: dipprDensity105(...data.density, molarMass),
+        validRange: data.densityRange,
+        source: PERRY_DENSITY,
+        note: PERRY_NOTE,
+      },
+      viscosity: {
+        at: dipprViscosity101(...data.viscosity),
+        validRange: data.viscosityRange,
+        source: PERRY_VISCOSITY,
+        note: PERRY_NOTE,
+      },
+      surfaceTension: tension,
+      surfaceTensionDispersive: {
+        ...tension,
+        source: FOWKES_1964,
+        note: 'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
+      },
       interfacialTensionWater: constant(
         data.interfacialTensionWater25,
         around(25, 10, freezing),
         ZEPPIERI_2001,
         `at 25 °C; ${FROM_MEMORY}`,
       ),
-      thermalConductivity: constant(
-        data.thermalConductivity25,
-        around(25, 10, freezing),
-        CRC_HANDBOOK,
-        `at 25 °C; ${FROM_MEMORY}`,
-      ),
-      specificHeat: constant(data.specificHeat25, around(25, 10, freezing), CRC_HANDBOOK, `at 25 °C; ${FROM_MEMORY}`),
+      thermalConductivity: {
+        at: dipprPolynomial100(data.thermalConductivity),
+        validRange: data.thermalConductivityRange,
+        source: PERRY_CONDUCTIVITY,
+        note: PERRY_NOTE,
+      },
+      specificHeat: {
+        at: dipprPolynomial100(data.specificHeat, 1 / (molarMass * 1000)),
+        validRange: data.specificHeatRange,
+        source: PERRY_HEAT_CAPACITY,
+        note: PERRY_NOTE,
+      },
     },
   };
 }
 
+// Melting and normal boiling points: CRC Handbook (from memory; they agree with the DIPPR triple points
+// of the Perry tables to 0.1 K).
 const N_DECANE = alkane({
   id: 'n-decane',
   name: 'n-Decane',
   formula: 'C10H22',
+  carbonAtoms: 10,
   meltingPoint: 243.5,
   boilingPoint: 447.3,
-  density20: 730.0,
-  viscosity25: 0.838e-3,
-  tensionIntercept: 25.67e-3,
-  tensionSlope: 0.09197e-3,
+  density: [410.84, 0.25175, 617.7, 0.28571],
+  densityRange: { min: 243.51, max: 447.3 },
+  viscosity: [-9.6489, 1181.1, -0.24367, 9.0522e34, -15],
+  viscosityRange: { min: 243.51, max: 447.3 },
+  thermalConductivity: [0.2063, -0.00025],
+  thermalConductivityRange: { min: 243.51, max: 447.3 },
+  specificHeat: [278620, -197.91, 1.0737],
+  specificHeatRange: { min: 243.51, max: 447.3 },
+  jasper: [25.67, 0.092],
   interfacialTensionWater25: 52.0e-3,
-  thermalConductivity25: 0.131,
-  specificHeat25: 2210,
   flashPointCelsius: 46,
 });
 
@@ -263,15 +294,20 @@ const N_DODECANE = alkane({
   id: 'n-dodecane',
   name: 'n-Dodecane',
   formula: 'C12H26',
+  carbonAtoms: 12,
   meltingPoint: 263.6,
   boilingPoint: 489.5,
-  density20: 749.5,
-  viscosity25: 1.383e-3,
-  tensionIntercept: 27.12e-3,
-  tensionSlope: 0.08843e-3,
+  density: [332.67, 0.24664, 658, 0.28571],
+  densityRange: { min: 263.57, max: 489.5 },
+  viscosity: [-7.8244, 1191.9, -0.49963, 3.9572e23, -10],
+  viscosityRange: { min: 263.57, max: 489.5 },
+  thermalConductivity: [0.2047, -0.0002326],
+  thermalConductivityRange: { min: 263.57, max: 489.47 },
+  specificHeat: [508210, -1368.7, 3.1015],
+  // The Perry heat-capacity fit for dodecane only spans 263.57–330 K.
+  specificHeatRange: { min: 263.57, max: 330 },
+  jasper: [27.12, 0.0884],
   interfacialTensionWater25: 52.8e-3,
-  thermalConductivity25: 0.140,
-  specificHeat25: 2210,
   flashPointCelsius: 71,
 });
 
@@ -279,15 +315,19 @@ const N_HEXADECANE = alkane({
   id: 'n-hexadecane',
   name: 'n-Hexadecane',
   formula: 'C16H34',
+  carbonAtoms: 16,
   meltingPoint: 291.3,
   boilingPoint: 560.0,
-  density20: 773.3,
-  viscosity25: 3.032e-3,
-  tensionIntercept: 29.22e-3,
-  tensionSlope: 0.0868e-3,
+  density: [232.89, 0.23659, 723, 0.28571],
+  densityRange: { min: 291.31, max: 560.0 },
+  viscosity: [-20.182, 2203.5, 1.2289, 0, 0],
+  viscosityRange: { min: 291.31, max: 560.0 },
+  thermalConductivity: [0.20749, -0.00021917],
+  thermalConductivityRange: { min: 291.31, max: 560.0 },
+  specificHeat: [370350, 231.47, 0.68632],
+  specificHeatRange: { min: 291.31, max: 560.0 },
+  jasper: [29.18, 0.0854],
   interfacialTensionWater25: 53.3e-3,
-  thermalConductivity25: 0.140,
-  specificHeat25: 2210,
   flashPointCelsius: 135,
 });
 

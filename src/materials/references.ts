@@ -86,12 +86,28 @@ export const ZEPPIERI_2001: Reference = {
   doi: '10.1021/je000245r',
 };
 
-export const CRC_HANDBOOK: Reference = {
-  key: 'crc-handbook',
-  citation:
-    'W. M. Haynes (ed.), CRC Handbook of Chemistry and Physics, 95th ed. (2014), CRC Press: tables ' +
-    '"Physical constants of organic compounds", "Viscosity of liquids", "Thermal conductivity of liquids" ' +
-    'and "Heat capacity of liquids".',
+const PERRY_2008 =
+  "D. W. Green, R. H. Perry (eds.) (2008), Perry's Chemical Engineers' Handbook, 8th ed., McGraw-Hill, " +
+  'Section 2 (DIPPR 801 correlation coefficients)';
+
+export const PERRY_DENSITY: Reference = {
+  key: 'perry2008-table2-32',
+  citation: `${PERRY_2008}, Table 2-32: densities of inorganic and organic liquids (DIPPR Eq. 105).`,
+};
+
+export const PERRY_VISCOSITY: Reference = {
+  key: 'perry2008-table2-313',
+  citation: `${PERRY_2008}, Table 2-313: viscosity of inorganic and organic liquids (DIPPR Eq. 101).`,
+};
+
+export const PERRY_CONDUCTIVITY: Reference = {
+  key: 'perry2008-table2-315',
+  citation: `${PERRY_2008}, Table 2-315: thermal conductivity of inorganic and organic liquids (DIPPR Eq. 100).`,
+};
+
+export const PERRY_HEAT_CAPACITY: Reference = {
+  key: 'perry2008-table2-153',
+  citation: `${PERRY_2008}, Table 2-153: heat capacities of inorganic and organic liquids (DIPPR Eq. 100).`,
 };
 
 export const PDMS_FLUID_DATA: Reference = {
