@@ -336,6 +336,8 @@ export interface GrowthRatePoint {
   wavenumber: number;
   /** σ, 1/s. */
   growthRate: number;
+  /** ΔU at which this k turns unstable, m/s (the neutral curve; 0 where the interface is statically unstable). */
+  neutralVelocityDifference: number;
 }
 
 export interface WavesResult {
@@ -805,7 +807,11 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   for (let i = 0; i < curvePoints; i++) {
     // k w/π from 0.02 to 20, log-spaced: both sides of k* = √2 π/w.
     const k = m * 0.02 * 1000 ** (i / (curvePoints - 1));
-    growthRateCurve.push({ wavenumber: k, growthRate: interfaceGrowthRate(layers, k) });
+    growthRateCurve.push({
+      wavenumber: k,
+      growthRate: interfaceGrowthRate(layers, k),
+      neutralVelocityDifference: neutralVelocityDifference(layers, k),
+    });
   }
   const fastest = fastestGrowingMode(layers);
   const slowest = slowestWaveSpeed(layers);

@@ -312,6 +312,41 @@ describe('evaluateWaves: design outputs', () => {
     expect(worked.result.kelvinHelmholtz.growthRateCurve.length).toBe(121);
   });
 
+  it('map cells follow the Λ bands where the scaling criterion governs (2^(−1/3) and 2^(1/3) band edges)', () => {
+    const { map } = worked.result;
+    let checked = 0;
+    map.grooveWidthsPlus.forEach((wPlus, row) => {
+      map.frictionCapillaryNumbers.forEach((weT, column) => {
+        const lambda = wPlus * Math.cbrt(weT);
+        // depinning load 1.7 w⁺ We_τ stays below ½ in these cells, so Λ decides
+        if (1.7 * wPlus * weT > 0.25) return;
+        if (lambda < 0.99 * 2 ** (-1 / 3)) expect(map.regimes[row][column]).toBe('calm');
+        else if (lambda > 1.01 * 2 ** (1 / 3)) expect(map.regimes[row][column]).toBe('wavy');
+        else if (lambda > 1.01 * 2 ** (-1 / 3) && lambda < 0.99 * 2 ** (1 / 3)) expect(map.regimes[row][column]).toBe('marginal');
+        checked++;
+      });
+    });
+    expect(checked).toBeGreaterThan(400);
+  });
+
+  it('the neutral curve of the growth-rate plot has its least value at the critical ΔU', () => {
+    const kh = worked.result.kelvinHelmholtz;
+    const least = Math.min(...kh.growthRateCurve.map((p) => p.neutralVelocityDifference));
+    expect(least).toBeGreaterThanOrEqual(kh.criticalVelocityDifference * (1 - 1e-12));
+    expect(least / kh.criticalVelocityDifference - 1).toBeLessThan(2e-3); // curve spacing 6 % in k around a quadratic minimum
+  });
+
+  it('depinning: p′_rms band 2.5–3.4 τ_w (Farabee & Casarella 1991, from memory) against 2γ/w, warning once exceeded', () => {
+    const checks = worked.result.staticChecks;
+    expect(checks.wallPressureFluctuationLow / (2.5 * 3.65)).toBeCloseTo(1, 2);
+    expect(checks.wallPressureFluctuationHigh / (3.4 * 3.65)).toBeCloseTo(1, 2);
+    expect(checks.depinningPressure).toBeCloseTo((2 * 0.053) / 30e-6, 6);
+    // 1 mm groove, γ = 1 mN/m, τ_w = 10 Pa: 3.4·10 Pa > 2·1e-3/1e-3 = 2 Pa
+    const out = evaluateWaves({ scenario: design({ grooveWidth: 1e-3, interfacialTension: 1e-3, flow: wallShearFlow(10) }), mapResolution: 2 });
+    expect(out.result.staticChecks.depinningRatio).toBeGreaterThan(1);
+    expect(out.warnings.map((w) => w.code)).toContain('depinning-by-pressure-fluctuations');
+  });
+
   it('the closed form and the finite-depth critical ΔU agree for a groove as deep as wide (coth(√3π) − 1 ≈ 4e-5)', () => {
     const kh = worked.result.kelvinHelmholtz;
     expect(Math.abs(kh.criticalVelocityDifference / kh.deepLayerCriticalVelocityDifference - 1)).toBeLessThan(1e-4);
@@ -379,8 +414,8 @@ describe('evaluateWaves: design outputs', () => {
     }
     expect(() => evaluateWaves({ scenario: design({ grooveWidth: -1e-6 }) })).toThrowError(/grooveWidth/);
     expect(() => evaluateWaves({ scenario: design(), slipLengthLongitudinal: Number.NaN })).toThrowError(DomainError);
-    const clamped = evaluateWaves({ scenario: design(), mapResolution: 1e6 });
-    expect(clamped.result.map.regimes.length).toBe(200);
+    const clamped = evaluateWaves({ scenario: design(), mapResolution: 1 });
+    expect(clamped.result.map.regimes.length).toBe(2);
     expect(clamped.warnings.map((w) => w.code)).toContain('map-resolution-clamped');
   });
 });
