@@ -120,7 +120,12 @@ export interface SlipResult {
   drag: DragChange;
   methodUsed: 'closed-form' | 'field';
   /** Relative error of the closed form against the field solver (measured if both ran, else the error map). */
-  closedFormError: { longitudinal: number; transverse: number; source: 'measured' | 'error-map' };
+  closedFormError: {
+    longitudinal: number;
+    transverse: number;
+    /** 'measured' where the field solver ran for that direction, else 'error-map'. */
+    source: { longitudinal: 'measured' | 'error-map'; transverse: 'measured' | 'error-map' };
+  };
   fieldSolverStats?: FieldSolverStats;
 }
 
@@ -131,23 +136,70 @@ const PITCH_PLUS_LIMIT = 25;
 const TEXTURE_REYNOLDS_LIMIT = 1;
 
 /**
- * Error-map rule for `auto`: the estimated relative error of the Belyaev–
- * Vinogradova closed form (with the mean duct local slip) against the field
- * solver, from bench/slip-error-map.ts. Returns the estimate for both directions.
- * Until the field solver exists the estimate is the published bound: the
- * closed form reads up to ~20 % low when b_s/P ≲ 0.1 (Belyaev & Vinogradova 2010)
- * and is exact for shear-free stripes.
+ * Measured relative error |b_closed − b_field|/b_field of the longitudinal closed
+ * form (Belyaev–Vinogradova with the mean duct local slip b̄_s) against the
+ * groove-cell field solver, from `npx tsx bench/slip-error-map.ts` (table in the
+ * slip report). The error collapses onto the two parameters φ and b̄_s/P (rows for
+ * d/w = 0.1 … 2 agree to within about 0.01), so the map keeps, for each φ, nodes
+ * (b̄_s/P, error) at d/w = 1.
+ */
+const LONGITUDINAL_ERROR_MAP: { interfaceFraction: number; nodes: [number, number][] }[] = [
+  { interfaceFraction: 0.2, nodes: [[0.000541, 0.2183], [0.00541, 0.2076], [0.0541, 0.143], [0.541, 0.0526], [5.41, 0.0301]] },
+  { interfaceFraction: 0.5, nodes: [[0.00135, 0.2141], [0.0135, 0.2041], [0.135, 0.1409], [1.35, 0.0445], [13.5, 0.0188]] },
+  { interfaceFraction: 0.8, nodes: [[0.00216, 0.2032], [0.0216, 0.1949], [0.216, 0.1406], [2.16, 0.0452], [21.6, 0.0156]] },
+  { interfaceFraction: 0.95, nodes: [[0.00257, 0.1719], [0.0257, 0.1645], [0.257, 0.1174], [2.57, 0.0371], [25.7, 0.0108]] },
+];
+
+/** Error at one φ row: piecewise linear in log10(b̄_s/P); clamped below; power-law decay above (exact as b̄_s → ∞). */
+function errorAlongRow(nodes: [number, number][], localSlipOverPitch: number): number {
+  const x = Math.log10(Math.max(localSlipOverPitch, 1e-300));
+  const first = nodes[0];
+  if (x <= Math.log10(first[0])) return first[1];
+  for (let i = 1; i < nodes.length; i++) {
+    const [x1, e1] = [Math.log10(nodes[i - 1][0]), nodes[i - 1][1]];
+    const [x2, e2] = [Math.log10(nodes[i][0]), nodes[i][1]];
+    if (x <= x2) return e1 + ((e2 - e1) * (x - x1)) / (x2 - x1);
+  }
+  const [xa, ea] = [Math.log10(nodes[nodes.length - 2][0]), Math.log10(nodes[nodes.length - 2][1])];
+  const [xb, eb] = [Math.log10(nodes[nodes.length - 1][0]), Math.log10(nodes[nodes.length - 1][1])];
+  return 10 ** (eb + ((eb - ea) / (xb - xa)) * (x - xb));
+}
+
+/**
+ * Estimated relative error of the longitudinal closed form at interface fraction φ
+ * and local slip b̄_s/P, interpolated linearly in φ between the rows of the
+ * measured map (clamped outside 0.2 ≤ φ ≤ 0.95).
+ */
+export function closedFormErrorLongitudinal(interfaceFraction: number, localSlipOverPitch: number): number {
+  const rows = LONGITUDINAL_ERROR_MAP;
+  if (interfaceFraction <= rows[0].interfaceFraction) return errorAlongRow(rows[0].nodes, localSlipOverPitch);
+  for (let i = 1; i < rows.length; i++) {
+    if (interfaceFraction <= rows[i].interfaceFraction) {
+      const t = (interfaceFraction - rows[i - 1].interfaceFraction) / (rows[i].interfaceFraction - rows[i - 1].interfaceFraction);
+      return (1 - t) * errorAlongRow(rows[i - 1].nodes, localSlipOverPitch) + t * errorAlongRow(rows[i].nodes, localSlipOverPitch);
+    }
+  }
+  return errorAlongRow(rows[rows.length - 1].nodes, localSlipOverPitch);
+}
+
+/**
+ * Error estimate of both closed forms for `auto`. Transverse: the
+ * Asmolov–Vinogradova relation b_⊥[b_s] = ½ b_∥[2b_s] is exact for a given local
+ * slip, so the stripe-formula part of the transverse error is the longitudinal
+ * error at 2b_s,⊥; the shallow-groove transverse local slip adds an error that is
+ * not in the map, so d/w above the shallow limit is never trusted to 1 %.
  */
 export function closedFormErrorEstimate(
   interfaceFraction: number,
+  pitch: number,
+  local: GrooveLocalSlip,
   depthOverWidth: number,
-  viscosityRatio: number,
-): { longitudinal: number; transverse: number } {
-  // Placeholder region rule, replaced by the measured map when the solver is available.
-  const localSlipOverPitch = (0.27 * interfaceFraction * Math.min(depthOverWidth / 0.27, 1)) / viscosityRatio;
-  const longitudinal = localSlipOverPitch > 10 ? 0.005 : 0.2;
-  const transverse = depthOverWidth <= TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT ? longitudinal : Math.max(longitudinal, 0.2);
-  return { longitudinal, transverse };
+): { longitudinal: number; transverse: number; transverseLocalSlipVerified: boolean } {
+  return {
+    longitudinal: closedFormErrorLongitudinal(interfaceFraction, local.longitudinalMean / pitch),
+    transverse: closedFormErrorLongitudinal(interfaceFraction, (2 * local.transverseMean) / pitch),
+    transverseLocalSlipVerified: depthOverWidth <= TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT,
+  };
 }
 
 const AUTO_ERROR_LIMIT = 0.01;
@@ -268,10 +320,12 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const local = grooveLocalSlipLengths(w, d, viscosityRatio);
   const closedLongitudinal = belyaevVinogradovaSlipLengthLongitudinal(P, w, local.longitudinalMean);
   const closedTransverse = belyaevVinogradovaSlipLengthTransverse(P, w, local.transverseMean);
-  const estimate = closedFormErrorEstimate(phi, d / w, viscosityRatio);
+  const estimate = closedFormErrorEstimate(phi, P, local, d / w);
 
   const wantField =
-    method === 'field' || (method === 'auto' && Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT);
+    method === 'field' ||
+    (method === 'auto' &&
+      (Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT || !estimate.transverseLocalSlipVerified));
   let field: FieldRun | undefined;
   if (wantField) {
     field = runFieldSolver({
@@ -311,7 +365,10 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const closedFormError: SlipResult['closedFormError'] = {
     longitudinal: fieldLongitudinal ? relative(closedLongitudinal, fieldLongitudinal.slipLength) : estimate.longitudinal,
     transverse: fieldTransverse ? relative(closedTransverse, fieldTransverse.slipLength) : estimate.transverse,
-    source: fieldLongitudinal && fieldTransverse ? 'measured' : 'error-map',
+    source: {
+      longitudinal: fieldLongitudinal ? 'measured' : 'error-map',
+      transverse: fieldTransverse ? 'measured' : 'error-map',
+    },
   };
   const methodUsed: SlipResult['methodUsed'] = fieldLongitudinal || fieldTransverse ? 'field' : 'closed-form';
   let fieldSolverStats: FieldSolverStats | undefined;
