@@ -25,8 +25,8 @@
  * is crossed (Π_KH, Π_dep or Π_RT ≥ 1). Marginal in between: for the scaling
  * criterion the band 2^(−1/3) ≤ Λ ≤ 2^(1/3) is a factor of two either side
  * of the boundary in the pressure ratio; for the physical criteria it is the
- * last factor of two before the threshold. The band is our choice (common
- * practice, no source). The margin is 1 − 2·max Π: 1 for an unloaded
+ * last factor of two before the threshold. The band is our own choice,
+ * documented here. The margin is 1 − 2·max Π: 1 for an unloaded
  * interface, 0 at the calm edge, negative beyond it.
  *
  * References:
@@ -34,8 +34,9 @@
  *     chs. X (Rayleigh–Taylor) and XI (Kelvin–Helmholtz). Oxford: Clarendon Press.
  *  2. Lamb, H. (1932). Hydrodynamics, 6th ed., §§267–268. Cambridge
  *     University Press.
- *  3. Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, §4.
- *     Cambridge University Press. doi:10.1017/CBO9780511616938
+ *  3. Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1
+ *     (Kelvin–Helmholtz instability; section number from memory). Cambridge
+ *     University Press. doi:10.1017/CBO9780511616938 (2nd ed., 2004)
  *  4. Miles, J. W. (1957). On the generation of surface waves by shear flows.
  *     J. Fluid Mech. 3(2), 185–204. doi:10.1017/S0022112057000567
  *  5. Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall
@@ -72,7 +73,7 @@ export const WAVE_REFERENCES = {
   },
   drazinReid1981: {
     key: 'drazinReid1981',
-    citation: 'Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1 §4 (Kelvin–Helmholtz instability). Cambridge University Press.',
+    citation: 'Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1 (Kelvin–Helmholtz instability). Cambridge University Press; DOI of the 2nd ed. (2004).',
     doi: '10.1017/CBO9780511616938',
   },
   miles1957: {
@@ -195,9 +196,12 @@ export function interfaceGrowthRate(layers: TwoLayerInterface, streamwiseWavenum
 
 /**
  * Velocity difference at which the mode of streamwise wavenumber k is
- * neutral: ΔU_n²(k) = (a₁ + a₂) K R/(k² a₁a₂) (from σ = 0 above); 0 when R ≤ 0
- * (the interface is statically unstable at that K) or k = 0 with R ≤ 0.
- * Returns Number.MAX_VALUE for k = 0 with R > 0 (no finite ΔU destabilises it).
+ * neutral: ΔU_n²(k) = (a₁ + a₂) K R/(k² a₁a₂) (set σ = 0 in
+ * {@link interfaceGrowthRate}; same references and validity).
+ * @param layers the two layers (SI; the velocities are not used).
+ * @param streamwiseWavenumber k, rad/m.
+ * @returns ΔU_n, m/s; 0 when R ≤ 0 (statically unstable at that K);
+ *   Number.MAX_VALUE for k = 0 with R > 0 (no finite ΔU destabilises it).
  */
 export function neutralVelocityDifference(layers: TwoLayerInterface, streamwiseWavenumber: number): number {
   const t = dispersionTerms(layers, streamwiseWavenumber);
@@ -209,7 +213,12 @@ export function neutralVelocityDifference(layers: TwoLayerInterface, streamwiseW
 
 /**
  * Intrinsic phase speed of the neutral wave at rest (U₁ = U₂ = 0),
- * c(k) = √(K R/(a₁ + a₂))/k, m/s; 0 where R ≤ 0.
+ * c(k) = √(K R/(a₁ + a₂))/k (the dispersion relation of
+ * {@link interfaceGrowthRate} with ΔU = 0; for a deep free surface it is
+ * Lamb's c² = g/k + γk/ρ, Lamb 1932 §267).
+ * @param layers the two layers (SI; the velocities are not used).
+ * @param streamwiseWavenumber k, rad/m.
+ * @returns c, m/s; 0 where R ≤ 0; Number.MAX_VALUE for k = 0 with R > 0.
  */
 export function intrinsicPhaseSpeed(layers: TwoLayerInterface, streamwiseWavenumber: number): number {
   const t = dispersionTerms(layers, streamwiseWavenumber);
@@ -232,6 +241,7 @@ const SCAN_POINTS = 121;
 export interface WavenumberExtremum {
   /** k at the extremum, rad/m (0 when the extremum lies at k → 0). */
   wavenumber: number;
+  /** The extremal value, in the unit of the quantity extremised (m/s for speeds, 1/s for growth rates). */
   value: number;
 }
 
@@ -299,7 +309,12 @@ export function slowestWaveSpeed(layers: TwoLayerInterface): WavenumberExtremum 
   return minimiseOverWavenumber(layers, (k) => intrinsicPhaseSpeed(layers, k));
 }
 
-/** Largest growth rate over k and where it occurs; value 0 and wavenumber 0 when every mode is stable. */
+/**
+ * Largest growth rate σ_max (1/s) of {@link interfaceGrowthRate} over k, and
+ * the k (rad/m) where it occurs (scan over six decades around the reference
+ * wavenumber, golden-section refinement); value 0 and wavenumber 0 when
+ * every mode is stable.
+ */
 export function fastestGrowingMode(layers: TwoLayerInterface): WavenumberExtremum {
   const best = minimiseOverWavenumber(layers, (k) => -interfaceGrowthRate(layers, k));
   return best.value < 0 ? { wavenumber: best.wavenumber, value: -best.value } : { wavenumber: 0, value: 0 };
