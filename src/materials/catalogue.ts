@@ -417,6 +417,12 @@ const PFPE_GENERIC: CatalogueFluid = {
     density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
     surfaceTension: constant(17e-3, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
+    surfaceTensionDispersive: constant(
+      17e-3,
+      around(20, 5),
+      PFPE_FLUID_DATA,
+      `taken equal to the total surface tension (apolar fluorinated oil); ${FROM_MEMORY}`,
+    ),
     interfacialTensionWater: constant(49e-3, around(20, 5), PFPE_FLUID_DATA, FROM_MEMORY),
     thermalConductivity: constant(0.087, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     specificHeat: constant(1000, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
@@ -440,6 +446,12 @@ const PERFLUORODECALIN: CatalogueFluid = {
     density: constant(1917, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
     viscosity: constant(5.1e-3, around(25, 3), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
     surfaceTension: constant(17.6e-3, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    surfaceTensionDispersive: constant(
+      17.6e-3,
+      around(25, 5),
+      PERFLUORODECALIN_DATA,
+      `taken equal to the total surface tension (apolar perfluorocarbon); ${FROM_MEMORY}`,
+    ),
   },
 };
 

@@ -272,6 +272,21 @@ describe('resolveFluid', () => {
     expect(water.warnings.map((w) => w.code)).toContain('salinity-ignored');
   });
 
+  it('seawater at any salinity 0–999 g/kg and any allowed temperature gives finite positive values or a DomainError (property-based)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 999, noNaN: true }), fc.double({ min: 200, max: 380, noNaN: true }), (salinity, temperature) => {
+        try {
+          const state = resolveFluid({ fluid: 'seawater', salinity, temperature });
+          const numbers = [state.density, state.viscosity, state.surfaceTension, state.thermalConductivity, state.specificHeat];
+          return numbers.every((v) => v === undefined || (Number.isFinite(v) && v > 0));
+        } catch (error) {
+          return error instanceof DomainError && error.field === 'fluid.temperature';
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('never returns a non-finite number for any catalogue fluid at any allowed temperature (property-based)', () => {
     for (const fluid of FLUIDS) {
       const low = fluid.freezingPoint ?? 150;
