@@ -34,11 +34,12 @@ function keyMatches(given: string, keys: readonly string[]): boolean {
   });
 }
 
-export async function buildApp(config: ServiceConfig): Promise<FastifyInstance> {
+export async function buildApp(config: ServiceConfig, options: { logStream?: NodeJS.WritableStream } = {}): Promise<FastifyInstance> {
   const app = Fastify({
     logger: {
       level: config.logLevel,
       redact: ['req.headers["x-api-key"]', 'req.headers.authorization'],
+      ...(options.logStream ? { stream: options.logStream } : {}),
     },
     bodyLimit: config.bodyLimit,
     // A client's request id is kept when it is safe to log; otherwise a fresh one.

@@ -120,3 +120,24 @@ describe('authentication, rate limit and overload', () => {
     await limited.close();
   });
 });
+
+describe('logs', () => {
+  it('pino JSON log lines carry the request id that the response header echoes', async () => {
+    const { Writable } = await import('node:stream');
+    const lines: string[] = [];
+    const stream = new Writable({
+      write(chunk, _enc, done) {
+        lines.push(String(chunk));
+        done();
+      },
+    });
+    const { buildApp } = await import('../../src/api/app.js');
+    const { testConfig } = await import('../../src/api/config.js');
+    const logged = await buildApp(testConfig({ logLevel: 'info' }), { logStream: stream });
+    const res = await logged.inject({ method: 'GET', url: '/healthz', headers: { 'x-request-id': 'trace-7' } });
+    await logged.close();
+    expect(res.headers['x-request-id']).toBe('trace-7');
+    const records = lines.map((l) => JSON.parse(l));
+    expect(records.some((r) => r.reqId === 'trace-7' && r.msg === 'request completed')).toBe(true);
+  });
+});
