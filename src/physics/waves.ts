@@ -752,6 +752,9 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     notes.assume('Gravity not given: neglected in the dispersion relation and the Rayleigh–Taylor check.');
   } else {
     const { inclination, facing } = input.gravity;
+    if (facing !== 'up' && facing !== 'down' && facing !== 'vertical') {
+      throw new DomainError(`gravity.facing must be "up", "down" or "vertical" (got ${String(facing)})`, { field: 'gravity.facing' });
+    }
     if (!Number.isFinite(inclination)) {
       throw new DomainError(`gravity.inclination must be a finite angle in degrees (got ${inclination})`, { field: 'gravity.inclination' });
     }

@@ -404,6 +404,25 @@ describe('evaluateWaves: design outputs', () => {
     expect(lam.result.staticChecks.wallPressureFluctuationHigh).toBe(0);
   });
 
+  it('extreme but meaningful inputs (τ_w 1e-12–1e8 Pa, w 1 nm–1 m, γ 1 µN/m–10 N/m, every facing) give finite numbers, never a throw', () => {
+    const dense = fluid('dense lubricant', 1900, 0.1);
+    for (const tau of [1e-12, 1, 1e8]) {
+      for (const w of [1e-9, 1e-4, 1]) {
+        for (const gamma of [1e-6, 10]) {
+          for (const facing of ['up', 'down', 'vertical'] as const) {
+            const out = evaluateWaves({
+              scenario: design({ grooveWidth: w, interfacialTension: gamma, lubricant: dense, flow: wallShearFlow(tau) }),
+              gravity: { inclination: 30, facing },
+              slipLengthLongitudinal: w / 10,
+              mapResolution: 2,
+            });
+            expect(allFinite(out.result)).toBe(true);
+          }
+        }
+      }
+    }
+  });
+
   it('missing or impossible input is a DomainError naming the field', () => {
     const noTension: Scenario = { ...design(), interfacialTension: undefined };
     expect(() => evaluateWaves({ scenario: noTension })).toThrowError(DomainError);
@@ -414,6 +433,7 @@ describe('evaluateWaves: design outputs', () => {
     }
     expect(() => evaluateWaves({ scenario: design({ grooveWidth: -1e-6 }) })).toThrowError(/grooveWidth/);
     expect(() => evaluateWaves({ scenario: design(), slipLengthLongitudinal: Number.NaN })).toThrowError(DomainError);
+    expect(() => evaluateWaves({ scenario: design(), gravity: { inclination: 0, facing: 'sideways' as 'up' } })).toThrowError(/gravity.facing/);
     const clamped = evaluateWaves({ scenario: design(), mapResolution: 1 });
     expect(clamped.result.map.regimes.length).toBe(2);
     expect(clamped.warnings.map((w) => w.code)).toContain('map-resolution-clamped');
