@@ -1,0 +1,376 @@
+/**
+ * Built-in surfactant catalogue. Adsorption constants belong to an interface
+ * (air–water, oil–water), not to the surfactant alone, so each surfactant
+ * carries one parameter set per interface type for which data exist; a value
+ * without a source stays out rather than being guessed. Every value carries
+ * its source reference; values recalled but not confirmed against the
+ * source say `from memory` in their note.
+ *
+ * Units (SI): surface excess mol/m², Langmuir constant m³/mol, adsorption
+ * rate constant m³/(mol·s), desorption rate constant 1/s, diffusivities
+ * m²/s, concentrations mol/m³ (1 mol/m³ = 1 mM).
+ */
+import { DomainError, type Reference, type Warning } from '../physics/common.js';
+
+export type InterfaceType = 'air-water' | 'oil-water';
+
+/** One catalogue number with its witness. */
+export interface SourcedValue {
+  value: number;
+  source: Reference;
+  /** e.g. "from memory", "at 25 °C", "assumed equal to the bulk value by the source". */
+  note?: string;
+}
+
+/** Adsorption parameters of one surfactant at one interface type. */
+export interface InterfaceAdsorptionData {
+  /** Γ_m, maximum surface excess, mol/m². */
+  maximumSurfaceExcess?: SourcedValue;
+  /** K = κ_a/κ_d, Langmuir equilibrium constant, m³/mol. */
+  langmuirConstant?: SourcedValue;
+  /** κ_a, adsorption rate constant, m³/(mol·s). */
+  adsorptionRate?: SourcedValue;
+  /** κ_d, desorption rate constant, 1/s. */
+  desorptionRate?: SourcedValue;
+  /** D_I, surface diffusivity, m²/s. */
+  surfaceDiffusivity?: SourcedValue;
+  /** n, Gibbs prefactor (1 for nonionic, 2 for a 1:1 ionic surfactant without added salt). */
+  gibbsPrefactor?: SourcedValue;
+}
+
+export interface CatalogueSurfactant {
+  id: string;
+  name: string;
+  kind: 'anionic' | 'cationic' | 'nonionic';
+  description: string;
+  /** Bulk (monomer) diffusivity D, m²/s. */
+  bulkDiffusivity?: SourcedValue;
+  /** Critical micelle concentration in water at 25 °C, mol/m³. */
+  criticalMicelleConcentration?: SourcedValue;
+  interfaces: Partial<Record<InterfaceType, InterfaceAdsorptionData>>;
+}
+
+export const SURFACTANT_REFERENCES = {
+  chang1995: {
+    key: 'chang1995',
+    citation:
+      'Chang, C.-H. & Franses, E. I. (1995) Adsorption dynamics of surfactants at the air/water interface: a critical review of mathematical models, data, and mechanisms. Colloids and Surfaces A 100, 1–45.',
+    doi: '10.1016/0927-7757(94)03061-4',
+  },
+  prosser2001: {
+    key: 'prosser2001',
+    citation:
+      'Prosser, A. J. & Franses, E. I. (2001) Adsorption and surface tension of ionic surfactants at the air–water interface: review and evaluation of equilibrium models. Colloids and Surfaces A 178, 1–40.',
+    doi: '10.1016/S0927-7757(00)00706-8',
+  },
+  landel2020: {
+    key: 'landel2020',
+    citation:
+      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020) A theory for the slip and drag of superhydrophobic surfaces with surfactant. Journal of Fluid Mechanics 883, A18 (arXiv:1904.01194).',
+    doi: '10.1017/jfm.2019.857',
+  },
+  mukerjee1971: {
+    key: 'mukerjee1971',
+    citation:
+      'Mukerjee, P. & Mysels, K. J. (1971) Critical Micelle Concentrations of Aqueous Surfactant Systems. NSRDS-NBS 36, U.S. National Bureau of Standards, Washington DC.',
+  },
+  rosen2012: {
+    key: 'rosen2012',
+    citation: 'Rosen, M. J. & Kunjappu, J. T. (2012) Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
+    doi: '10.1002/9781118228920',
+  },
+} satisfies Record<string, Reference>;
+
+const R = SURFACTANT_REFERENCES;
+
+export const SURFACTANTS: readonly CatalogueSurfactant[] = [
+  {
+    id: 'sds',
+    name: 'sodium dodecyl sulfate',
+    kind: 'anionic',
+    description:
+      'Anionic surfactant (SDS, C12H25SO4Na), the usual model contaminant in slip experiments. Air–water constants of the Langmuir–Szyszkowski fit without added salt.',
+    bulkDiffusivity: {
+      value: 7e-10,
+      source: R.chang1995,
+      note: 'value used by Landel et al. (2020) citing Chang & Franses (1995); not re-read in the review itself',
+    },
+    criticalMicelleConcentration: {
+      value: 8.2,
+      source: R.mukerjee1971,
+      note: 'about 8.2 mM at 25 °C without added salt; from memory (the compilation lists values near 8.1–8.3 mM)',
+    },
+    interfaces: {
+      'air-water': {
+        maximumSurfaceExcess: { value: 3.9e-6, source: R.chang1995, note: 'as used by Landel et al. (2020) from Chang & Franses (1995)' },
+        langmuirConstant: {
+          value: 0.179,
+          source: R.chang1995,
+          note: '179 L/mol = κ_a/κ_d with κ_a = 89.5 m³/(mol·s), κ_d = 500 1/s as used by Landel et al. (2020)',
+        },
+        adsorptionRate: { value: 89.5, source: R.chang1995, note: 'as used by Landel et al. (2020)' },
+        desorptionRate: { value: 500, source: R.chang1995, note: 'as used by Landel et al. (2020)' },
+        surfaceDiffusivity: {
+          value: 7e-10,
+          source: R.landel2020,
+          note: 'not measured: taken equal to the bulk diffusivity by Landel et al. (2020)',
+        },
+        gibbsPrefactor: {
+          value: 2,
+          source: R.prosser2001,
+          note: 'n = 2 for a 1:1 ionic surfactant without added electrolyte',
+        },
+      },
+    },
+  },
+  {
+    id: 'triton-x-100',
+    name: 'Triton X-100 (octylphenol ethoxylate)',
+    kind: 'nonionic',
+    description:
+      'Nonionic surfactant, polydisperse ethoxylate (about 9.5 ethylene-oxide units). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
+    bulkDiffusivity: { value: 2.6e-10, source: R.chang1995, note: 'from memory' },
+    criticalMicelleConcentration: { value: 0.24, source: R.mukerjee1971, note: 'about 0.2–0.3 mM at 25 °C; from memory' },
+    interfaces: {
+      'air-water': {
+        maximumSurfaceExcess: { value: 2.9e-6, source: R.rosen2012, note: 'from memory' },
+        langmuirConstant: { value: 1.5e3, source: R.chang1995, note: 'from memory' },
+        gibbsPrefactor: { value: 1, source: R.rosen2012, note: 'n = 1 for a nonionic surfactant (Gibbs equation)' },
+      },
+    },
+  },
+];
+
+export function getSurfactant(id: string): CatalogueSurfactant | undefined {
+  return SURFACTANTS.find((s) => s.id === id);
+}
+
+const VALUE_UNITS = {
+  maximumSurfaceExcess: 'mol/m^2',
+  langmuirConstant: 'm^3/mol',
+  adsorptionRate: 'm^3/(mol*s)',
+  desorptionRate: '1/s',
+  surfaceDiffusivity: 'm^2/s',
+  gibbsPrefactor: '1',
+  bulkDiffusivity: 'm^2/s',
+  criticalMicelleConcentration: 'mol/m^3',
+} as const;
+
+interface ListedValue {
+  value: number;
+  unit: string;
+  source: string;
+  note?: string;
+}
+
+function listValue(name: keyof typeof VALUE_UNITS, v: SourcedValue | undefined): ListedValue | undefined {
+  if (!v) return undefined;
+  return { value: v.value, unit: VALUE_UNITS[name], source: v.source.key, ...(v.note ? { note: v.note } : {}) };
+}
+
+/** JSON-ready catalogue for GET /v1/surfactants: values with units and source keys, plus the reference list. */
+export function surfactantListing(): {
+  surfactants: Array<Record<string, unknown>>;
+  references: Reference[];
+} {
+  const refs = new Map<string, Reference>();
+  const surfactants = SURFACTANTS.map((s) => {
+    const collect = (v: SourcedValue | undefined): void => {
+      if (v) refs.set(v.source.key, v.source);
+    };
+    collect(s.bulkDiffusivity);
+    collect(s.criticalMicelleConcentration);
+    const interfaces: Record<string, Record<string, ListedValue>> = {};
+    for (const [type, data] of Object.entries(s.interfaces) as [InterfaceType, InterfaceAdsorptionData][]) {
+      const entry: Record<string, ListedValue> = {};
+      for (const key of Object.keys(data) as (keyof InterfaceAdsorptionData)[]) {
+        collect(data[key]);
+        const listed = listValue(key, data[key]);
+        if (listed) entry[key] = listed;
+      }
+      interfaces[type] = entry;
+    }
+    const out: Record<string, unknown> = { id: s.id, name: s.name, kind: s.kind, description: s.description };
+    const bulk = listValue('bulkDiffusivity', s.bulkDiffusivity);
+    if (bulk) out.bulkDiffusivity = bulk;
+    const cmc = listValue('criticalMicelleConcentration', s.criticalMicelleConcentration);
+    if (cmc) out.criticalMicelleConcentration = cmc;
+    out.interfaces = interfaces;
+    return out;
+  });
+  return { surfactants, references: [...refs.values()] };
+}
+
+/** Surfactant parameters resolved for one interface, ready for the physics (SI). */
+export interface ResolvedSurfactant {
+  /** Catalogue id, or "custom". */
+  id: string;
+  name: string;
+  interfaceType: InterfaceType;
+  /** Γ_m, mol/m². */
+  maximumSurfaceExcess: number;
+  /** K, m³/mol. */
+  langmuirConstant: number;
+  /** κ_a, m³/(mol·s); absent = diffusion-controlled (instantaneous) exchange. */
+  adsorptionRate?: number;
+  /** κ_d, 1/s; absent = diffusion-controlled (instantaneous) exchange. */
+  desorptionRate?: number;
+  /** D, m²/s. */
+  bulkDiffusivity: number;
+  /** D_I, m²/s. */
+  surfaceDiffusivity: number;
+  /** n, dimensionless. */
+  gibbsPrefactor: number;
+  /** CMC, mol/m³, when known. */
+  criticalMicelleConcentration?: number;
+  /** Where each value came from: a reference key, "input" or "derived". */
+  origins: Record<string, string>;
+  references: Reference[];
+  warnings: Warning[];
+}
+
+/** Request-supplied values (SI); any of them overrides the catalogue. */
+export interface SurfactantParameters {
+  maximumSurfaceExcess?: number;
+  langmuirConstant?: number;
+  adsorptionRate?: number;
+  desorptionRate?: number;
+  bulkDiffusivity?: number;
+  surfaceDiffusivity?: number;
+  gibbsPrefactor?: number;
+  criticalMicelleConcentration?: number;
+}
+
+export interface SurfactantSpec {
+  /** Catalogue id; omit to give every parameter explicitly. */
+  id?: string;
+  interfaceType: InterfaceType;
+  parameters?: SurfactantParameters;
+  /** Display name of a custom surfactant. */
+  name?: string;
+}
+
+/**
+ * Resolve catalogue values plus request overrides for one interface. K is
+ * derived as κ_a/κ_d when both rate constants are known and K is not given;
+ * a given K that disagrees with κ_a/κ_d by more than 1 % is a warning, and
+ * κ_d is then re-derived as κ_a/K so the kinetics match the isotherm.
+ * Missing required values (Γ_m, K, D, n) throw DomainError; a missing
+ * surface diffusivity falls back to the bulk diffusivity (assumption, warned).
+ */
+export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
+  const entry = spec.id !== undefined ? getSurfactant(spec.id) : undefined;
+  if (spec.id !== undefined && !entry) {
+    throw new DomainError(`unknown surfactant "${spec.id}"`, { field: 'surfactant.id', code: 'unknown-surfactant' });
+  }
+  const data = entry?.interfaces[spec.interfaceType];
+  const p = spec.parameters ?? {};
+  const origins: Record<string, string> = {};
+  const refs = new Map<string, Reference>();
+  const warnings: Warning[] = [];
+  const pick = (name: keyof SurfactantParameters, catalogue: SourcedValue | undefined): number | undefined => {
+    const given = p[name];
+    if (given !== undefined) {
+      if (!Number.isFinite(given) || given <= 0) {
+        throw new DomainError(`${name} must be a positive finite number`, { field: `surfactant.${name}` });
+      }
+      origins[name] = 'input';
+      return given;
+    }
+    if (catalogue) {
+      origins[name] = catalogue.source.key;
+      refs.set(catalogue.source.key, catalogue.source);
+      if (catalogue.note?.includes('from memory')) {
+        warnings.push({
+          code: 'surfactant-value-from-memory',
+          severity: 'caution',
+          message: `${name} of ${entry?.name ?? 'the surfactant'} is recalled, not confirmed against its source`,
+        });
+      }
+      return catalogue.value;
+    }
+    return undefined;
+  };
+  if (entry && !data && Object.keys(p).length === 0) {
+    throw new DomainError(`no ${spec.interfaceType} adsorption data for ${entry.name}; give the parameters explicitly`, {
+      field: 'surfactant.parameters',
+      code: 'missing-interface-data',
+    });
+  }
+  const maximumSurfaceExcess = pick('maximumSurfaceExcess', data?.maximumSurfaceExcess);
+  const adsorptionRate = pick('adsorptionRate', data?.adsorptionRate);
+  let desorptionRate = pick('desorptionRate', data?.desorptionRate);
+  let langmuirConstant = pick('langmuirConstant', data?.langmuirConstant);
+  if (langmuirConstant === undefined && adsorptionRate !== undefined && desorptionRate !== undefined) {
+    langmuirConstant = adsorptionRate / desorptionRate;
+    origins.langmuirConstant = 'derived';
+  }
+  const bulkDiffusivity = pick('bulkDiffusivity', entry?.bulkDiffusivity);
+  let surfaceDiffusivity = pick('surfaceDiffusivity', data?.surfaceDiffusivity);
+  const gibbsPrefactor = pick('gibbsPrefactor', data?.gibbsPrefactor);
+  const criticalMicelleConcentration = pick('criticalMicelleConcentration', entry?.criticalMicelleConcentration);
+  const required: [string, number | undefined][] = [
+    ['maximumSurfaceExcess', maximumSurfaceExcess],
+    ['langmuirConstant', langmuirConstant],
+    ['bulkDiffusivity', bulkDiffusivity],
+    ['gibbsPrefactor', gibbsPrefactor],
+  ];
+  for (const [name, value] of required) {
+    if (value === undefined) {
+      throw new DomainError(`${name} is not known for this surfactant and interface; give it explicitly`, {
+        field: `surfactant.${name}`,
+        code: 'missing-surfactant-parameter',
+      });
+    }
+  }
+  if (surfaceDiffusivity === undefined) {
+    surfaceDiffusivity = bulkDiffusivity as number;
+    origins.surfaceDiffusivity = 'derived';
+    warnings.push({
+      code: 'surface-diffusivity-assumed',
+      severity: 'info',
+      message: 'surface diffusivity unknown: taken equal to the bulk diffusivity',
+    });
+  }
+  if ((adsorptionRate === undefined) !== (desorptionRate === undefined)) {
+    if (adsorptionRate !== undefined && langmuirConstant !== undefined) {
+      desorptionRate = adsorptionRate / langmuirConstant;
+      origins.desorptionRate = 'derived';
+    } else {
+      warnings.push({
+        code: 'kinetics-incomplete',
+        severity: 'caution',
+        message: 'only one kinetic rate constant known: exchange treated as diffusion-controlled',
+      });
+      desorptionRate = undefined;
+    }
+  }
+  const K = langmuirConstant as number;
+  if (adsorptionRate !== undefined && desorptionRate !== undefined) {
+    const ratio = adsorptionRate / desorptionRate;
+    if (Math.abs(ratio / K - 1) > 0.01) {
+      warnings.push({
+        code: 'kinetics-isotherm-mismatch',
+        severity: 'warning',
+        message: `κ_a/κ_d = ${ratio.toPrecision(4)} m³/mol differs from K = ${K.toPrecision(4)} m³/mol: κ_d re-derived as κ_a/K`,
+      });
+      desorptionRate = adsorptionRate / K;
+      origins.desorptionRate = 'derived';
+    }
+  }
+  return {
+    id: entry?.id ?? 'custom',
+    name: spec.name ?? entry?.name ?? 'custom surfactant',
+    interfaceType: spec.interfaceType,
+    maximumSurfaceExcess: maximumSurfaceExcess as number,
+    langmuirConstant: K,
+    ...(adsorptionRate !== undefined && desorptionRate !== undefined ? { adsorptionRate, desorptionRate } : {}),
+    bulkDiffusivity: bulkDiffusivity as number,
+    surfaceDiffusivity,
+    gibbsPrefactor: gibbsPrefactor as number,
+    ...(criticalMicelleConcentration !== undefined ? { criticalMicelleConcentration } : {}),
+    origins,
+    references: [...refs.values()],
+    warnings,
+  };
+}
