@@ -18,8 +18,8 @@ export interface CalculationDefinition<Body extends ZodType = ZodType> {
   body: Body;
   /** Response envelope schema (OpenAPI only). */
   response: ZodType;
-  /** Heavy solves run in the worker-thread pool; closed forms inline. */
-  heavy: boolean;
+  /** Heavy solves run in the worker-thread pool; closed forms inline. A function decides per request. */
+  heavy: boolean | ((input: output<Body>) => boolean);
   /** Example request body for the docs (an invented demo scenario). */
   example: unknown;
   compute(input: output<Body>): CalculationOutput;

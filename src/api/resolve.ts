@@ -4,7 +4,8 @@
  */
 import { Notes } from '../physics/common.js';
 import { evaluateFlow, type FlowResult } from '../physics/flow.js';
-import type { Texture } from '../physics/scenario.js';
+import type { Scenario, Texture } from '../physics/scenario.js';
+import { resolveInterfacialTension } from '../physics/wetting.js';
 import type { FluidState } from '../materials/types.js';
 import { resolveFluid } from '../materials/index.js';
 import { canonicalJson } from './envelope.js';
@@ -60,4 +61,49 @@ export function resolveFlow(input: FlowInput, fluid: FluidState, notes: Notes, t
   const out = evaluateFlow(fluid, input, texture);
   notes.merge(out);
   return out.result;
+}
+
+export interface DesignInput {
+  texture: TextureInput;
+  lubricant: FluidInput;
+  workingFluid: FluidInput;
+  flow: FlowInput;
+  interfacialTension?: number;
+}
+
+/**
+ * Resolve the shared design parts into a physics Scenario: fluids from the catalogue,
+ * flow conditions on the working fluid, interfacial tension from input, catalogue or Fowkes.
+ * `needsTension: false` leaves an unknown tension undefined instead of failing.
+ */
+export function resolveDesign(input: DesignInput, notes: Notes, needsTension = true): { scenario: Scenario; flow: FlowResult; tensionOrigin?: string } {
+  const lubricant = resolveFluidInput(input.lubricant, 'lubricant', notes);
+  const workingFluid = resolveFluidInput(input.workingFluid, 'workingFluid', notes);
+  const texture = resolveTexture(input.texture);
+  const flow = resolveFlow(input.flow, workingFluid, notes, texture);
+  let interfacialTension: number | undefined;
+  let tensionOrigin: string | undefined;
+  try {
+    const t = resolveInterfacialTension(lubricant, workingFluid, input.interfacialTension, notes);
+    interfacialTension = t.value;
+    tensionOrigin = t.origin;
+  } catch (error) {
+    if (needsTension) throw error;
+  }
+  return {
+    scenario: { texture, lubricant, workingFluid, flow, ...(interfacialTension === undefined ? {} : { interfacialTension }) },
+    flow,
+    ...(tensionOrigin === undefined ? {} : { tensionOrigin }),
+  };
+}
+
+/** Echo of a resolved design for the response's `inputs`. */
+export function designEcho(scenario: Scenario, flowInput: FlowInput): Record<string, unknown> {
+  return {
+    texture: scenario.texture,
+    lubricant: fluidEcho(scenario.lubricant),
+    workingFluid: fluidEcho(scenario.workingFluid),
+    flow: flowInput,
+    ...(scenario.interfacialTension === undefined ? {} : { interfacialTension: scenario.interfacialTension }),
+  };
 }

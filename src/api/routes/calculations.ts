@@ -12,7 +12,8 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
     app.post(definition.path, async (request, reply) => {
       const input = parseBody(definition, request.body);
       const start = performance.now();
-      const out = definition.heavy
+      const heavy = typeof definition.heavy === 'function' ? definition.heavy(input) : definition.heavy;
+      const out = heavy
         ? await options.pool.run(definition.name, input)
         : (() => {
             const r = computeSafely(definition.name, input);

@@ -1,8 +1,12 @@
 /** Every calculation endpoint, in the order the docs list them. */
 import type { CalculationDefinition } from '../calculation.js';
 import { flowCalculation } from './flow.js';
+import { slipCalculation } from './slip.js';
+import { wavesCalculation } from './waves.js';
 
-export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation as unknown as CalculationDefinition];
+export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, slipCalculation, wavesCalculation].map(
+  (c) => c as unknown as CalculationDefinition,
+);
 
 export function calculationByName(name: string): CalculationDefinition | undefined {
   return CALCULATIONS.find((c) => c.name === name);

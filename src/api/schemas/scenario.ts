@@ -116,3 +116,19 @@ export const FluidStateSchema = z
     origins: z.record(z.string(), z.string()).openapi({ description: 'Where each value came from: catalogue source key or "input"' }),
   })
   .openapi('FluidState');
+
+/** The design parts most calculations share: texture, the two liquids, the flow, and the interfacial tension. */
+export const DesignShape = {
+  texture: TextureSchema,
+  lubricant: FluidSchema.openapi({ description: 'The lubricant held in the grooves' }),
+  workingFluid: FluidSchema.openapi({ description: 'The liquid flowing over the surface' }),
+  flow: FlowSchema,
+  interfacialTension: SurfaceTension.optional().openapi({
+    description: 'Lubricant–working-fluid interfacial tension; default: catalogue value against water, else the Fowkes estimate (with a warning)',
+  }),
+};
+
+export const MethodSchema = z
+  .enum(['auto', 'closed-form', 'field'])
+  .optional()
+  .openapi({ description: 'auto (default): closed form where its measured error is below 1 %, field solver elsewhere' });
