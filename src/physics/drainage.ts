@@ -100,9 +100,10 @@ export function lumpedRetainedLength(time: number, initialLength: number, retain
   if (retainedLength === 0) return Math.max(0, initialLength - drainageSpeed * time);
   const f = (length: number): number => lumpedDrainageTime(initialLength, length, retainedLength, drainageSpeed) - time;
   // Bracket: t(lo) ≥ time + L∞/V_s because the logarithm alone exceeds V_s·time/L∞ there.
-  const lo = retainedLength + (initialLength - retainedLength) * Math.exp(-(drainageSpeed * time) / retainedLength - 1);
-  if (!(lo > retainedLength)) return retainedLength;
-  if (f(lo) < 0) return lo;
+  // Kept a few ulps above L∞ so the logarithm stays finite when the exponential underflows.
+  const gap = Math.max((initialLength - retainedLength) * Math.exp(-(drainageSpeed * time) / retainedLength - 1), 8 * Number.EPSILON * retainedLength);
+  const lo = retainedLength + gap;
+  if (f(lo) <= 0) return lo;
   const root = brent(f, lo, initialLength, { xTolerance: 1e-15 * initialLength });
   if (!root.converged) throw new ConvergenceError('lumped drainage inversion', root.iterations, root.residual);
   return root.root;
