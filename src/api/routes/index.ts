@@ -3,8 +3,10 @@ import type { CalculationDefinition } from '../calculation.js';
 import { flowCalculation } from './flow.js';
 import { slipCalculation } from './slip.js';
 import { wavesCalculation } from './waves.js';
+import { wettingCalculation } from './wetting.js';
+import { retentionCalculation } from './retention.js';
 
-export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, slipCalculation, wavesCalculation].map(
+export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation].map(
   (c) => c as unknown as CalculationDefinition,
 );
 

@@ -4,6 +4,7 @@
  */
 import { z } from './zod.js';
 import {
+  ContactAngle,
   Density,
   DynamicViscosity,
   FlowLength,
@@ -132,3 +133,24 @@ export const MethodSchema = z
   .enum(['auto', 'closed-form', 'field'])
   .optional()
   .openapi({ description: 'auto (default): closed form where its measured error is below 1 %, field solver elsewhere' });
+
+export const ContactAnglesSchema = z
+  .strictObject({
+    underWorkingFluid: z
+      .strictObject({
+        advancing: ContactAngle.openapi({ description: 'Advancing angle of the lubricant on the flat solid under the working fluid, through the lubricant, degrees' }),
+        receding: ContactAngle.openapi({ description: 'Receding angle, degrees' }),
+        equilibrium: ContactAngle.optional().openapi({ description: 'Equilibrium (Young) angle, degrees; default from advancing and receding' }),
+      })
+      .superRefine((a, ctx) => {
+        if (a.receding > a.advancing) ctx.addIssue({ code: 'custom', path: ['receding'], message: 'the receding angle cannot exceed the advancing angle' });
+      })
+      .optional(),
+    inAir: z
+      .strictObject({
+        lubricant: ContactAngle.openapi({ description: 'Lubricant on the flat solid in air, degrees' }),
+        workingFluid: ContactAngle.openapi({ description: 'Working fluid on the flat solid in air, degrees' }),
+      })
+      .optional(),
+  })
+  .openapi('ContactAngles', { description: 'Contact angles on the flat, untextured solid' });
