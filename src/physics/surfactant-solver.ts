@@ -302,14 +302,14 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
     let theta = 0;
     let dTheta = 0.05;
     let x: Float64Array = Float64Array.from(guess);
-    const first = solveDenseNewton(makeResidual(0, false), x, { tolerance: tol, maxIterations, typicalSize: typical });
+    const first = solveDenseNewton(makeResidual(0, false), x, { tolerance: tol, maxIterations: Math.max(maxIterations, 10), typicalSize: typical });
     iterations += first.iterations;
     if (!first.converged) throw new ConvergenceError('surfactant transport (no Marangoni coupling) did not converge', iterations, first.residualNorm);
     x = first.x;
     let last = first;
     while (theta < 1) {
       const next = Math.min(1, theta + dTheta);
-      const r = solveDenseNewton(makeResidual(next, false), x, { tolerance: tol, maxIterations: 25, typicalSize: typical });
+      const r = solveDenseNewton(makeResidual(next, false), x, { tolerance: tol, maxIterations: Math.min(25, maxIterations), typicalSize: typical });
       iterations += r.iterations;
       continuationSteps++;
       if (r.converged) {
@@ -450,7 +450,8 @@ export function solveLongWaveGroove(input: LongWaveInput): LongWaveSolution {
   };
   let q: Float64Array = new Float64Array(N).fill(1);
   let iterations = 0;
-  let r = solveDenseNewton(makeResidual(1), q, { tolerance: tol, maxIterations: input.maxIterations ?? 40 });
+  const maxIterations = input.maxIterations ?? 40;
+  let r = solveDenseNewton(makeResidual(1), q, { tolerance: tol, maxIterations });
   iterations += r.iterations;
   if (!r.converged) {
     let theta = 0;
@@ -458,7 +459,7 @@ export function solveLongWaveGroove(input: LongWaveInput): LongWaveSolution {
     let steps = 0;
     while (theta < 1) {
       const next = Math.min(1, theta + dTheta);
-      const rr = solveDenseNewton(makeResidual(next), q, { tolerance: tol, maxIterations: 25 });
+      const rr = solveDenseNewton(makeResidual(next), q, { tolerance: tol, maxIterations: Math.min(25, maxIterations) });
       iterations += rr.iterations;
       steps++;
       if (rr.converged) {
