@@ -14,6 +14,7 @@
  */
 
 import { solveCellDiffusion, CellInputError } from './cell-diffusion.js';
+import { solveStokesCell } from './stokes-cell.js';
 
 export { solveCellDiffusion, CellInputError };
 export type { CellDiffusionProblem, CellDiffusionResult, CellBoundary, CellSides } from './cell-diffusion.js';
@@ -33,7 +34,7 @@ export interface GrooveCellInput {
   waterViscosity?: number;
   /** Height H of the water layer above the interface (m), default 4 P; values < 2 P are raised to 2 P. */
   domainHeight?: number;
-  /** Grid resolution: largest spanwise cell is P / cellsPerPitch; the mesh is graded towards the groove edges (default 48, minimum 8). */
+  /** Grid resolution: largest spanwise cell is P / cellsPerPitch; the mesh is graded towards the groove edges (default 48 longitudinal, 32 transverse; minimum 8). */
   cellsPerPitch?: number;
   /** Cap on the total number of grid cells (default 2e6); exceeded → resolution is reduced. */
   maxCells?: number;
@@ -73,7 +74,7 @@ export interface GrooveCellResult {
   localSlipAtCentre: number | null;
   /** Mean local slip: mean u_i / mean (∂u/∂y)_water over the mouth (m); null for N = 0. */
   meanLocalSlip: number | null;
-  /** Longitudinal: volume flux of lubricant through the groove cross-section, ∫∫ u dA (m³/s). Transverse: recirculating flux in the cavity (m²/s per unit length), 0 for N = 0. */
+  /** Longitudinal: volume flux of lubricant along the groove, ∫∫ u dA over its cross-section (m³/s). Transverse: recirculating flux of the cavity eddy, max |ψ| (m²/s, per unit groove length), 0 for N = 0. */
   lubricantFlux: number;
   /** Largest velocity magnitude in the field (m/s). */
   maxVelocity: number;
@@ -118,7 +119,7 @@ function positiveFinite(value: unknown, field: string): number {
   return value;
 }
 
-function resolveInput(input: GrooveCellInput, defaultIterations: number): ResolvedCell {
+function resolveInput(input: GrooveCellInput, defaultIterations: number, defaultCellsPerPitch: number): ResolvedCell {
   const pitch = positiveFinite(input.pitch, 'pitch');
   const width = positiveFinite(input.grooveWidth, 'grooveWidth');
   const depth = positiveFinite(input.grooveDepth, 'grooveDepth');
@@ -133,7 +134,7 @@ function resolveInput(input: GrooveCellInput, defaultIterations: number): Resolv
   }
   const waterViscosity = input.waterViscosity === undefined ? 1 : positiveFinite(input.waterViscosity, 'waterViscosity');
   const height = Math.max(2 * pitch, input.domainHeight === undefined ? 4 * pitch : positiveFinite(input.domainHeight, 'domainHeight'));
-  const cellsPerPitch = input.cellsPerPitch === undefined ? 48 : Math.round(positiveFinite(input.cellsPerPitch, 'cellsPerPitch'));
+  const cellsPerPitch = input.cellsPerPitch === undefined ? defaultCellsPerPitch : Math.round(positiveFinite(input.cellsPerPitch, 'cellsPerPitch'));
   if (cellsPerPitch < 8) throw new CellInputError('cellsPerPitch', 'must be ≥ 8');
   const maxCells = input.maxCells === undefined ? 2e6 : positiveFinite(input.maxCells, 'maxCells');
   const maxIterations = input.maxIterations === undefined ? defaultIterations : Math.round(positiveFinite(input.maxIterations, 'maxIterations'));
@@ -264,7 +265,7 @@ function buildMesh(cell: ResolvedCell, includeGroove: boolean, depth: number): C
  * groove cells, i.e. exactly the natural (zero-stress) condition on the mouth.
  */
 export function solveLongitudinalCell(input: GrooveCellInput): GrooveCellResult {
-  const cell = resolveInput(input, 200);
+  const cell = resolveInput(input, 200, 48);
   return withExtrapolation(cell, solveLongitudinalOnGrid);
 }
 
@@ -360,33 +361,47 @@ function solveLongitudinalOnGrid(cell: ResolvedCell): GrooveCellResult {
   for (let j = 0; j < j0 && !shearFree; j++) {
     for (let i = mesh.grooveFirst; i <= mesh.grooveLast; i++) lubricantFlux += u[j * nx + i] * mesh.widths[i] * mesh.heights[j];
   }
-  return summarise('longitudinal', cell, mesh, positions, velocity, interfaceShear, waterGradient, {
+  const weights = mesh.widths.slice(mesh.grooveFirst, mesh.grooveLast + 1);
+  return summarise('longitudinal', cell, positions, velocity, interfaceShear, waterGradient, weights, {
     slipLength,
     lubricantFlux,
     maxVelocity,
+    nx,
+    ny,
     unknowns: solution.unknowns,
     iterations: solution.iterations,
     residual: solution.residual,
   });
 }
 
+interface SummaryFigures {
+  slipLength: number;
+  lubricantFlux: number;
+  maxVelocity: number;
+  nx: number;
+  ny: number;
+  unknowns: number;
+  iterations: number;
+  residual: number;
+}
+
 /** Width-weighted means over the mouth and the local-slip figures common to both directions. */
 function summarise(
   direction: 'longitudinal' | 'transverse',
   cell: ResolvedCell,
-  mesh: CellMesh,
   positions: Float64Array,
   velocity: Float64Array,
   interfaceShear: Float64Array,
   waterGradient: Float64Array,
-  figures: { slipLength: number; lubricantFlux: number; maxVelocity: number; unknowns: number; iterations: number; residual: number },
+  weights: Float64Array,
+  figures: SummaryFigures,
 ): GrooveCellResult {
   let meanVelocity = 0;
   let meanShear = 0;
   let meanGradient = 0;
   let total = 0;
   for (let q = 0; q < positions.length; q++) {
-    const dz = mesh.widths[mesh.grooveFirst + q];
+    const dz = weights[q];
     meanVelocity += velocity[q] * dz;
     meanShear += interfaceShear[q] * dz;
     meanGradient += waterGradient[q] * dz;
@@ -395,10 +410,11 @@ function summarise(
   meanVelocity /= total;
   meanShear /= total;
   meanGradient /= total;
-  // The mesh is mirror-symmetric, so the groove centre z = 0 is a face between the two middle samples.
-  const mid = positions.length / 2;
-  const centreVelocity = 0.5 * (velocity[mid - 1] + velocity[mid]);
-  const centreGradient = 0.5 * (waterGradient[mid - 1] + waterGradient[mid]);
+  // The mesh is mirror-symmetric: the groove centre z = 0 is either a sample (odd count) or midway between two.
+  const count = positions.length;
+  const mid = Math.floor(count / 2);
+  const centreVelocity = count % 2 === 1 ? velocity[mid] : 0.5 * (velocity[mid - 1] + velocity[mid]);
+  const centreGradient = count % 2 === 1 ? waterGradient[mid] : 0.5 * (waterGradient[mid - 1] + waterGradient[mid]);
   const finiteRatio = (a: number, b: number): number | null => {
     if (cell.ratio === 0 || b === 0) return null;
     const r = a / b;
@@ -419,15 +435,118 @@ function summarise(
     meanLocalSlip: finiteRatio(meanVelocity, meanGradient),
     lubricantFlux: figures.lubricantFlux,
     maxVelocity: figures.maxVelocity,
-    grid: { nx: mesh.widths.length, ny: mesh.heights.length, unknowns: figures.unknowns, domainHeight: cell.height },
+    grid: { nx: figures.nx, ny: figures.ny, unknowns: figures.unknowns, domainHeight: cell.height },
     iterations: figures.iterations,
     residual: figures.residual,
     converged: true,
   };
 }
 
-/** Transverse groove cell (2-D Stokes). Same error contract as solveLongitudinalCell. */
+/**
+ * Transverse groove cell (2-D Stokes). Same error contract as solveLongitudinalCell.
+ *
+ * Method: staggered (MAC) finite volumes on the same edge-graded mesh, the
+ * Stokes system solved by the Uzawa / pressure-Schur-complement conjugate
+ * gradient method (see ./stokes-cell.ts). The interface y = 0 is flat and
+ * impermeable (v = 0 on every face of that line); the tangential velocity u and
+ * the stress μ ∂u/∂y are continuous across the mouth through the harmonic face
+ * viscosity, as in the longitudinal problem; N = 0 removes the cavity and leaves
+ * a zero-stress mouth. No slip on the ridge top, the groove walls and floor;
+ * periodic in the flow direction; μ_w ∂u/∂y = τ and v = 0 at y = H.
+ */
 export function solveTransverseCell(input: GrooveCellInput): GrooveCellResult {
-  void input;
-  throw new Error('solveTransverseCell: not implemented yet');
+  const cell = resolveInput(input, 400, 32);
+  return withExtrapolation(cell, solveTransverseOnGrid);
+}
+
+function solveTransverseOnGrid(cell: ResolvedCell): GrooveCellResult {
+  const shearFree = cell.ratio === 0;
+  const mesh = buildMesh(cell, true, shearFree ? cell.pitch / cell.cellsPerPitch / 4 : cell.depth);
+  const flow = solveStokesCell({
+    widths: mesh.widths,
+    heights: mesh.heights,
+    interfaceRow: mesh.interfaceRow,
+    grooveFirst: mesh.grooveFirst,
+    grooveLast: mesh.grooveLast,
+    waterViscosity: cell.waterViscosity,
+    lubricantViscosity: cell.ratio * cell.waterViscosity,
+    topShear: cell.shear,
+    tolerance: cell.tolerance,
+    maxIterations: cell.maxIterations,
+  });
+  if (!flow.converged) throw new SolverDivergence('transverse groove cell (Stokes) did not converge', flow.iterations, flow.residual);
+  const nx = mesh.widths.length;
+  const ny = mesh.heights.length;
+  const { u, v } = flow;
+  const muW = cell.waterViscosity;
+  const muO = cell.ratio * muW;
+  const hTop = mesh.heights[ny - 1];
+  // u-nodes sit on the west face of each column; their control widths are the mean of the two columns.
+  const faceX = new Float64Array(nx);
+  const faceWidth = new Float64Array(nx);
+  for (let i = 0; i < nx; i++) {
+    faceX[i] = mesh.columnCentres[i] - mesh.widths[i] / 2;
+    faceWidth[i] = 0.5 * (mesh.widths[i] + mesh.widths[(i + nx - 1) % nx]);
+  }
+  let topMean = 0;
+  let maxVelocity = 0;
+  for (let i = 0; i < nx; i++) {
+    const top = u[(ny - 1) * nx + i] + (cell.shear / muW) * (hTop / 2);
+    topMean += top * faceWidth[i];
+    maxVelocity = Math.max(maxVelocity, Math.abs(top));
+  }
+  topMean /= cell.pitch;
+  for (let c = 0; c < u.length; c++) maxVelocity = Math.max(maxVelocity, Math.abs(u[c]));
+  for (let c = 0; c < v.length; c++) maxVelocity = Math.max(maxVelocity, Math.abs(v[c]));
+  const slipLength = (topMean * muW) / cell.shear - cell.height;
+
+  // Interface samples: u-faces strictly inside the mouth (the two wall faces carry u = 0).
+  const first = mesh.grooveFirst + 1;
+  const last = mesh.grooveLast;
+  const m = last - first + 1;
+  const positions = new Float64Array(m);
+  const velocity = new Float64Array(m);
+  const interfaceShear = new Float64Array(m);
+  const waterGradient = new Float64Array(m);
+  const weights = new Float64Array(m);
+  const j0 = mesh.interfaceRow;
+  const hw = mesh.heights[j0];
+  for (let q = 0; q < m; q++) {
+    const i = first + q;
+    positions[q] = faceX[i];
+    weights[q] = faceWidth[i];
+    const ua = u[j0 * nx + i];
+    if (shearFree) {
+      velocity[q] = ua;
+    } else {
+      const hb = mesh.heights[j0 - 1];
+      const ub = u[(j0 - 1) * nx + i];
+      const ga = muW / (hw / 2);
+      const gb = muO / (hb / 2);
+      velocity[q] = (ga * ua + gb * ub) / (ga + gb);
+      interfaceShear[q] = (ua - ub) / (hw / (2 * muW) + hb / (2 * muO));
+      waterGradient[q] = interfaceShear[q] / muW;
+    }
+  }
+  // Recirculating flux: largest |ψ| in the cavity, ψ(x, y) = ∫_{−d}^{y} u dy' along each u-face.
+  let lubricantFlux = 0;
+  if (!shearFree) {
+    for (let i = first; i <= last; i++) {
+      let psi = 0;
+      for (let j = 0; j < j0; j++) {
+        psi += u[j * nx + i] * mesh.heights[j];
+        lubricantFlux = Math.max(lubricantFlux, Math.abs(psi));
+      }
+    }
+  }
+  return summarise('transverse', cell, positions, velocity, interfaceShear, waterGradient, weights, {
+    slipLength,
+    lubricantFlux,
+    maxVelocity,
+    nx,
+    ny,
+    unknowns: flow.unknowns,
+    iterations: flow.iterations,
+    residual: flow.residual,
+  });
 }
