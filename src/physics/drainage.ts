@@ -133,7 +133,7 @@ export interface DrainageInput {
   initialFill: number;
   /** s (> 0). */
   duration: number;
-  /** Cells per segment (default chosen so the whole groove has about 240). */
+  /** Cells per segment (default chosen so the whole groove has about 120, at least 30 per segment). */
   cellsPerSegment?: number;
   /** Points in the returned timeline (default 150, at most 200). */
   timelinePoints?: number;
@@ -196,7 +196,6 @@ export function capillaryPressureCurve(
   const fills: number[] = [];
   const pressures: number[] = [];
   for (let k = points; k >= 0; k--) {
-    // Dense near zero sag where the curve is steep in f.
     const u = k / points;
     const s = sagMin + (sagMax - sagMin) * u;
     const fill = 1 - (Math.sign(s) * segmentArea(width, s)) / (width * depth);
@@ -210,6 +209,60 @@ export function capillaryPressureCurve(
     fullBulgeFill: fills[fills.length - 1],
     suction: -pressures[0],
   };
+}
+
+/**
+ * Steady lubricant column of the finite-volume model, by quadrature [derived]:
+ * zero net flux everywhere means dp/dx = G(h) + b with G(h) = τ_i Q̂_s(h)/Q̂_p(h) at the
+ * local equivalent depth h = f d, so walking upstream from the end meniscus (sag s_end:
+ * 0 at an open end, the spill bulge at a closed one) to the receding front (largest sag),
+ *   L = ∫ γ κ'(s) ds/|G(h(s)) + b|,   V/(w d) = ∫ f(s) γ κ'(s) ds/|G(h(s)) + b|,
+ * with κ(s) = 8s/(w² + 4s²). The column is cut at `maxLength` (the segment).
+ * @returns filled length (m) and equivalent full-section length V/(w d) (m).
+ */
+export function steadyColumn(input: {
+  grooveWidth: number;
+  grooveDepth: number;
+  interfacialTension: number;
+  interfacialShearStress: number;
+  bodyForceGradient: number;
+  recedingCurvature: number;
+  /** Curvature of the end meniscus, 1/m: 0 (open end) or the spill curvature (closed end, bulging). */
+  endCurvature: number;
+  maxLength: number;
+}): { length: number; equivalentLength: number; truncated: boolean } {
+  const { grooveWidth: w, grooveDepth: d, interfacialTension: gamma, interfacialShearStress: tau, bodyForceGradient: body } = input;
+  const sagFront = Math.min(sagForCurvature(w, Math.min(input.recedingCurvature, 2 / w)), d);
+  const sagEnd = -sagForCurvature(w, Math.min(input.endCurvature, 2 / w));
+  const slope = (s: number): number => (8 * (w * w - 4 * s * s)) / (w * w + 4 * s * s) ** 2;
+  const fillAt = (s: number): number => 1 - (Math.sign(s) * segmentArea(w, s)) / (w * d);
+  const integrand = (s: number): { dx: number; dv: number } => {
+    const f = fillAt(s);
+    const h = Math.max(f, 1e-6) * d;
+    const drive = Math.abs((tau * shearDrivenGrooveFlux(w, h)) / pressureDrivenGrooveFlux(w, h) + body);
+    const dx = drive > 0 ? (gamma * slope(s)) / drive : Number.MAX_VALUE;
+    return { dx, dv: f * dx };
+  };
+  const intervals = 400;
+  const step = (sagFront - sagEnd) / intervals;
+  let length = 0;
+  let volume = 0;
+  let left = integrand(sagEnd);
+  for (let k = 0; k < intervals; k++) {
+    const mid = integrand(sagEnd + (k + 0.5) * step);
+    const right = integrand(sagEnd + (k + 1) * step);
+    // Simpson's rule on each sub-interval.
+    const dLength = (step / 6) * (left.dx + 4 * mid.dx + right.dx);
+    const dVolume = (step / 6) * (left.dv + 4 * mid.dv + right.dv);
+    if (length + dLength >= input.maxLength) {
+      const share = (input.maxLength - length) / dLength;
+      return { length: input.maxLength, equivalentLength: volume + share * dVolume, truncated: true };
+    }
+    length += dLength;
+    volume += dVolume;
+    left = right;
+  }
+  return { length, equivalentLength: volume, truncated: false };
 }
 
 function smoothAvailability(fill: number, threshold: number): number {
@@ -257,7 +310,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
     throw new DomainError('shear, body force and spill curvature must be finite', { field: 'interfacialShearStress' });
   }
 
-  const perSegment = input.cellsPerSegment ?? Math.max(40, Math.min(400, Math.round(240 / segments)));
+  const perSegment = input.cellsPerSegment ?? Math.max(30, Math.min(200, Math.round(120 / segments)));
   const n = perSegment * segments;
   const dx = segmentLength / perSegment;
   const { curve, frontFill, fullBulgeFill, suction } = capillaryPressureCurve(w, d, gamma, recedingCurvature);

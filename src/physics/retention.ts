@@ -62,7 +62,7 @@ import { DomainError, Notes, outcome, STANDARD_GRAVITY, type Outcome, type Refer
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux, GROOVE_DUCT_REFERENCES } from './groove-duct.js';
 import type { Scenario } from './scenario.js';
 import type { AnglesUnderWorkingFluid, WettingState } from './wetting.js';
-import { DRAINAGE_REFERENCES, lumpedRetainedLength, lumpedDrainageTime, solveDrainage, type TimelinePoint } from './drainage.js';
+import { DRAINAGE_REFERENCES, lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
 
 export const RETENTION_REFERENCES = {
   wexler2015: DRAINAGE_REFERENCES.wexler2015,
@@ -233,6 +233,11 @@ export interface RetentionResult {
       retainedLength: number;
       /** With gravity added to the drive, m. */
       retainedLengthWithGravity: number;
+      /**
+       * Steady column of the drainage model with the meniscus sag (shear, gravity and end
+       * meniscus included; cut at the segment length): filled length and volume/(w d), m.
+       */
+      steadyColumn: { length: number; equivalentLength: number } | null;
     };
     contactLinePinning: {
       pinningPressure: number;
@@ -261,10 +266,13 @@ export interface RetentionResult {
   };
   bindingMechanism: RetentionMechanism;
   dominantDrive: 'shear' | 'gravity';
-  /** Steady retained length per segment, m. */
+  /** Steady retained length per segment of the binding mechanism's closed form, m (full-section). */
   retainedLength: number;
   criticalPlugLength: number;
-  /** Steady retained fraction of the groove volume. */
+  /**
+   * Steady retained share of the groove volume: from the sag-corrected steady column when
+   * capillary back-pressure binds (what the timeline tends to), else binding length/segment.
+   */
   retainedFraction: number;
   verdict: { retained: boolean; margin: number };
   segmentLength: number;
@@ -277,7 +285,7 @@ export interface RetentionResult {
   conservationError: number | null;
   dissolutionLifetime: number | null;
   recommendations: {
-    /** Longest barrier spacing that keeps the target fill, m. */
+    /** Longest barrier spacing that keeps the target fill at steady state, m. */
     maxSegmentLength: number;
     targetFill: number;
     /** d ln L/d ln w and d ln L/d ln d of the binding retained length. */
@@ -428,7 +436,25 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     retainedLength = holds.pinning;
   }
   const dominantDrive: 'shear' | 'gravity' = Math.abs(body) > Math.abs(holds.gradient) ? 'gravity' : 'shear';
-  const retainedFraction = Math.min(initialFill, retainedLength / segmentLength);
+
+  // Sag-corrected steady column of the drainage model (the timeline's end state), for the retained volume.
+  const spillCurvature = (2 * Math.sin(Math.min(90, angles.advancing) * DEG)) / w;
+  const endCurvature = input.grooveEnds === 'closed' || segments > 1 ? spillCurvature : 0;
+  const columnFor = (maxLength: number) =>
+    steadyColumn({
+      grooveWidth: w,
+      grooveDepth: d,
+      interfacialTension: gamma,
+      interfacialShearStress: tau,
+      bodyForceGradient: body,
+      recedingCurvature: curvature.curvature,
+      endCurvature,
+      maxLength,
+    });
+  const column = curvature.curvature > 0 ? columnFor(segmentLength) : null;
+  const capillaryBinds = binding === 'capillary-back-pressure';
+  const retainedFraction =
+    capillaryBinds && column ? Math.min(initialFill, column.equivalentLength / segmentLength) : Math.min(initialFill, retainedLength / segmentLength);
 
   // Dissolution lifetime.
   const dissolution = dissolutionLifetime(input, scenario, notes, segmentLength * segments);
@@ -461,7 +487,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       lubricantViscosity: mu,
       bodyForceGradient: body,
       recedingCurvature: curvature.curvature,
-      spillCurvature: (2 * Math.sin(Math.min(90, angles.advancing) * DEG)) / w,
+      spillCurvature,
       initialFill,
       duration: input.duration,
     });
@@ -490,7 +516,20 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   }
 
   // Recommendations: barrier spacing and geometry direction.
-  const maxSegmentLength = retainedLength / targetFill;
+  let maxSegmentLength = retainedLength / targetFill;
+  if (capillaryBinds && column) {
+    // Longest segment whose steady column keeps the target share of its volume: the share falls with the length.
+    const share = (length: number): number => Math.min(1, columnFor(length).equivalentLength / length);
+    let lo = 0;
+    let hi = Math.max(retainedLength / targetFill, 1e-12);
+    while (share(hi) >= targetFill && hi < lengthCap) hi *= 2;
+    for (let k = 0; k < 60 && hi - lo > 1e-9 * hi; k++) {
+      const mid = 0.5 * (lo + hi);
+      if (share(mid) >= targetFill) lo = mid;
+      else hi = mid;
+    }
+    maxSegmentLength = lo;
+  }
   const bindingLength = (ww: number, dd: number): number => {
     const h = holdLengths(ww, dd, gamma, tau, body, angles, shapeFactor, lengthCap);
     return Math.max(h.capillary, h.pinning);
@@ -533,6 +572,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
           backPressureGradient: holds.gradient,
           retainedLength: shearOnly.capillary,
           retainedLengthWithGravity: holds.capillary,
+          steadyColumn: column ? { length: column.length, equivalentLength: column.equivalentLength } : null,
         },
         contactLinePinning: {
           pinningPressure: holds.pin,

@@ -227,7 +227,12 @@ describe('recommendations and bad input', () => {
     const long = evaluateRetention(exampleInput({ grooveLength: 0.1, duration: 10 })).result;
     expect(long.verdict.retained).toBe(false);
     const spacing = long.recommendations.maxSegmentLength;
-    expect(spacing).toBeCloseTo(long.retainedLength / 0.9, 12);
+    // The steady column of one open segment keeps just 90 % at that length (bisection target).
+    const share = (length: number) => evaluateRetention(exampleInput({ grooveLength: length, duration: 1 })).result.retainedFraction;
+    expect(share(spacing * 0.99)).toBeGreaterThanOrEqual(0.9);
+    expect(share(spacing * 1.01)).toBeLessThan(0.9);
+    // Below the full-section estimate L∞/0.9 because the sagging meniscus holds less per length.
+    expect(spacing).toBeLessThan(long.retainedLength / 0.9);
     const cut = evaluateRetention(exampleInput({ grooveLength: 0.1, segmentLength: spacing * 0.999, duration: 10 })).result;
     expect(cut.retainedFraction).toBeGreaterThanOrEqual(0.9);
     expect(cut.verdict.retained).toBe(true);
