@@ -42,6 +42,17 @@
  *    D = 7.4×10⁻⁸ (φ M_w)^½ T/(μ_w V_b^0.6) cm²/s (μ_w in cP, V_b the molar volume
  *    at the normal boiling point in cm³/mol, φ = 2.6 for water).
  *
+ * Steady retained share and timeline. When capillary back-pressure binds, the
+ * retained volume is that of the drainage model's steady column (drainage.ts,
+ * steadyColumn: the sagging meniscus thins the layer, so the column is shorter
+ * and holds less than the full-section L∞ w d), with the end meniscus flat at an
+ * open end and at the spill bulge at a closed end or barrier; the timeline is the
+ * finite-volume solution. When pinning binds, a plug longer than L_c slides out
+ * of the segment until it has the length L_c: the lumped equation of drainage.ts
+ * with L∞ → L_c gives the timeline (plug break-up into several plugs, which can
+ * keep more, is not modelled). Verdict: retained when the steady share reaches
+ * the target fill; margin = share/target − 1.
+ *
  * Validity and cautions: Stokes flow in the groove; hysteresis measured on flat
  * samples may differ from that inside the grooves; near L∞ the real creep is
  * slower than the continuum model (thermally activated depinning, ref. 8); a
@@ -61,7 +72,7 @@
 import { DomainError, Notes, outcome, STANDARD_GRAVITY, type Outcome, type Reference } from './common.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux, GROOVE_DUCT_REFERENCES } from './groove-duct.js';
 import type { Scenario } from './scenario.js';
-import type { AnglesUnderWorkingFluid, WettingState } from './wetting.js';
+import type { AnglesUnderWorkingFluid, ContactAngles, WettingState } from './wetting.js';
 import { DRAINAGE_REFERENCES, lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
 
 export const RETENTION_REFERENCES = {
@@ -196,7 +207,8 @@ export interface Solubility {
 
 export interface RetentionInput {
   scenario: Scenario;
-  contactAngles: { underWorkingFluid?: AnglesUnderWorkingFluid };
+  /** Only the angles under the working fluid are used (hysteresis). */
+  contactAngles: ContactAngles;
   /** Total groove length, m. */
   grooveLength?: number;
   /** Barrier spacing, m (grooves cut into segments). */
