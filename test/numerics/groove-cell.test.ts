@@ -50,7 +50,7 @@ describe('general cell diffusion solver', () => {
     [0.5, 15.548],
     [0.25, 18.233],
     [0.125, 20.585],
-  ])('rectangular duct aspect %f: f·Re (Richardson, 40 and 80 cells on the short side) within 0.01 %% of the exact series and of Shah & London', (alpha, table) => {
+  ])('rectangular duct aspect %f: f·Re (Richardson, 40 and 80 cells on the short side) within 0.01 percent of the exact series and of Shah & London', (alpha, table) => {
     const coarse = solveDuct(1, alpha, Math.round(40 / alpha), 40).fRe;
     const fine = solveDuct(1, alpha, Math.round(80 / alpha), 80).fRe;
     const fRe = (4 * fine - coarse) / 3;
@@ -141,7 +141,7 @@ describe('general cell diffusion solver', () => {
 });
 
 describe('longitudinal groove cell', () => {
-  it.each([0.5, 0.75, 0.9])('N = 0, φ = %f: b_∥ within 0.2 %% of Philip (1972) at the default grid', (fraction) => {
+  it.each([0.5, 0.75, 0.9])('N = 0, φ = %f: b_∥ within 0.2 percent of Philip (1972) at the default grid', (fraction) => {
     const r = solveLongitudinalCell({ pitch: 1e-4, grooveWidth: fraction * 1e-4, grooveDepth: 1e-4, viscosityRatio: 0 });
     expect(r.converged).toBe(true);
     expect(Math.abs(r.slipLength / philipLongitudinal(1e-4, fraction) - 1)).toBeLessThan(2e-3);
@@ -149,7 +149,7 @@ describe('longitudinal groove cell', () => {
     expect(r.meanLocalSlip).toBeNull();
   });
 
-  it.each([0.1, 0.25])('N = 0, φ = %f: b_∥ within 0.2 %% of Philip (1972) with cellsPerPitch = 64 (default grid: 0.2–0.3 %%)', (fraction) => {
+  it.each([0.1, 0.25])('N = 0, φ = %f: b_∥ within 0.2 percent of Philip (1972) with cellsPerPitch = 64 (default grid: 0.2–0.3 percent)', (fraction) => {
     const r = solveLongitudinalCell({ pitch: 1, grooveWidth: fraction, grooveDepth: 1, viscosityRatio: 0, cellsPerPitch: 64 });
     expect(Math.abs(r.slipLength / philipLongitudinal(1, fraction) - 1)).toBeLessThan(2e-3);
   });
