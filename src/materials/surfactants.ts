@@ -66,8 +66,7 @@ export const SURFACTANT_REFERENCES = {
   landel2020: {
     key: 'landel2020',
     citation:
-      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020) A theory for the slip and drag of superhydrophobic surfaces with surfactant. Journal of Fluid Mechanics 883, A18 (arXiv:1904.01194).',
-    doi: '10.1017/jfm.2019.857',
+      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020) A theory for the slip and drag of superhydrophobic surfaces with surfactant. Journal of Fluid Mechanics 883, A18 (arXiv:1904.01194; DOI 10.1017/jfm.2019.857 from memory).',
   },
   mukerjee1971: {
     key: 'mukerjee1971',
@@ -76,8 +75,7 @@ export const SURFACTANT_REFERENCES = {
   },
   rosen2012: {
     key: 'rosen2012',
-    citation: 'Rosen, M. J. & Kunjappu, J. T. (2012) Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
-    doi: '10.1002/9781118228920',
+    citation: 'Rosen, M. J. & Kunjappu, J. T. (2012) Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
   },
 } satisfies Record<string, Reference>;
 

@@ -28,7 +28,7 @@
  *    exponentially fitted (Scharfetter–Gummel / Il'in) flux, exact for
  *    constant coefficients and stable at any cell Péclet number
  *    (Scharfetter & Gummel 1969, IEEE Trans. Electron Devices 16, 64–77,
- *    doi:10.1109/T-ED.1969.16566). The linear problem (linearised about the
+ *    doi:10.1109/T-ED.1969.16566, DOI from memory). The linear problem (linearised about the
  *    uniform equilibrium Γ_eq) is solved first; the full nonlinear problem
  *    then by Newton's method (dense, difference Jacobian), with continuation
  *    in the Marangoni number when the direct Newton fails, so stagnant caps

@@ -29,7 +29,7 @@
  * References:
  * [1] Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. &
  *     Luzzatto-Fegiz, P. (2020) J. Fluid Mech. 883, A18, arXiv:1904.01194.
- * [2] Philip, J. R. (1972) Z. Angew. Math. Phys. 23, 353–372, doi:10.1007/BF01595477.
+ * [2] Philip, J. R. (1972) Z. Angew. Math. Phys. 23, 353–372, doi:10.1007/BF01595477 (DOI from memory).
  * [3] Peaudecerf, F. J., Landel, J. R., Goldstein, R. E. & Luzzatto-Fegiz, P. (2017) Traces of
  *     surfactants can severely limit the drag reduction of superhydrophobic surfaces.
  *     Proc. Natl Acad. Sci. USA 114, 7254–7259, doi:10.1073/pnas.1702469114.
@@ -52,8 +52,7 @@ export const SURFACTANT_SLIP_REFERENCES = {
   landel2020: SURFACTANT_REFERENCES.landel2020,
   philip1972: {
     key: 'philip1972',
-    citation: 'Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. 23, 353–372.',
-    doi: '10.1007/BF01595477',
+    citation: 'Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. 23, 353–372 (DOI 10.1007/BF01595477 from memory).',
   },
   peaudecerf2017: {
     key: 'peaudecerf2017',
@@ -63,8 +62,7 @@ export const SURFACTANT_SLIP_REFERENCES = {
   },
   scharfetter1969: {
     key: 'scharfetter1969',
-    citation: 'Scharfetter, D. L. & Gummel, H. K. (1969) Large-signal analysis of a silicon Read diode oscillator. IEEE Trans. Electron Devices 16, 64–77.',
-    doi: '10.1109/T-ED.1969.16566',
+    citation: 'Scharfetter, D. L. & Gummel, H. K. (1969) Large-signal analysis of a silicon Read diode oscillator. IEEE Trans. Electron Devices 16, 64–77 (DOI 10.1109/T-ED.1969.16566 from memory).',
   },
 } satisfies Record<string, Reference>;
 
@@ -91,7 +89,7 @@ export interface SurfactantInput {
   cleanSlip: CleanSlip;
   /** Length of streamwise grooves, m (finite grooves); omit for grooves much longer than anything else. */
   grooveLength?: number;
-  /** What fills the grooves: lubricant (local drag from localSlipLengthMean) or gas (no drag). Default: lubricant. */
+  /** What fills the grooves: lubricant (local drag from localSlipLengthMean) or gas (no drag). Default: gas when the lubricant viscosity is below 5 % of the working fluid's, else lubricant. */
   underlying?: 'lubricant' | 'gas';
   /** Clean interfacial tension σ0, N/m (for the reported σ); default from the scenario. */
   cleanTension?: number;
@@ -213,7 +211,9 @@ function prepare(input: SurfactantInput, notes: Notes): Prepared {
     slipSf = p.slipLength;
     notes.model('landel2020-clean-short-period');
   }
-  const gas = input.underlying === 'gas';
+  // A lubricant far less viscous than the working fluid is a gas (plastron): no local drag (our threshold, 5 %).
+  const gas = input.underlying === 'gas' || (input.underlying === undefined && scenario.lubricant.viscosity < 0.05 * mu);
+  if (gas && input.underlying === undefined) notes.assume('lubricant viscosity below 5 % of the working fluid: treated as gas (shear-free gap)');
   const localSlip = gas ? undefined : cleanSlip.localSlipLengthMean;
   let factor = slipSf > 0 ? cleanSlip.slipLengthTransverse / slipSf : 1;
   if (factor > 1) {

@@ -103,6 +103,12 @@ describe('evaluateSurfactant', () => {
     const oil = evaluateSurfactant(input({ bulkConcentration: 1e-3, underlying: 'lubricant', cleanSlip: lub })).result.slipRetained;
     expect(oil).toBeGreaterThan(gas);
   });
+  it('without the underlying flag, a lubricant < 5 % as viscous as water (air here) is treated as gas', () => {
+    const a = evaluateSurfactant(input({ bulkConcentration: 1e-3, underlying: undefined }));
+    const b = evaluateSurfactant(input({ bulkConcentration: 1e-3, underlying: 'gas' }));
+    expect(a.result.slipRetained).toBe(b.result.slipRetained);
+    expect(a.assumptions.some((t) => t.includes('treated as gas'))).toBe(true);
+  });
   it('channel flow: clean limit exact through the channel relation of Landel et al. (2020)', () => {
     const sc = scenario();
     sc.flow = { ...sc.flow, kind: 'channel', height: 400e-6 };
