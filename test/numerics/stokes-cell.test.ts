@@ -28,7 +28,7 @@ describe('transverse groove cell (2-D Stokes)', () => {
     const w = 0.5;
     const d = 0.02 * w;
     const N = 1000;
-    const r = solveTransverseCell({ pitch: 1, grooveWidth: w, grooveDepth: d, viscosityRatio: N, cellsPerPitch: 32 });
+    const r = solveTransverseCell({ pitch: 1, grooveWidth: w, grooveDepth: d, viscosityRatio: N, cellsPerPitch: 48 });
     expect(Math.abs((r.meanLocalSlip as number) / (d / (4 * N)) - 1)).toBeLessThan(1e-2);
     // Same profile u = U η(3η − 2), η = (y + d)/d, U = τ d/(4 μ_o): eddy flux max|ψ| = (4/27) U d = τ d²/(27 μ_o) [derived].
     expect(Math.abs(r.lubricantFlux / ((d * d) / (27 * N)) - 1)).toBeLessThan(3e-2);
@@ -51,7 +51,7 @@ describe('transverse groove cell (2-D Stokes)', () => {
     }
   });
 
-  it('b_⊥/b_∥ → 1/2 as N → 0 (Philip limit) and stays below 1/2 for finite N (the recirculating cavity has the lower local slip , shallow limits d/(4N) against d/N, both tested)', () => {
+  it('b_⊥/b_∥ → 1/2 as N → 0 (Philip limit) and stays below 1/2 for finite N (the recirculating cavity has the lower local slip; shallow limits d/(4N) against d/N, both tested)', () => {
     for (const N of [0.01, 1, 10]) {
       const base = { pitch: 1, grooveWidth: 0.5, grooveDepth: 0.5, viscosityRatio: N, cellsPerPitch: 24 };
       const ratio = solveTransverseCell(base).slipLength / solveLongitudinalCell(base).slipLength;
