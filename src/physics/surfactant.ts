@@ -401,7 +401,13 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
     if (!Number.isFinite(c) || c < 0) throw new DomainError('bulk concentration must be finite and ≥ 0 mol/m³', { field: 'bulkConcentration' });
   }
   const pr = prepare(input, notes);
-  if (input.method !== 'scaling') notes.cite(SURFACTANT_SLIP_REFERENCES.scharfetter1969);
+  if (input.method !== 'scaling') {
+    notes.cite(SURFACTANT_SLIP_REFERENCES.scharfetter1969);
+    notes.assume('interface solver: working fluid as a Stokes half-space over one texture period (flow height ≫ pitch)');
+    if (pr.halfHeight !== undefined && pr.halfHeight < 5 * pr.pitch) {
+      notes.warn('solver-confined-flow', 'flow half-height below 5 pitches: the half-space interface solver overstates the clean interface velocity', 'caution');
+    }
+  }
   const cos2 = Math.cos(pr.theta) ** 2;
   if (input.grooveLength === undefined && cos2 > 1e-12) {
     notes.warn(
