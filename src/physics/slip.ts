@@ -21,7 +21,6 @@ import {
 import {
   STRIPE_SLIP_REFERENCES,
   TENSOR_SLIP_REFERENCE,
-  TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT,
   belyaevVinogradovaSlipLengthLongitudinal,
   belyaevVinogradovaSlipLengthTransverse,
   grooveLocalSlipLengths,
@@ -184,21 +183,19 @@ export function closedFormErrorLongitudinal(interfaceFraction: number, localSlip
 
 /**
  * Error estimate of both closed forms for `auto`. Transverse: the
- * Asmolov–Vinogradova relation b_⊥[b_s] = ½ b_∥[2b_s] is exact for a given local
- * slip, so the stripe-formula part of the transverse error is the longitudinal
- * error at 2b_s,⊥; the shallow-groove transverse local slip adds an error that is
- * not in the map, so d/w above the shallow limit is never trusted to 1 %.
+ * Asmolov–Vinogradova relation b_⊥[b_s] = ½ b_∥[2b_s] is exact for a given uniform
+ * local slip, so the stripe-formula part of the transverse error is taken as the
+ * longitudinal error at 2b̄_s,⊥ (replaced by the measured value whenever the
+ * transverse field solver runs).
  */
 export function closedFormErrorEstimate(
   interfaceFraction: number,
   pitch: number,
   local: GrooveLocalSlip,
-  depthOverWidth: number,
-): { longitudinal: number; transverse: number; transverseLocalSlipVerified: boolean } {
+): { longitudinal: number; transverse: number } {
   return {
     longitudinal: closedFormErrorLongitudinal(interfaceFraction, local.longitudinalMean / pitch),
     transverse: closedFormErrorLongitudinal(interfaceFraction, (2 * local.transverseMean) / pitch),
-    transverseLocalSlipVerified: depthOverWidth <= TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT,
   };
 }
 
@@ -320,12 +317,10 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const local = grooveLocalSlipLengths(w, d, viscosityRatio);
   const closedLongitudinal = belyaevVinogradovaSlipLengthLongitudinal(P, w, local.longitudinalMean);
   const closedTransverse = belyaevVinogradovaSlipLengthTransverse(P, w, local.transverseMean);
-  const estimate = closedFormErrorEstimate(phi, P, local, d / w);
+  const estimate = closedFormErrorEstimate(phi, P, local);
 
   const wantField =
-    method === 'field' ||
-    (method === 'auto' &&
-      (Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT || !estimate.transverseLocalSlipVerified));
+    method === 'field' || (method === 'auto' && Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT);
   let field: FieldRun | undefined;
   if (wantField) {
     field = runFieldSolver({
@@ -382,14 +377,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   }
   if (!fieldLongitudinal || !fieldTransverse) {
     notes.assume(
-      'Closed form: uniform local slip equal to the mean lid-sheared-duct slip of the groove; Belyaev–Vinogradova stripe formula.',
-    );
-  }
-  if (!fieldTransverse && d / w > TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT) {
-    notes.warn(
-      'transverse-local-slip-shallow-model',
-      `The transverse local slip uses the shallow-groove recirculation d/(4N), which overestimates it for d/w = ${(d / w).toPrecision(3)} > ${TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT}; use method 'field' for a reliable transverse slip.`,
-      'caution',
+      'Closed form: uniform local slip equal to the mean lid velocity of the groove alone (lid-sheared duct series along the grooves, tabulated shear-driven cavity across them); Belyaev–Vinogradova stripe formula.',
     );
   }
   const reportedError = Math.max(

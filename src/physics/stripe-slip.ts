@@ -162,24 +162,73 @@ export interface GrooveLocalSlip {
 }
 
 /**
+ * Lid velocity of a rectangular cavity (width w, depth d) driven by a uniform
+ * shear stress τ on its flat, impermeable lid, as a length μu/(τw): columns d/w,
+ * mean over the lid, centre value. Produced by fixtures/slip/generate_cavity_lid.py
+ * (2-D Stokes, stream function–vorticity finite differences, three grids and
+ * Richardson extrapolation; estimated error ≤ 4e-5 w). Beyond d/w = 3 the values
+ * are converged to 1e-7 (the recirculation is confined to an eddy of depth ≈ w).
+ */
+const CAVITY_LID_TABLE: readonly (readonly [number, number, number])[] = [
+  [0.025, 0.006142377601374079, 0.0062500715258899915],
+  [0.05, 0.012069415817646329, 0.012500143051661689],
+  [0.1, 0.023277727767989614, 0.025000285638992523],
+  [0.15, 0.0336235885288915, 0.03750059279121763],
+  [0.2, 0.04310786355179907, 0.05000704093252199],
+  [0.25, 0.05173043962911413, 0.0624725621383073],
+  [0.3, 0.05949105060764842, 0.07466810628549328],
+  [0.4, 0.07242239313701922, 0.09678518004486751],
+  [0.5, 0.08193997287100353, 0.11406071457624105],
+  [0.6, 0.08831838215026101, 0.1259375829511336],
+  [0.7, 0.09216369361116739, 0.13319841886494477],
+  [0.8, 0.09424626224234005, 0.13717186232914247],
+  [1.0, 0.09571259598749327, 0.1400034953517739],
+  [1.25, 0.09596941170418825, 0.14050932077534437],
+  [1.5, 0.09598272624565257, 0.1405365135164417],
+  [2.0, 0.09598300296561771, 0.1405370575537348],
+  [3.0, 0.09598306079616191, 0.14053716744173303],
+];
+
+/**
+ * Cavity lid velocity as a length over w, μu/(τw), for the mean (column 1) or the
+ * centre (column 2), by 4-point Lagrange interpolation over the table with the
+ * exact shallow node (0, 0) — the values rise like (d/w)/4 and then saturate, a
+ * smooth function on the table spacing; constant beyond the table.
+ */
+function cavityLidVelocity(depthOverWidth: number, column: 1 | 2): number {
+  const last = CAVITY_LID_TABLE[CAVITY_LID_TABLE.length - 1];
+  if (depthOverWidth >= last[0]) return last[column];
+  const xs = [0, ...CAVITY_LID_TABLE.map((row) => row[0])];
+  const ys = [0, ...CAVITY_LID_TABLE.map((row) => row[column])];
+  let i = 1;
+  while (i < xs.length - 1 && xs[i] < depthOverWidth) i++;
+  const start = Math.min(Math.max(i - 2, 0), xs.length - 4);
+  let value = 0;
+  for (let j = start; j < start + 4; j++) {
+    let basis = 1;
+    for (let k = start; k < start + 4; k++) if (k !== j) basis *= (depthOverWidth - xs[k]) / (xs[j] - xs[k]);
+    value += basis * ys[j];
+  }
+  return value;
+}
+
+/**
  * Local slip lengths of a lubricant-filled rectangular groove, from the groove
  * alone: shear τ on its flat lid, no slip on side walls and floor, the working
- * liquid's shear transmitted unchanged (valid when the groove's lid shear is
- * close to uniform; Schönecker, Baier & Hardt 2014 [1] use the same local-slip
- * picture, with an aspect-ratio dependent slip).
+ * liquid's shear taken uniform over the mouth (Schönecker, Baier & Hardt 2014 [1]
+ * use the same local-slip picture and point out that the local slip is
+ * anisotropic). Local slip b_s = μ_w u_lid/τ = (lid velocity as a length)/N.
  *
- * Longitudinal [derived, src/physics/groove-duct.ts]: b_s = μ_w u_lid/τ, i.e.
+ * Longitudinal [derived, src/physics/groove-duct.ts]:
  *   mean   b̄_s = (w/N)(8/π³) Σ_odd tanh(nπd/w)/n³  (→ d/N shallow, 0.27137 w/N deep, w/(4N) at d/w = ½),
  *   centre b_c = (w/N)(4/π²) Σ_odd (−1)^((n−1)/2) tanh(nπd/w)/n²  (→ d/N shallow, 0.37123 w/N deep).
  *
- * Transverse [derived, lubrication]: across the groove the lubricant cannot leave
- * the cavity, so it recirculates with zero net flux. For a shallow groove the
- * profile u(y) = a y + c y² (y up from the floor) with u(0) = 0, μ_o u'(d) = τ and
- * ∫₀ᵈ u dy = 0 gives c = 3τ/(4μ_o d), a = −τ/(2μ_o), so u(d) = τd/(4μ_o) and
- *   b_s,⊥ = d/(4N), uniform across the mouth (mean = centre).
- * This is the shallow-groove limit (d ≲ 0.3 w); for deeper grooves the
- * recirculation is confined to an eddy of depth about w and the formula
- * overestimates — the caller warns and prefers the field solver there.
+ * Transverse: across the groove the lubricant cannot leave the cavity and
+ * recirculates with zero net flux. Shallow limit [derived, lubrication]: the profile
+ * u(y) = a y + c y² (y up from the floor) with u(0) = 0, μ_o u'(d) = τ and ∫₀ᵈ u dy = 0
+ * gives c = 3τ/(4μ_o d), a = −τ/(2μ_o), so u(d) = τd/(4μ_o): b_s,⊥ = d/(4N). For finite
+ * d/w the lid velocity of the shear-driven cavity is taken from the tabulated 2-D
+ * Stokes solution (CAVITY_LID_TABLE): deep limit mean 0.09598 w/N, centre 0.14054 w/N.
  *
  * @param grooveWidth w, m (> 0)
  * @param grooveDepth d, m (> 0)
@@ -189,17 +238,19 @@ export interface GrooveLocalSlip {
  */
 export function grooveLocalSlipLengths(grooveWidth: number, grooveDepth: number, viscosityRatio: number): GrooveLocalSlip {
   requirePositive(viscosityRatio, 'lubricant.viscosity', 'viscosity ratio');
-  const transverse = grooveDepth / (4 * viscosityRatio);
+  const depthOverWidth = grooveDepth / grooveWidth;
+  // Below the first table node the shallow limit d/4 with the table's first-node correction is exact to O((d/w)²).
+  const transverse = (column: 1 | 2) =>
+    depthOverWidth < CAVITY_LID_TABLE[0][0]
+      ? (grooveDepth / (4 * viscosityRatio)) * (1 - (1 - (4 * CAVITY_LID_TABLE[0][column]) / CAVITY_LID_TABLE[0][0]) * (depthOverWidth / CAVITY_LID_TABLE[0][0]))
+      : (grooveWidth * cavityLidVelocity(depthOverWidth, column)) / viscosityRatio;
   return {
     longitudinalMean: grooveLidVelocityMean(grooveWidth, grooveDepth) / viscosityRatio,
     longitudinalCentre: grooveLidVelocityCentre(grooveWidth, grooveDepth) / viscosityRatio,
-    transverseMean: transverse,
-    transverseCentre: transverse,
+    transverseMean: transverse(1),
+    transverseCentre: transverse(2),
   };
 }
-
-/** Depth-to-width ratio beyond which the shallow-groove transverse local slip is not trusted (common practice, no source). */
-export const TRANSVERSE_LOCAL_SLIP_SHALLOW_LIMIT = 0.3;
 
 /**
  * Mean interfacial shear over the wall shear for stripes with a uniform local
