@@ -5,8 +5,14 @@
  * drives the lubricant, slip in wall units and the drag change of the flow.
  * Pure function of a resolved SI {@link Scenario}; no HTTP, no logging.
  */
-import * as grooveCell from '../numerics/groove-cell.js';
-import type { GrooveCellInput, GrooveCellResult } from '../numerics/groove-cell.js';
+import {
+  CellInputError,
+  SolverDivergence,
+  solveLongitudinalCell,
+  solveTransverseCell,
+  type GrooveCellInput,
+  type GrooveCellResult,
+} from '../numerics/groove-cell.js';
 import { ConvergenceError, DomainError, Notes, outcome, type Outcome } from './common.js';
 import { GROOVE_DUCT_REFERENCES } from './groove-duct.js';
 import type { Scenario } from './scenario.js';
@@ -135,83 +141,123 @@ const PITCH_PLUS_LIMIT = 25;
 const TEXTURE_REYNOLDS_LIMIT = 1;
 
 /**
- * Measured relative error |b_closed − b_field|/b_field of the longitudinal closed
- * form (Belyaev–Vinogradova with the mean duct local slip b̄_s) against the
- * groove-cell field solver, from `npx tsx bench/slip-error-map.ts` (table in the
- * slip report). The error collapses onto the two parameters φ and b̄_s/P (rows for
- * d/w = 0.1 … 2 agree to within about 0.01), so the map keeps, for each φ, nodes
- * (b̄_s/P, error) at d/w = 1.
+ * Measured relative error |b_closed − b_field|/b_field of the closed forms
+ * (Belyaev–Vinogradova with the groove-alone mean local slip; transverse through
+ * Asmolov–Vinogradova with the cavity local slip) against the groove-cell field
+ * solver (default grid), from `npx tsx bench/slip-error-map.ts` (2026-12-02; table
+ * in the slip report). The closed form always reads low; the error grows from
+ * about 0.5 % at N = 0.01 to about 21 % at N ≥ 10 (the Belyaev–Vinogradova
+ * small-slip limit ln sec/ln(sec + tan) instead of φ).
  */
-const LONGITUDINAL_ERROR_MAP: { interfaceFraction: number; nodes: [number, number][] }[] = [
-  { interfaceFraction: 0.2, nodes: [[0.000541, 0.2183], [0.00541, 0.2076], [0.0541, 0.143], [0.541, 0.0526], [5.41, 0.0301]] },
-  { interfaceFraction: 0.5, nodes: [[0.00135, 0.2141], [0.0135, 0.2041], [0.135, 0.1409], [1.35, 0.0445], [13.5, 0.0188]] },
-  { interfaceFraction: 0.8, nodes: [[0.00216, 0.2032], [0.0216, 0.1949], [0.216, 0.1406], [2.16, 0.0452], [21.6, 0.0156]] },
-  { interfaceFraction: 0.95, nodes: [[0.00257, 0.1719], [0.0257, 0.1645], [0.257, 0.1174], [2.57, 0.0371], [25.7, 0.0108]] },
-];
+const ERROR_MAP = {
+  interfaceFractions: [0.2, 0.5, 0.8, 0.95],
+  depthRatios: [0.1, 0.5, 1.0, 2.0],
+  viscosityRatios: [0.01, 0.1, 1.0, 10.0, 100.0],
+  /** |relative error| of b_∥, indexed [φ][d/w][N]. */
+  longitudinal: [
+    [
+      [0.0129, 0.0752, 0.1786, 0.2103, 0.2143],
+      [0.0059, 0.0348, 0.1387, 0.2034, 0.2135],
+      [0.0055, 0.0318, 0.1334, 0.2022, 0.2134],
+      [0.0055, 0.0317, 0.1331, 0.2022, 0.2134],
+    ],
+    [
+      [0.0126, 0.0787, 0.1799, 0.2094, 0.2132],
+      [0.0049, 0.0362, 0.1418, 0.2031, 0.2125],
+      [0.0045, 0.0331, 0.1366, 0.2020, 0.2124],
+      [0.0045, 0.0330, 0.1364, 0.2020, 0.2123],
+    ],
+    [
+      [0.0154, 0.0881, 0.1776, 0.2003, 0.2031],
+      [0.0058, 0.0412, 0.1435, 0.1950, 0.2025],
+      [0.0053, 0.0375, 0.1384, 0.1940, 0.2024],
+      [0.0052, 0.0374, 0.1381, 0.1939, 0.2024],
+    ],
+    [
+      [0.0186, 0.0918, 0.1568, 0.1705, 0.1721],
+      [0.0055, 0.0378, 0.1220, 0.1650, 0.1715],
+      [0.0047, 0.0329, 0.1163, 0.1639, 0.1714],
+      [0.0046, 0.0327, 0.1160, 0.1639, 0.1714],
+    ],
+  ],
+  /** |relative error| of b_⊥, indexed [φ][d/w][N]. */
+  transverse: [
+    [
+      [0.0186, 0.1044, 0.1933, 0.2151, 0.2177],
+      [0.0047, 0.0446, 0.1564, 0.2108, 0.2185],
+      [0.0030, 0.0331, 0.1394, 0.2043, 0.2144],
+      [0.0029, 0.0325, 0.1389, 0.2043, 0.2144],
+    ],
+    [
+      [0.0208, 0.1094, 0.1942, 0.2143, 0.2167],
+      [0.0051, 0.0454, 0.1545, 0.2059, 0.2132],
+      [0.0035, 0.0348, 0.1409, 0.2030, 0.2125],
+      [0.0035, 0.0345, 0.1406, 0.2030, 0.2125],
+    ],
+    [
+      [0.0256, 0.1174, 0.1887, 0.2046, 0.2065],
+      [0.0062, 0.0494, 0.1520, 0.1965, 0.2027],
+      [0.0042, 0.0370, 0.1384, 0.1940, 0.2024],
+      [0.0041, 0.0367, 0.1382, 0.1940, 0.2024],
+    ],
+    [
+      [0.0309, 0.1163, 0.1645, 0.1744, 0.1756],
+      [0.0047, 0.0392, 0.1248, 0.1658, 0.1718],
+      [0.0016, 0.0223, 0.1088, 0.1629, 0.1713],
+      [0.0016, 0.0219, 0.1084, 0.1629, 0.1713],
+    ],
+  ],
+};
 
-/** Error at one φ row: piecewise linear in log10(b̄_s/P); clamped below; power-law decay above (exact as b̄_s → ∞). */
-function errorAlongRow(nodes: [number, number][], localSlipOverPitch: number): number {
-  const x = Math.log10(Math.max(localSlipOverPitch, 1e-300));
-  const first = nodes[0];
-  if (x <= Math.log10(first[0])) return first[1];
-  for (let i = 1; i < nodes.length; i++) {
-    const [x1, e1] = [Math.log10(nodes[i - 1][0]), nodes[i - 1][1]];
-    const [x2, e2] = [Math.log10(nodes[i][0]), nodes[i][1]];
-    if (x <= x2) return e1 + ((e2 - e1) * (x - x1)) / (x2 - x1);
-  }
-  const [xa, ea] = [Math.log10(nodes[nodes.length - 2][0]), Math.log10(nodes[nodes.length - 2][1])];
-  const [xb, eb] = [Math.log10(nodes[nodes.length - 1][0]), Math.log10(nodes[nodes.length - 1][1])];
-  return 10 ** (eb + ((eb - ea) / (xb - xa)) * (x - xb));
+/** Index of the interval of a sorted grid holding x (clamped) and the linear weight in it. */
+function bracketOf(grid: readonly number[], x: number): [number, number] {
+  if (x <= grid[0]) return [0, 0];
+  if (x >= grid[grid.length - 1]) return [grid.length - 2, 1];
+  let i = 0;
+  while (x > grid[i + 1]) i++;
+  return [i, (x - grid[i]) / (grid[i + 1] - grid[i])];
 }
 
 /**
- * Estimated relative error of the longitudinal closed form at interface fraction φ
- * and local slip b̄_s/P, interpolated linearly in φ between the rows of the
- * measured map (clamped outside 0.2 ≤ φ ≤ 0.95).
+ * Error along N at one (φ, d/w) node: linear in log N – log error between the
+ * measured N; clamped above N = 100 (the error saturates); below N = 0.01 the
+ * first log–log slope is continued (the error vanishes as N → 0, where both the
+ * closed form and the solver reduce to Philip's exact result).
  */
-export function closedFormErrorLongitudinal(interfaceFraction: number, localSlipOverPitch: number): number {
-  const rows = LONGITUDINAL_ERROR_MAP;
-  if (interfaceFraction <= rows[0].interfaceFraction) return errorAlongRow(rows[0].nodes, localSlipOverPitch);
-  for (let i = 1; i < rows.length; i++) {
-    if (interfaceFraction <= rows[i].interfaceFraction) {
-      const t = (interfaceFraction - rows[i - 1].interfaceFraction) / (rows[i].interfaceFraction - rows[i - 1].interfaceFraction);
-      return (1 - t) * errorAlongRow(rows[i - 1].nodes, localSlipOverPitch) + t * errorAlongRow(rows[i].nodes, localSlipOverPitch);
-    }
+function errorAlongViscosityRatio(errors: readonly number[], viscosityRatio: number): number {
+  const logN = ERROR_MAP.viscosityRatios.map(Math.log10);
+  const x = Math.log10(viscosityRatio);
+  const logE = errors.map((e) => Math.log10(Math.max(e, 1e-6)));
+  if (x >= logN[logN.length - 1]) return errors[errors.length - 1];
+  if (x <= logN[0]) {
+    const slope = Math.max((logE[1] - logE[0]) / (logN[1] - logN[0]), 0);
+    return 10 ** (logE[0] + slope * (x - logN[0]));
   }
-  return errorAlongRow(rows[rows.length - 1].nodes, localSlipOverPitch);
+  const [i, t] = bracketOf(logN, x);
+  return 10 ** ((1 - t) * logE[i] + t * logE[i + 1]);
 }
 
 /**
- * Error estimate of both closed forms for `auto`. Transverse: the
- * Asmolov–Vinogradova relation b_⊥[b_s] = ½ b_∥[2b_s] is exact for a given uniform
- * local slip, so the stripe-formula part of the transverse error is taken as the
- * longitudinal error at 2b̄_s,⊥ (replaced by the measured value whenever the
- * transverse field solver runs).
+ * Estimated relative error of the closed forms at interface fraction φ, depth
+ * ratio d/w and viscosity ratio N: the measured map, interpolated linearly in φ and
+ * log(d/w) (clamped to the measured ranges 0.2 ≤ φ ≤ 0.95, 0.1 ≤ d/w ≤ 2) and
+ * log–log in N.
  */
 export function closedFormErrorEstimate(
   interfaceFraction: number,
-  pitch: number,
-  local: GrooveLocalSlip,
+  depthOverWidth: number,
+  viscosityRatio: number,
 ): { longitudinal: number; transverse: number } {
-  return {
-    longitudinal: closedFormErrorLongitudinal(interfaceFraction, local.longitudinalMean / pitch),
-    transverse: closedFormErrorLongitudinal(interfaceFraction, (2 * local.transverseMean) / pitch),
+  const [i, s] = bracketOf(ERROR_MAP.interfaceFractions, interfaceFraction);
+  const [j, t] = bracketOf(ERROR_MAP.depthRatios.map(Math.log10), Math.log10(depthOverWidth));
+  const at = (table: readonly (readonly (readonly number[])[])[]) => {
+    const e = (a: number, b: number) => errorAlongViscosityRatio(table[a][b], viscosityRatio);
+    return (1 - s) * ((1 - t) * e(i, j) + t * e(i, j + 1)) + s * ((1 - t) * e(i + 1, j) + t * e(i + 1, j + 1));
   };
+  return { longitudinal: at(ERROR_MAP.longitudinal), transverse: at(ERROR_MAP.transverse) };
 }
 
 const AUTO_ERROR_LIMIT = 0.01;
-
-type CellSolver = (input: GrooveCellInput) => GrooveCellResult;
-
-/**
- * Field-method hook: the groove-cell solvers of src/numerics/groove-cell.ts, looked up
- * at run time so that a direction whose solver is not yet available falls back to the
- * closed form (with a warning) instead of failing.
- */
-function cellSolver(name: 'solveLongitudinalCell' | 'solveTransverseCell'): CellSolver | undefined {
-  const candidate = (grooveCell as unknown as Record<string, unknown>)[name];
-  return typeof candidate === 'function' ? (candidate as CellSolver) : undefined;
-}
 
 interface FieldRun {
   longitudinal?: GrooveCellResult;
@@ -220,22 +266,23 @@ interface FieldRun {
   wallTimeMs: number;
 }
 
+/**
+ * Both groove-cell solves (src/numerics/groove-cell.ts). Non-convergence maps to
+ * ConvergenceError, impossible geometry to DomainError; any other failure of one
+ * direction is recorded so that direction falls back to the closed form with a warning.
+ */
 function runFieldSolver(input: GrooveCellInput): FieldRun {
   const start = performance.now();
   const run: FieldRun = { failures: [], wallTimeMs: 0 };
   for (const direction of ['longitudinal', 'transverse'] as const) {
-    const solve = cellSolver(direction === 'longitudinal' ? 'solveLongitudinalCell' : 'solveTransverseCell');
-    if (!solve) {
-      run.failures.push(`${direction} solver not available`);
-      continue;
-    }
+    const solve = direction === 'longitudinal' ? solveLongitudinalCell : solveTransverseCell;
     try {
       run[direction] = solve(input);
     } catch (error) {
-      if (error instanceof grooveCell.SolverDivergence) {
+      if (error instanceof SolverDivergence) {
         throw new ConvergenceError(`groove-cell ${direction} solver did not converge`, error.iterations, error.residual, 'method');
       }
-      if (error instanceof grooveCell.CellInputError) throw new DomainError(error.message, { field: error.field });
+      if (error instanceof CellInputError) throw new DomainError(error.message, { field: error.field });
       run.failures.push(`${direction}: ${error instanceof Error ? error.message : String(error)}`);
     }
   }
@@ -317,7 +364,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const local = grooveLocalSlipLengths(w, d, viscosityRatio);
   const closedLongitudinal = belyaevVinogradovaSlipLengthLongitudinal(P, w, local.longitudinalMean);
   const closedTransverse = belyaevVinogradovaSlipLengthTransverse(P, w, local.transverseMean);
-  const estimate = closedFormErrorEstimate(phi, P, local);
+  const estimate = closedFormErrorEstimate(phi, d / w, viscosityRatio);
 
   const wantField =
     method === 'field' || (method === 'auto' && Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT);

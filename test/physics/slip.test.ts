@@ -254,3 +254,36 @@ describe('evaluateSlip', () => {
     }
   });
 });
+
+describe('evaluateSlip with the groove-cell field solver', () => {
+  const geometry: Texture = { pitch: 20e-6, grooveWidth: 10e-6, grooveDepth: 10e-6, flowAngle: 0 };
+  it('nearly shear-free lubricant (N = 1e-6): field slip within 0.3 % of Philip and of Philip/2 (Philip 1972; Lauga & Stone 2003)', () => {
+    const r = evaluateSlip({ scenario: scenario(geometry, 1.002e-9, laminarChannel), method: 'field' }).result;
+    expect(r.methodUsed).toBe('field');
+    const philip = philipSlipLengthLongitudinal(20e-6, 10e-6);
+    expect(Math.abs(r.slipLengthLongitudinal / philip - 1)).toBeLessThan(3e-3);
+    expect(Math.abs(r.slipLengthTransverse / (philip / 2) - 1)).toBeLessThan(3e-3);
+  });
+  it('viscous lubricant (N = 300): b_∥ → φ b̄_s and b_⊥ → φ b̄_s,⊥ (exact first-order small-slip limit: plane mean of the wall velocity)', () => {
+    const out = evaluateSlip({ scenario: scenario(geometry, 0.3006, laminarChannel), method: 'field' });
+    const r = out.result;
+    const local = grooveLocalSlipLengths(10e-6, 10e-6, 300);
+    expect(Math.abs(r.slipLengthLongitudinal / (0.5 * local.longitudinalMean) - 1)).toBeLessThan(0.01);
+    expect(Math.abs(r.slipLengthTransverse / (0.5 * local.transverseMean) - 1)).toBeLessThan(0.01);
+    // The closed form reads low here (Belyaev–Vinogradova small-slip limit ln sec/ln(sec + tan) < φ): measured, not estimated.
+    expect(r.closedFormError.source).toEqual({ longitudinal: 'measured', transverse: 'measured' });
+    expect(r.closedFormError.longitudinal).toBeGreaterThan(0.1);
+    expect(r.closedFormError.longitudinal).toBeLessThan(0.25);
+    expect(r.fieldSolverStats?.longitudinal?.unknowns).toBeGreaterThan(1000);
+    expect(r.interfacialShearRatioLongitudinal).toBeGreaterThan(0.9);
+    expect(r.interfacialShearRatioLongitudinal).toBeLessThanOrEqual(1.05);
+  });
+  it("'auto' keeps the closed form where the map says it is within 1 % and runs the solver elsewhere", () => {
+    const nearlyFree = evaluateSlip({ scenario: scenario(geometry, 1.002e-8, laminarChannel), method: 'auto' }).result;
+    expect(nearlyFree.methodUsed).toBe('closed-form');
+    expect(Math.max(nearlyFree.closedFormError.longitudinal, nearlyFree.closedFormError.transverse)).toBeLessThan(0.01);
+    const oil = evaluateSlip({ scenario: scenario(geometry, 1e-3, laminarChannel), method: 'auto' }).result;
+    expect(oil.methodUsed).toBe('field');
+  });
+});
+
