@@ -9,8 +9,7 @@
  * Run: npx tsx bench/slip-error-map.ts [cellsPerPitch]
  */
 import os from 'node:os';
-import * as grooveCell from '../src/numerics/groove-cell.js';
-import type { GrooveCellInput, GrooveCellResult } from '../src/numerics/groove-cell.js';
+import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/numerics/groove-cell.js';
 import {
   belyaevVinogradovaSlipLengthLongitudinal,
   belyaevVinogradovaSlipLengthTransverse,
@@ -18,13 +17,8 @@ import {
 } from '../src/physics/stripe-slip.js';
 
 type Solver = (input: GrooveCellInput) => GrooveCellResult;
-const lookup = (name: string): Solver | undefined => {
-  const f = (grooveCell as unknown as Record<string, unknown>)[name];
-  return typeof f === 'function' ? (f as Solver) : undefined;
-};
 
-function tryRun(solve: Solver | undefined, input: GrooveCellInput): { slip: number; ms: number } | undefined {
-  if (!solve) return undefined;
+function tryRun(solve: Solver, input: GrooveCellInput): { slip: number; ms: number } | undefined {
   try {
     const t0 = performance.now();
     const r = solve(input);
@@ -37,10 +31,9 @@ function tryRun(solve: Solver | undefined, input: GrooveCellInput): { slip: numb
 const cellsPerPitch = process.argv[2] ? Number(process.argv[2]) : undefined;
 console.log(`# slip error map — Node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown'}), cellsPerPitch ${cellsPerPitch ?? 'default'}`);
 console.log('phi\td/w\tN\tbs/P\tb_par_cf/P\tb_par_field/P\terr_par\tb_perp_cf/P\tb_perp_field/P\terr_perp\tms_par\tms_perp');
-const longitudinal = lookup('solveLongitudinalCell');
-const transverse = lookup('solveTransverseCell');
+const longitudinal: Solver = solveLongitudinalCell;
+const transverse: Solver = solveTransverseCell;
 const pitch = 1;
-const rows: string[] = [];
 for (const phi of [0.2, 0.5, 0.8, 0.95]) {
   for (const depthRatio of [0.1, 0.5, 1, 2]) {
     for (const N of [0.01, 0.1, 1, 10, 100]) {
@@ -68,7 +61,6 @@ for (const phi of [0.2, 0.5, 0.8, 0.95]) {
         perp ? perp.ms.toFixed(1) : '-',
       ].join('\t');
       console.log(row);
-      rows.push(row);
     }
   }
 }
