@@ -320,11 +320,15 @@ function validate(scenario: Scenario): void {
  * Effective slip and drag change of a liquid-infused grooved wall.
  *
  * Closed form: mean local slip of the lubricant-filled groove from the
- * lid-sheared duct series (longitudinal) and the shallow-groove recirculation
+ * lid-sheared duct series (longitudinal) and the shear-driven cavity table
  * (transverse), inserted into the Belyaev–Vinogradova stripe formulas
  * (transverse through the Asmolov–Vinogradova relation); slip tensor for the flow
- * angle. Field: the groove-cell solver (src/numerics/groove-cell.ts), exact for a
- * flat interface. Drag: laminar fixed-flow-rate formulas for channels and pipes;
+ * angle. Field: the groove-cell solvers (src/numerics/groove-cell.ts), exact for a
+ * flat interface; about 0.05–0.3 s along and 0.5–2 s across the grooves on the
+ * default grid (more for extreme geometry), so the API should run `field`/`auto`
+ * in a worker thread. `auto` uses the closed form only where the measured error
+ * map (closedFormErrorEstimate) puts both directions below 1 %, in practice
+ * N ≲ 0.01 (gas-like lubricants). Drag: laminar fixed-flow-rate formulas for channels and pipes;
  * turbulent virtual-origin shift with ℓ_x⁺ the slip along the mean flow and ℓ_z⁺
  * the spanwise slip, converted to DR at fixed bulk Reynolds number in the reduced
  * wall units (src/physics/slip-drag.ts).
