@@ -852,6 +852,9 @@ export function solveHeatCrossSection(input: CrossSectionInput): CrossSectionRes
 // Top-level calculation
 // ---------------------------------------------------------------------------
 
+/** Largest sensitivity sweep run with the field thermal slip (cost: one conduction solve per point). */
+const FIELD_SWEEP_LIMIT = 25;
+
 export type HeatingCondition = 'uniform-flux' | 'uniform-temperature';
 export type HeatMethod = 'auto' | 'closed-form' | 'field';
 
@@ -1064,9 +1067,8 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   };
 
   let result: HeatResult;
-  const slipVelocity = (flow.wallShearStress * slip) / scenario.workingFluid.viscosity;
-  const lubricantDiffusivity = kO / (scenario.lubricant.density * cO);
-  const groovePecletNumber = (slipVelocity * texture.grooveWidth) / lubricantDiffusivity;
+  // Filled in once the slip length in use is known (the field method computes its own).
+  const groovePecletNumber = 0;
 
   if (turbulent) {
     notes.cite(HEAT_REFERENCES.gnielinski1976, HEAT_REFERENCES.petukhov1970, HEAT_REFERENCES.kader1981).model('turbulent-log-law-shift');
@@ -1173,12 +1175,16 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     throw new DomainError('thermal slip length makes the total thermal resistance non-positive', { field: 'solid.thermalConductivity' });
   }
 
+  // Interface (slip) velocity u_i = τ_w b/μ_w carries lubricant across the groove width w.
+  const slipVelocity = (flow.wallShearStress * result.slipLength) / scenario.workingFluid.viscosity;
+  const lubricantDiffusivity = kO / (scenario.lubricant.density * cO);
+  result.groovePecletNumber = (slipVelocity * texture.grooveWidth) / lubricantDiffusivity;
   // Where conduction-only homogenisation is not enough (physics.md §7; thresholds common practice, no source).
   const comparableSolid = kS < 10 * Math.max(kW, kO);
-  if (groovePecletNumber > 1 && comparableSolid) {
+  if (result.groovePecletNumber > 1 && comparableSolid) {
     notes.warn(
       'lubricant-advection',
-      `Groove Péclet number ${groovePecletNumber.toPrecision(3)} > 1 with a solid not much more conductive than the liquids: recirculating lubricant carries heat that the thermal slip length ignores.`,
+      `Groove Péclet number ${result.groovePecletNumber.toPrecision(3)} > 1 with a solid not much more conductive than the liquids: recirculating lubricant carries heat that the thermal slip length ignores.`,
       'caution',
     );
   }
@@ -1194,7 +1200,11 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     }
     const low = 0.1 * Math.min(kW, kO, kS);
     const high = 10 * Math.max(kW, kO, kS);
-    const sweepField = useFieldThermalSlip;
+    // Each field point is one conduction-cell solve (~0.1 s); long sweeps fall back to the closed form.
+    const sweepField = useFieldThermalSlip && points <= FIELD_SWEEP_LIMIT;
+    if (useFieldThermalSlip && !sweepField) {
+      notes.warn('sensitivity-closed-form', `More than ${FIELD_SWEEP_LIMIT} sweep points: the sweep uses the closed-form thermal slip.`, 'info');
+    }
     const conductivities: number[] = [];
     const ratios: (number | null)[] = [];
     const overall: number[] = [];
