@@ -86,7 +86,7 @@ for (const [name, r, ms] of [['field (auto)', field, fieldMs], ['closed-form', c
 const s = field.result.sensitivity!;
 console.log('   sensitivity (k_o W/(m K) : Nu/Nu0 : overall)');
 for (let i = 0; i < s.lubricantConductivity.length; i++) {
-  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.heatTransferRatio[i]?.toFixed(4)}\t${s.overallConductanceRatio[i].toFixed(4)}`);
+  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.heatTransferRatio[i]?.toFixed(4)}\t${s.overallConductanceRatio[i]?.toFixed(4)}`);
 }
 console.log(`   best k_o = ${s.bestLubricantConductivity.toPrecision(3)} (overall ${s.bestOverallConductanceRatio.toFixed(4)})`);
 

@@ -878,8 +878,8 @@ export interface HeatSensitivity {
   lubricantConductivity: number[];
   /** Nu/Nu_smooth at each (null where the apparent Nu is undefined). */
   heatTransferRatio: (number | null)[];
-  /** Overall conductance ratio from the heated boundary at each. */
-  overallConductanceRatio: number[];
+  /** Overall conductance ratio from the heated boundary at each (null where the estimate fails). */
+  overallConductanceRatio: (number | null)[];
   /** Conductivity with the largest overall conductance ratio on the sweep, W/(m·K). */
   bestLubricantConductivity: number;
   bestOverallConductanceRatio: number;
@@ -1207,7 +1207,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     }
     const conductivities: number[] = [];
     const ratios: (number | null)[] = [];
-    const overall: number[] = [];
+    const overall: (number | null)[] = [];
     const baseConfig = turbulent ? null : config;
     for (let p = 0; p < points; p++) {
       const k = low * (high / low) ** (p / (points - 1));
@@ -1218,7 +1218,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         const nu = laminarNusselt(baseConfig, input.heating, result.slipLength, bt);
         ratios.push(nu === null ? null : nu / smooth);
         const o = overallFrom(laminarNusselt(baseConfig, input.heating, result.slipLength, 0), bt, smooth);
-        overall.push(Number.isFinite(o) ? o : 0);
+        overall.push(Number.isFinite(o) ? o : null);
       } else {
         try {
           const e = turbulentHeatTransfer({
@@ -1233,18 +1233,22 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
           overall.push((wallResistance + Dh / (kW * e.nusseltSmooth)) / (wallResistance + Dh / (kW * e.nusselt)));
         } catch {
           ratios.push(null);
-          overall.push(0);
+          overall.push(null);
         }
       }
     }
-    let best = 0;
-    for (let p = 1; p < points; p++) if (overall[p] > overall[best]) best = p;
+    let best = -1;
+    for (let p = 0; p < points; p++) {
+      const v = overall[p];
+      if (v !== null && (best < 0 || v > (overall[best] as number))) best = p;
+    }
+    if (best < 0) throw new DomainError('no sweep point gives a positive thermal resistance', { field: 'sensitivity.points' });
     result.sensitivity = {
       lubricantConductivity: conductivities,
       heatTransferRatio: ratios,
       overallConductanceRatio: overall,
       bestLubricantConductivity: conductivities[best],
-      bestOverallConductanceRatio: overall[best],
+      bestOverallConductanceRatio: overall[best] as number,
       thermalSlipMethod: sweepField ? 'field' : 'closed-form',
     };
     if (best === points - 1) {

@@ -349,8 +349,39 @@ describe('evaluateHeat', () => {
     const r = evaluateHeat(demoInput({ sensitivity: { points: 7 } })).result;
     const s = r.sensitivity!;
     expect(s.lubricantConductivity.length).toBe(7);
-    for (let i = 1; i < 7; i++) expect(s.overallConductanceRatio[i]).toBeGreaterThan(s.overallConductanceRatio[i - 1]);
+    for (let i = 1; i < 7; i++) expect(s.overallConductanceRatio[i]!).toBeGreaterThan(s.overallConductanceRatio[i - 1]!);
     expect(s.bestLubricantConductivity).toBe(s.lubricantConductivity[6]);
     for (const v of s.overallConductanceRatio) expect(Number.isFinite(v)).toBe(true);
+  });
+  it('sweep: field thermal slip up to 25 points, closed form (with a notice) beyond', () => {
+    const short = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 3 } }));
+    expect(short.result.sensitivity!.thermalSlipMethod).toBe('field');
+    expect(short.result.sensitivity!.lubricantConductivity[0]).toBeCloseTo(0.1 * 0.2, 12); // 0.1·min(k_w, k_o, k_s)
+    const long = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 30 } }));
+    expect(long.result.sensitivity!.thermalSlipMethod).toBe('closed-form');
+    expect(long.warnings.some((w) => w.code === 'sensitivity-closed-form')).toBe(true);
+    expect(() => evaluateHeat(demoInput({ sensitivity: { points: 1 } }))).toThrow(DomainError);
+  });
+  it('one heated wall, field method: a very viscous lubricant of the solid’s conductivity behaves as a smooth wall, Nu = 5.385 (Shah & London 1978) within 0.3 %', () => {
+    const input = demoInput({ method: 'field', heatedWalls: 'one', slip: { slipLengthLongitudinal: 0 } });
+    const stiff = { ...conductiveLubricant, viscosity: 1e3, thermalConductivity: 0.2 };
+    const r = evaluateHeat({ ...input, scenario: { ...input.scenario, lubricant: stiff } }).result;
+    expect(r.method).toBe('field');
+    expect(Math.abs(r.thermalSlipLength)).toBeLessThan(1e-9 * 20e-6); // identical wall: b_t = 0 to solver tolerance
+    expect(Math.abs(r.nusselt! / (70 / 13) - 1)).toBeLessThan(3e-3);
+    expect(Math.abs(r.frictionRatio - 1)).toBeLessThan(1e-3);
+  });
+  it('uniform wall temperature with slip and thermal slip uses the shooting eigenvalue with b/H and b_t/H (wiring; eigenvalues checked against scipy above)', () => {
+    const r = evaluateHeat(demoInput({ heating: 'uniform-temperature' })).result;
+    const expected = nusseltUniformTemperature('plates-both', 1e-6 / 200e-6, r.thermalSlipLength / 200e-6).nusselt;
+    expect(r.nusselt!).toBeCloseTo(expected, 12);
+    expect(r.nusseltSmooth).toBeCloseTo(7.541, 3); // Shah & London (1978)
+  });
+  it('transitional flow is flagged and labelled low confidence', () => {
+    const input = demoInput();
+    const flow: FlowState = { ...input.scenario.flow, regime: 'transitional', reynoldsNumber: 3000, viscousLength: 3e-6 };
+    const out = evaluateHeat({ ...input, scenario: { ...input.scenario, flow } });
+    expect(out.warnings.some((w) => w.code === 'transitional-flow')).toBe(true);
+    expect(out.result.confidence).toBe('low');
   });
 });
