@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { solveCellDiffusion, CellInputError } from '../../src/numerics/cell-diffusion.js';
 import { solveLongitudinalCell } from '../../src/numerics/groove-cell.js';
 import { sumOdd } from '../../src/numerics/series.js';
+import reference from '../../fixtures/groove-cell/longitudinal_reference.json' with { type: 'json' };
 
 /** Philip (1972) ZAMP 23, 353; Lauga & Stone (2003) J. Fluid Mech. 489, 55: b_∥ = (P/π) ln sec(πφ/2). */
 const philipLongitudinal = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -226,6 +227,15 @@ describe('longitudinal groove cell', () => {
       expect(r.slipLength).toBeLessThan(philipLongitudinal(1, phi) * 1.01);
     }
   });
+
+  it.each(reference.cases)(
+    'finite N = $viscosityRatio, d = $grooveDepth P: b_∥ agrees with the independent scipy finite-difference reference (fixtures/groove-cell, Richardson with observed order)',
+    (c) => {
+      const r = solveLongitudinalCell({ pitch: c.pitch, grooveWidth: c.grooveWidth, grooveDepth: c.grooveDepth, viscosityRatio: c.viscosityRatio });
+      // The reference's own uncertainty (its extrapolation step) dominates; our result must sit inside it.
+      expect(Math.abs(r.slipLength - c.slipLength)).toBeLessThan(Math.max(c.uncertainty, 2e-4 * c.slipLength));
+    },
+  );
 
   it('rejects impossible geometry with a CellInputError naming the field', () => {
     expect(() => solveLongitudinalCell({ pitch: 1, grooveWidth: 1.2, grooveDepth: 1, viscosityRatio: 0 })).toThrow(/grooveWidth/);
