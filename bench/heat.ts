@@ -119,3 +119,22 @@ for (const a of [1, 0.5, 0.25, 0.125]) {
   const ex = (p: number, q: number) => (q + (q - p) / 3).toFixed(4);
   console.log(`${a}\t${ex(c.frictionFactorReynolds, f.frictionFactorReynolds)}\t${ex(c.nusseltUniformFlux, f.nusseltUniformFlux)}\t${ex(c.nusseltUniformTemperature, f.nusseltUniformTemperature)}\t${ms.toFixed(0)}`);
 }
+
+console.log('\n5. Cross-section with grooves (worked-example wall, co-flowing lubricant): Nu and b vs grid');
+console.log('cells/P  cells   Nu          b (um)      ms');
+for (const c of [32, 64, 128]) {
+  const [r, ms] = time(() =>
+    solveHeatCrossSection({
+      wall: { ...demo, workingConductivity: water.thermalConductivity! },
+      height: 200e-6,
+      heatedWalls: 'both',
+      workingViscosity: water.viscosity,
+      lubricantViscosity: lubricant.viscosity,
+      workingHeatCapacity: water.density * water.specificHeat!,
+      lubricantHeatCapacity: lubricant.density * lubricant.specificHeat!,
+      lubricantMotion: 'co-flowing',
+      cellsPerPitch: c,
+    }),
+  );
+  console.log(`${c}\t${r.cells}\t${r.nusselt?.toFixed(6)}\t${(r.slipLength * 1e6).toFixed(5)}\t${ms.toFixed(0)}`);
+}

@@ -724,6 +724,8 @@ export interface CrossSectionInput {
   workingHeatCapacity: number;
   lubricantHeatCapacity: number;
   lubricantMotion: LubricantMotion;
+  /** Grid cells across one period (default 64). */
+  cellsPerPitch?: number;
 }
 
 export interface CrossSectionResult {
@@ -762,7 +764,7 @@ export function solveHeatCrossSection(input: CrossSectionInput): CrossSectionRes
   const { wall, height } = input;
   const both = input.heatedWalls === 'both';
   const liquidHeight = both ? height / 2 : height;
-  const grid = buildGrid(wall, liquidHeight, !both);
+  const grid = buildGrid(wall, liquidHeight, !both, input.cellsPerPitch ?? FIELD_CELLS_PER_PITCH);
   const n = grid.nx * grid.ny;
   const fixed = Uint8Array.from(grid.material, (m) => (m === 0 ? 1 : 0));
   const viscosity = Float64Array.from(grid.material, (m) => (m === 0 ? 1 : m === 1 ? input.lubricantViscosity : input.workingViscosity));
