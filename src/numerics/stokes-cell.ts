@@ -71,7 +71,7 @@ export function solveStokesCell(problem: StokesCellProblem): StokesCellResult {
   const cavity = muO > 0;
   const tolerance = problem.tolerance ?? 1e-8;
   const maxIterations = problem.maxIterations ?? 400;
-  const innerTolerance = Math.min(1e-11, tolerance * 1e-3);
+  const innerTolerance = Math.min(1e-10, tolerance * 1e-2);
   const inGroove = (i: number): boolean => i >= grooveFirst && i <= grooveLast;
   const viscosityOfRow = (j: number): number => (j >= j0 ? muW : muO);
 
