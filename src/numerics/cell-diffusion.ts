@@ -10,11 +10,28 @@
  * G = A / (Δ₁/(2k₁) + Δ₂/(2k₂)), which is exact for a layered medium and
  * enforces continuity of φ and of the normal flux k ∂φ/∂n across a material
  * interface lying on a cell face (Patankar 1980, Numerical Heat Transfer and
- * Fluid Flow, Hemisphere, §4.2-3).
+ * Fluid Flow, Hemisphere, §4.2-3; from memory).
  *
  * The linear system is symmetric positive definite and is solved by the
  * conjugate-gradient method preconditioned with one symmetric multigrid cycle
- * (see ./multigrid.ts).
+ * (see ./multigrid.ts): 8–9 iterations from 32² to 512² cells on the Poisson
+ * duct (bench/field-solver.ts), cost ∝ unknowns^≈1.
+ *
+ * Conventions: row-major index c = j·nx + i, j = 0 the bottom row; x periodic by
+ * default. A fixed cell imposes φ = 0 on its faces (a wall on the face); a
+ * 'value' edge imposes φ on the edge itself; cells with k = 0 are insulators.
+ * At least one value edge, fixed cell or 'zero-value' side is required.
+ *
+ * Typical uses:
+ * - Conduction across a textured wall: k per cell = water / lubricant / solid
+ *   conductivity (solid substrate of any thickness simply as rows of solid k),
+ *   bottom { kind: 'value' } (isothermal back face), top { kind: 'flux' }.
+ * - Laminar fully developed duct cross-section: velocity from k = μ,
+ *   s = dp/dx (< 0 for flow in +x), solid cells fixed (no slip), walls as
+ *   'value' edges or sides 'zero-value'; then temperature with k = conductivity,
+ *   s = ρ c_p u dT/dx (uniform axial heating), reusing the velocity field.
+ * - Non-zero wall values: solve for φ − φ_wall, or use 'value' edges (fixed cells
+ *   are always at 0).
  */
 
 import { MultigridPreconditioner, solvePcg, type FivePointOperator } from './multigrid.js';

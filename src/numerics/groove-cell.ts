@@ -31,11 +31,11 @@
  *
  * References
  * 1. Philip J.R. (1972) Flows satisfying mixed no-slip and no-shear conditions.
- *    ZAMP 23, 353–372. doi:10.1007/BF01595477
+ *    ZAMP 23, 353–372 (pages and doi:10.1007/BF01595477 from memory).
  * 2. Lauga E., Stone H.A. (2003) Effective slip in pressure-driven Stokes flow.
- *    J. Fluid Mech. 489, 55–77. doi:10.1017/S0022112003004695
+ *    J. Fluid Mech. 489, 55–77. doi:10.1017/S0022112003004695 (confirmed).
  * 3. Patankar S.V. (1980) Numerical Heat Transfer and Fluid Flow. Hemisphere, §4.2.
- * 4. Richardson L.F. (1911) Phil. Trans. R. Soc. A 210, 307–357. doi:10.1098/rsta.1911.0009
+ * 4. Richardson L.F. (1911) Phil. Trans. R. Soc. A 210, 307–357 (from memory).
  */
 
 import { solveCellDiffusion, CellInputError } from './cell-diffusion.js';
@@ -195,7 +195,7 @@ function gradedSegment(length: number, fine: number, coarse: number, growth: num
  * cell L/m^q). Why: the fields have a square-root (or stronger) singularity
  * at the groove edge; with q = 2 the cell size grows like √r, the grading that
  * equidistributes the interpolation error of r^(1/2) (Babuška et al. 1979 and
- * Schwab 1998, p- and hp-FEM, Oxford, §4.5 — from memory).
+ * Schwab 1998, p- and hp-FEM, Oxford — both from memory).
  */
 function powerGradedSegment(length: number, coarse: number, q: number): number[] {
   const m = Math.max(4, Math.ceil((q * length) / coarse));

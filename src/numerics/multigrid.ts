@@ -13,10 +13,10 @@
  * solid boundaries is needed), and the factor 1/2 compensates the known
  * over-stiffness of piecewise-constant coarse spaces (Braess 1995, Numer.
  * Linear Algebra Appl. 2, 47–61; Notay 2010, Electron. Trans. Numer. Anal. 37,
- * 123–146). Smoother: alternating line Gauss–Seidel (rows, then columns) before
+ * 123–146; both citations from memory). Smoother: alternating line Gauss–Seidel (rows, then columns) before
  * and the reverse sequence after the coarse correction, so one V-cycle is a symmetric positive definite
  * preconditioner for CG (Saad 2003, Iterative Methods for Sparse Linear
- * Systems, 2nd ed., SIAM, §9.2 and §13). The coarsest level is solved by a
+ * Systems, 2nd ed., SIAM, §9.2 and §13; from memory). The coarsest level is solved by a
  * dense Cholesky factorisation.
  */
 
@@ -86,7 +86,7 @@ export function applyFivePoint(op: FivePointOperator, x: Float64Array, y: Float6
  * sequence, so pre- and post-smoothing are adjoint and the cycle stays
  * symmetric. Why lines: graded meshes give cells of aspect ratio ≫ 1, for
  * which point Gauss–Seidel no longer smooths (Trottenberg, Oosterlee &
- * Schüller 2001, Multigrid, Academic Press, §5.1).
+ * Schüller 2001, Multigrid, Academic Press, §5.1; from memory).
  */
 class LineRelaxation {
   private readonly lower: Float64Array;
@@ -203,7 +203,7 @@ class LineRelaxation {
   /**
    * Cyclic tridiagonal system (corner entries lower[0] = A[0][n−1], upper[n−1] = A[n−1][0]) by the
    * Sherman–Morrison correction of two Thomas solves (Press et al. 2007, Numerical Recipes
-   * 3rd ed., Cambridge University Press, §2.7.2).
+   * 3rd ed., Cambridge University Press, §2.7.2; from memory).
    */
   private solveCyclic(n: number): void {
     const { lower, mainDiag, upper, rhs, work, cyclicSolution } = this;

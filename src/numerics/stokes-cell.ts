@@ -2,7 +2,7 @@
  * Two-dimensional Stokes flow across one period of a grooved wall with a flat,
  * impermeable interface (the transverse groove cell), on a staggered (MAC)
  * tensor-product mesh (Harlow & Welch 1965, Phys. Fluids 8, 2182,
- * doi:10.1063/1.1761178):
+ * doi:10.1063/1.1761178, from memory):
  *
  *     −div(μ grad u) + ∂p/∂x = 0,  −div(μ grad v) + ∂p/∂y = 0,  ∂u/∂x + ∂v/∂y = 0
  *
@@ -21,7 +21,7 @@
  * viscosity-weighted inverse pressure mass matrix μ/|cell|, which is
  * spectrally equivalent to S⁻¹ uniformly in the mesh and in viscosity jumps
  * between regions (Elman, Silvester & Wathen 2014, Finite Elements and Fast
- * Iterative Solvers, 2nd ed., Oxford, §9.2 and §9.3).
+ * Iterative Solvers, 2nd ed., Oxford, §9.2 and §9.3; from memory).
  */
 
 import { MultigridPreconditioner, solvePcg, type FivePointOperator } from './multigrid.js';
