@@ -89,23 +89,103 @@ export function applyFivePoint(op: FivePointOperator, x: Float64Array, y: Float6
  * Schüller 2001, Multigrid, Academic Press, §5.1; from memory).
  */
 class LineRelaxation {
-  private readonly lower: Float64Array;
-  private readonly mainDiag: Float64Array;
-  private readonly upper: Float64Array;
+  /** Row systems, factored once: Thomas multipliers (lower, modified upper, inverse pivots). */
+  private readonly rowLower: Float64Array;
+  private readonly rowUpper: Float64Array;
+  private readonly rowInvPivot: Float64Array;
+  /** Cyclic rows: Sherman–Morrison vector z (A' z = u) and its scalars, per row. */
+  private readonly rowZ: Float64Array;
+  private readonly rowBetaOverGamma: Float64Array;
+  private readonly rowDenominator: Float64Array;
+  private readonly rowCyclic: Uint8Array;
+  private readonly colLower: Float64Array;
+  private readonly colUpper: Float64Array;
+  private readonly colInvPivot: Float64Array;
   private readonly rhs: Float64Array;
   private readonly work: Float64Array;
-  private readonly work2: Float64Array;
-  private readonly cyclicSolution: Float64Array;
 
   constructor(private readonly op: FivePointOperator) {
-    const m = Math.max(op.nx, op.ny);
-    this.lower = new Float64Array(m);
-    this.mainDiag = new Float64Array(m);
-    this.upper = new Float64Array(m);
+    const { nx, ny, periodicX, west, south, diagonal, active } = op;
+    const n = nx * ny;
+    const m = Math.max(nx, ny);
     this.rhs = new Float64Array(m);
     this.work = new Float64Array(m);
-    this.work2 = new Float64Array(m);
-    this.cyclicSolution = new Float64Array(m);
+    this.rowLower = new Float64Array(n);
+    this.rowUpper = new Float64Array(n);
+    this.rowInvPivot = new Float64Array(n);
+    this.rowZ = new Float64Array(n);
+    this.rowBetaOverGamma = new Float64Array(ny);
+    this.rowDenominator = new Float64Array(ny);
+    this.rowCyclic = new Uint8Array(ny);
+    this.colLower = new Float64Array(n);
+    this.colUpper = new Float64Array(n);
+    this.colInvPivot = new Float64Array(n);
+    const lower = new Float64Array(m);
+    const main = new Float64Array(m);
+    const upper = new Float64Array(m);
+    for (let j = 0; j < ny; j++) {
+      const base = j * nx;
+      for (let i = 0; i < nx; i++) {
+        const c = base + i;
+        if (!active[c]) {
+          lower[i] = 0;
+          upper[i] = 0;
+          main[i] = 1;
+          continue;
+        }
+        main[i] = diagonal[c];
+        lower[i] = i > 0 || (periodicX && nx > 1) ? -west[c] : 0;
+        upper[i] = i < nx - 1 ? -west[c + 1] : periodicX && nx > 1 ? -west[base] : 0;
+      }
+      if (periodicX && nx === 2) {
+        // Both neighbours are the same cell: merge the two couplings.
+        lower[1] += upper[1];
+        upper[0] += lower[0];
+        upper[1] = 0;
+        lower[0] = 0;
+      }
+      let alpha = 0;
+      let beta = 0;
+      let gamma = 0;
+      if (periodicX && nx > 2 && (upper[nx - 1] !== 0 || lower[0] !== 0)) {
+        // Sherman–Morrison splitting of the corner entries (Press et al. 2007, Numerical Recipes
+        // 3rd ed., §2.7.2; from memory): A = A' + u vᵀ, u = (γ, 0…0, α), v = (1, 0…0, β/γ).
+        alpha = upper[nx - 1];
+        beta = lower[0];
+        gamma = -main[0];
+        main[0] -= gamma;
+        main[nx - 1] -= (alpha * beta) / gamma;
+        lower[0] = 0;
+        upper[nx - 1] = 0;
+        this.rowCyclic[j] = 1;
+      }
+      factorTridiagonal(nx, lower, main, upper, this.rowLower, this.rowUpper, this.rowInvPivot, base);
+      if (this.rowCyclic[j]) {
+        const r = this.rhs;
+        r.fill(0, 0, nx);
+        r[0] = gamma;
+        r[nx - 1] = alpha;
+        substitute(nx, this.rowLower, this.rowUpper, this.rowInvPivot, base, 1, r, this.work);
+        for (let i = 0; i < nx; i++) this.rowZ[base + i] = this.work[i];
+        this.rowBetaOverGamma[j] = beta / gamma;
+        this.rowDenominator[j] = 1 + this.work[0] + (beta / gamma) * this.work[nx - 1];
+      }
+    }
+    for (let i = 0; i < nx; i++) {
+      for (let j = 0; j < ny; j++) {
+        const c = j * nx + i;
+        if (!active[c]) {
+          lower[j] = 0;
+          upper[j] = 0;
+          main[j] = 1;
+          continue;
+        }
+        main[j] = diagonal[c];
+        lower[j] = j > 0 ? -south[c] : 0;
+        upper[j] = j < ny - 1 ? -south[c + nx] : 0;
+      }
+      factorTridiagonal(ny, lower, main, upper, this.colLower, this.colUpper, this.colInvPivot, i, nx);
+    }
   }
 
   relax(x: Float64Array, b: Float64Array, forward: boolean): void {
@@ -120,57 +200,38 @@ class LineRelaxation {
   }
 
   private row(j: number, x: Float64Array, b: Float64Array): void {
-    const { nx, ny, periodicX, west, south, diagonal, active } = this.op;
-    const { lower, mainDiag, upper, rhs } = this;
+    const { nx, ny, south, active } = this.op;
+    const { rhs, work } = this;
     const base = j * nx;
-    let any = false;
     for (let i = 0; i < nx; i++) {
       const c = base + i;
       if (!active[c]) {
-        lower[i] = 0;
-        upper[i] = 0;
-        mainDiag[i] = 1;
         rhs[i] = 0;
         continue;
       }
-      any = true;
       let v = b[c];
       if (j > 0) v += south[c] * x[c - nx];
       if (j < ny - 1) v += south[c + nx] * x[c + nx];
       rhs[i] = v;
-      mainDiag[i] = diagonal[c];
-      lower[i] = i > 0 || (periodicX && nx > 1) ? -west[c] : 0;
-      upper[i] = i < nx - 1 ? -west[c + 1] : periodicX && nx > 1 ? -west[base] : 0;
     }
-    if (!any) return;
-    if (periodicX && nx > 2) this.solveCyclic(nx);
-    else {
-      if (periodicX && nx === 2) {
-        // Both neighbours are the same cell: merge the two couplings.
-        lower[1] += upper[1];
-        upper[0] += lower[0];
-        upper[1] = 0;
-        lower[0] = 0;
-      }
-      this.solveTridiagonal(nx);
+    substitute(nx, this.rowLower, this.rowUpper, this.rowInvPivot, base, 1, rhs, work);
+    if (this.rowCyclic[j]) {
+      const z = this.rowZ;
+      const factor = (work[0] + this.rowBetaOverGamma[j] * work[nx - 1]) / this.rowDenominator[j];
+      for (let i = 0; i < nx; i++) work[i] -= factor * z[base + i];
     }
-    for (let i = 0; i < nx; i++) x[base + i] = active[base + i] ? this.work[i] : 0;
+    for (let i = 0; i < nx; i++) x[base + i] = active[base + i] ? work[i] : 0;
   }
 
   private column(i: number, x: Float64Array, b: Float64Array): void {
-    const { nx, ny, periodicX, west, south, diagonal, active } = this.op;
-    const { lower, mainDiag, upper, rhs } = this;
-    let any = false;
+    const { nx, ny, periodicX, west, active } = this.op;
+    const { rhs, work } = this;
     for (let j = 0; j < ny; j++) {
       const c = j * nx + i;
       if (!active[c]) {
-        lower[j] = 0;
-        upper[j] = 0;
-        mainDiag[j] = 1;
         rhs[j] = 0;
         continue;
       }
-      any = true;
       let v = b[c];
       const row = j * nx;
       if (i > 0) v += west[c] * x[c - 1];
@@ -178,56 +239,54 @@ class LineRelaxation {
       if (i < nx - 1) v += west[c + 1] * x[c + 1];
       else if (periodicX && nx > 1) v += west[row] * x[row];
       rhs[j] = v;
-      mainDiag[j] = diagonal[c];
-      lower[j] = j > 0 ? -south[c] : 0;
-      upper[j] = j < ny - 1 ? -south[c + nx] : 0;
     }
-    if (!any) return;
-    this.solveTridiagonal(ny);
-    for (let j = 0; j < ny; j++) x[j * nx + i] = active[j * nx + i] ? this.work[j] : 0;
+    substitute(ny, this.colLower, this.colUpper, this.colInvPivot, i, nx, rhs, work);
+    for (let j = 0; j < ny; j++) x[j * nx + i] = active[j * nx + i] ? work[j] : 0;
   }
+}
 
-  /** Thomas algorithm on lower/mainDiag/upper/rhs; solution in work (and work2 as scratch). */
-  private solveTridiagonal(n: number): void {
-    const { lower, mainDiag, upper, rhs, work, work2 } = this;
-    let denom = mainDiag[0];
-    work2[0] = upper[0] / denom;
-    work[0] = rhs[0] / denom;
-    for (let k = 1; k < n; k++) {
-      denom = mainDiag[k] - lower[k] * work2[k - 1];
-      work2[k] = upper[k] / denom;
-      work[k] = (rhs[k] - lower[k] * work[k - 1]) / denom;
-    }
-    for (let k = n - 2; k >= 0; k--) work[k] -= work2[k] * work[k + 1];
+/** Thomas factorisation of one tridiagonal line, stored at offset + k·stride. */
+function factorTridiagonal(
+  n: number,
+  lower: Float64Array,
+  main: Float64Array,
+  upper: Float64Array,
+  outLower: Float64Array,
+  outUpper: Float64Array,
+  outInvPivot: Float64Array,
+  offset: number,
+  stride = 1,
+): void {
+  let previousUpper = 0;
+  for (let k = 0; k < n; k++) {
+    const at = offset + k * stride;
+    const pivot = main[k] - (k > 0 ? lower[k] * previousUpper : 0);
+    const inv = 1 / pivot;
+    outLower[at] = k > 0 ? lower[k] : 0;
+    outInvPivot[at] = inv;
+    previousUpper = upper[k] * inv;
+    outUpper[at] = previousUpper;
   }
-  /**
-   * Cyclic tridiagonal system (corner entries lower[0] = A[0][n−1], upper[n−1] = A[n−1][0]) by the
-   * Sherman–Morrison correction of two Thomas solves (Press et al. 2007, Numerical Recipes
-   * 3rd ed., Cambridge University Press, §2.7.2; from memory).
-   */
-  private solveCyclic(n: number): void {
-    const { lower, mainDiag, upper, rhs, work, cyclicSolution } = this;
-    const alpha = upper[n - 1];
-    const beta = lower[0];
-    if (alpha === 0 && beta === 0) {
-      this.solveTridiagonal(n);
-      return;
-    }
-    const gamma = -mainDiag[0];
-    mainDiag[0] -= gamma;
-    mainDiag[n - 1] -= (alpha * beta) / gamma;
-    lower[0] = 0;
-    upper[n - 1] = 0;
-    this.solveTridiagonal(n);
-    cyclicSolution.set(work.subarray(0, n));
-    rhs.fill(0, 0, n);
-    rhs[0] = gamma;
-    rhs[n - 1] = alpha;
-    this.solveTridiagonal(n);
-    const factor = (cyclicSolution[0] + (beta * cyclicSolution[n - 1]) / gamma) / (1 + work[0] + (beta * work[n - 1]) / gamma);
-    for (let k = 0; k < n; k++) work[k] = cyclicSolution[k] - factor * work[k];
-  }
+}
 
+/** Forward and back substitution with a factored line; result in out[0 … n−1]. */
+function substitute(
+  n: number,
+  lower: Float64Array,
+  upper: Float64Array,
+  invPivot: Float64Array,
+  offset: number,
+  stride: number,
+  rhs: Float64Array,
+  out: Float64Array,
+): void {
+  let previous = 0;
+  for (let k = 0; k < n; k++) {
+    const at = offset + k * stride;
+    previous = (rhs[k] - lower[at] * previous) * invPivot[at];
+    out[k] = previous;
+  }
+  for (let k = n - 2; k >= 0; k--) out[k] -= upper[offset + k * stride] * out[k + 1];
 }
 
 function countActive(op: FivePointOperator): number {
