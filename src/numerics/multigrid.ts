@@ -89,10 +89,10 @@ export function applyFivePoint(op: FivePointOperator, x: Float64Array, y: Float6
  * Schüller 2001, Multigrid, Academic Press, §5.1; from memory).
  */
 class LineRelaxation {
-  /** Row systems, factored once: Thomas multipliers (lower, modified upper, inverse pivots). */
+  /** Row systems, factored once: Thomas multipliers (lower, modified upper, pivots; dividing by the pivot, not multiplying by its inverse, keeps the rounding of the plain Thomas algorithm). */
   private readonly rowLower: Float64Array;
   private readonly rowUpper: Float64Array;
-  private readonly rowInvPivot: Float64Array;
+  private readonly rowPivot: Float64Array;
   /** Cyclic rows: Sherman–Morrison vector z (A' z = u) and its scalars, per row. */
   private readonly rowZ: Float64Array;
   private readonly rowBetaOverGamma: Float64Array;
@@ -100,7 +100,7 @@ class LineRelaxation {
   private readonly rowCyclic: Uint8Array;
   private readonly colLower: Float64Array;
   private readonly colUpper: Float64Array;
-  private readonly colInvPivot: Float64Array;
+  private readonly colPivot: Float64Array;
   private readonly rhs: Float64Array;
   private readonly work: Float64Array;
 
@@ -112,14 +112,14 @@ class LineRelaxation {
     this.work = new Float64Array(m);
     this.rowLower = new Float64Array(n);
     this.rowUpper = new Float64Array(n);
-    this.rowInvPivot = new Float64Array(n);
+    this.rowPivot = new Float64Array(n);
     this.rowZ = new Float64Array(n);
     this.rowBetaOverGamma = new Float64Array(ny);
     this.rowDenominator = new Float64Array(ny);
     this.rowCyclic = new Uint8Array(ny);
     this.colLower = new Float64Array(n);
     this.colUpper = new Float64Array(n);
-    this.colInvPivot = new Float64Array(n);
+    this.colPivot = new Float64Array(n);
     const lower = new Float64Array(m);
     const main = new Float64Array(m);
     const upper = new Float64Array(m);
@@ -159,13 +159,13 @@ class LineRelaxation {
         upper[nx - 1] = 0;
         this.rowCyclic[j] = 1;
       }
-      factorTridiagonal(nx, lower, main, upper, this.rowLower, this.rowUpper, this.rowInvPivot, base);
+      factorTridiagonal(nx, lower, main, upper, this.rowLower, this.rowUpper, this.rowPivot, base);
       if (this.rowCyclic[j]) {
         const r = this.rhs;
         r.fill(0, 0, nx);
         r[0] = gamma;
         r[nx - 1] = alpha;
-        substitute(nx, this.rowLower, this.rowUpper, this.rowInvPivot, base, 1, r, this.work);
+        substitute(nx, this.rowLower, this.rowUpper, this.rowPivot, base, 1, r, this.work);
         for (let i = 0; i < nx; i++) this.rowZ[base + i] = this.work[i];
         this.rowBetaOverGamma[j] = beta / gamma;
         this.rowDenominator[j] = 1 + this.work[0] + (beta / gamma) * this.work[nx - 1];
@@ -184,7 +184,7 @@ class LineRelaxation {
         lower[j] = j > 0 ? -south[c] : 0;
         upper[j] = j < ny - 1 ? -south[c + nx] : 0;
       }
-      factorTridiagonal(ny, lower, main, upper, this.colLower, this.colUpper, this.colInvPivot, i, nx);
+      factorTridiagonal(ny, lower, main, upper, this.colLower, this.colUpper, this.colPivot, i, nx);
     }
   }
 
@@ -214,7 +214,7 @@ class LineRelaxation {
       if (j < ny - 1) v += south[c + nx] * x[c + nx];
       rhs[i] = v;
     }
-    substitute(nx, this.rowLower, this.rowUpper, this.rowInvPivot, base, 1, rhs, work);
+    substitute(nx, this.rowLower, this.rowUpper, this.rowPivot, base, 1, rhs, work);
     if (this.rowCyclic[j]) {
       const z = this.rowZ;
       const factor = (work[0] + this.rowBetaOverGamma[j] * work[nx - 1]) / this.rowDenominator[j];
@@ -240,7 +240,7 @@ class LineRelaxation {
       else if (periodicX && nx > 1) v += west[row] * x[row];
       rhs[j] = v;
     }
-    substitute(ny, this.colLower, this.colUpper, this.colInvPivot, i, nx, rhs, work);
+    substitute(ny, this.colLower, this.colUpper, this.colPivot, i, nx, rhs, work);
     for (let j = 0; j < ny; j++) x[j * nx + i] = active[j * nx + i] ? work[j] : 0;
   }
 }
@@ -253,7 +253,7 @@ function factorTridiagonal(
   upper: Float64Array,
   outLower: Float64Array,
   outUpper: Float64Array,
-  outInvPivot: Float64Array,
+  outPivot: Float64Array,
   offset: number,
   stride = 1,
 ): void {
@@ -261,10 +261,9 @@ function factorTridiagonal(
   for (let k = 0; k < n; k++) {
     const at = offset + k * stride;
     const pivot = main[k] - (k > 0 ? lower[k] * previousUpper : 0);
-    const inv = 1 / pivot;
     outLower[at] = k > 0 ? lower[k] : 0;
-    outInvPivot[at] = inv;
-    previousUpper = upper[k] * inv;
+    outPivot[at] = pivot;
+    previousUpper = upper[k] / pivot;
     outUpper[at] = previousUpper;
   }
 }
@@ -274,7 +273,7 @@ function substitute(
   n: number,
   lower: Float64Array,
   upper: Float64Array,
-  invPivot: Float64Array,
+  pivot: Float64Array,
   offset: number,
   stride: number,
   rhs: Float64Array,
@@ -283,7 +282,7 @@ function substitute(
   let previous = 0;
   for (let k = 0; k < n; k++) {
     const at = offset + k * stride;
-    previous = (rhs[k] - lower[at] * previous) * invPivot[at];
+    previous = (rhs[k] - lower[at] * previous) / pivot[at];
     out[k] = previous;
   }
   for (let k = n - 2; k >= 0; k--) out[k] -= upper[offset + k * stride] * out[k + 1];
