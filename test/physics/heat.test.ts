@@ -367,7 +367,8 @@ describe('evaluateHeat', () => {
     const stiff = { ...conductiveLubricant, viscosity: 1e3, thermalConductivity: 0.2 };
     const r = evaluateHeat({ ...input, scenario: { ...input.scenario, lubricant: stiff } }).result;
     expect(r.method).toBe('field');
-    expect(Math.abs(r.thermalSlipLength)).toBeLessThan(1e-9 * 20e-6); // identical wall: b_t = 0 to solver tolerance
+    // identical wall: b_t = 0 up to the linear solver's stopping tolerance (1e-12 relative residual leaves ~1e-9·P of noise)
+    expect(Math.abs(r.thermalSlipLength)).toBeLessThan(1e-8 * 20e-6);
     expect(Math.abs(r.nusselt! / (70 / 13) - 1)).toBeLessThan(3e-3);
     expect(Math.abs(r.frictionRatio - 1)).toBeLessThan(1e-3);
   });

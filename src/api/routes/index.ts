@@ -5,8 +5,9 @@ import { slipCalculation } from './slip.js';
 import { wavesCalculation } from './waves.js';
 import { wettingCalculation } from './wetting.js';
 import { retentionCalculation } from './retention.js';
+import { heatCalculation } from './heat.js';
 
-export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation].map(
+export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation, heatCalculation].map(
   (c) => c as unknown as CalculationDefinition,
 );
 
