@@ -56,6 +56,23 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     },
   });
 
+  registry.registerPath({
+    method: 'get',
+    path: '/v1/surfactants',
+    operationId: 'listSurfactants',
+    summary: 'The built-in surfactant catalogue',
+    description:
+      'Each surfactant with, per interface type (air–water, oil–water where data exist), maximum surface excess, Langmuir constant, rate constants, diffusivities, Gibbs prefactor and critical micelle concentration, each with its source.',
+    tags: ['catalogues'],
+    responses: {
+      200: {
+        description: 'The catalogue',
+        content: { 'application/json': { schema: z.object({ surfactants: z.array(z.record(z.string(), z.unknown())), references: z.array(z.record(z.string(), z.unknown())) }) } },
+      },
+      429: errorResponses[429],
+    },
+  });
+
   const status = z.object({ status: z.string() });
   for (const [path, summary, id] of [
     ['/healthz', 'Liveness: the process is up', 'liveness'],

@@ -523,7 +523,13 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   );
 }
 
-function dragChange(
+/**
+ * Drag change of a slipping wall in the scenario's flow (laminar fixed flow rate,
+ * or turbulent virtual-origin shift at fixed bulk Reynolds number), from the slip
+ * lengths along the flow and spanwise (m). Exported so that other models (e.g.
+ * surfactant-reduced slip) reuse the one drag model.
+ */
+export function dragChange(
   scenario: Scenario,
   slipAlongFlow: number,
   slipSpanwise: number,

@@ -6,8 +6,9 @@ import { wavesCalculation } from './waves.js';
 import { wettingCalculation } from './wetting.js';
 import { retentionCalculation } from './retention.js';
 import { heatCalculation } from './heat.js';
+import { surfactantCalculation } from './surfactant.js';
 
-export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation, heatCalculation].map(
+export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation, surfactantCalculation, heatCalculation].map(
   (c) => c as unknown as CalculationDefinition,
 );
 
