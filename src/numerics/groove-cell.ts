@@ -278,6 +278,18 @@ function buildMesh(cell: ResolvedCell, includeGroove: boolean, depth: number): C
 }
 
 /**
+ * Velocity and shear stress on the interface face between a water cell (height
+ * hw, centre value ua) and a lubricant cell (height hb, centre value ub): flux
+ * continuity across the face with the half-cell conductances μ/(h/2), i.e. the
+ * harmonic face average of the finite-volume scheme.
+ */
+function interfaceFaceValues(ua: number, ub: number, hw: number, hb: number, muW: number, muO: number): { velocity: number; shear: number } {
+  const ga = muW / (hw / 2);
+  const gb = muO / (hb / 2);
+  return { velocity: (ga * ua + gb * ub) / (ga + gb), shear: (ua - ub) / (hw / (2 * muW) + hb / (2 * muO)) };
+}
+
+/**
  * Longitudinal groove cell. Throws CellInputError for impossible geometry
  * (non-positive or non-finite lengths, w ≥ P, N < 0) and SolverDivergence on
  * non-convergence.
@@ -374,13 +386,10 @@ function solveLongitudinalOnGrid(cell: ResolvedCell): GrooveCellResult {
       interfaceShear[q] = 0;
       waterGradient[q] = 0;
     } else {
-      const hb = mesh.heights[j0 - 1];
-      const ub = u[(j0 - 1) * nx + i];
-      const ga = muW / (hw / 2);
-      const gb = muO / (hb / 2);
-      velocity[q] = (ga * ua + gb * ub) / (ga + gb);
-      interfaceShear[q] = (ua - ub) / (hw / (2 * muW) + hb / (2 * muO));
-      waterGradient[q] = interfaceShear[q] / muW;
+      const face = interfaceFaceValues(ua, u[(j0 - 1) * nx + i], hw, mesh.heights[j0 - 1], muW, muO);
+      velocity[q] = face.velocity;
+      interfaceShear[q] = face.shear;
+      waterGradient[q] = face.shear / muW;
     }
   }
   let lubricantFlux = 0;
@@ -545,13 +554,10 @@ function solveTransverseOnGrid(cell: ResolvedCell): GrooveCellResult {
     if (shearFree) {
       velocity[q] = ua;
     } else {
-      const hb = mesh.heights[j0 - 1];
-      const ub = u[(j0 - 1) * nx + i];
-      const ga = muW / (hw / 2);
-      const gb = muO / (hb / 2);
-      velocity[q] = (ga * ua + gb * ub) / (ga + gb);
-      interfaceShear[q] = (ua - ub) / (hw / (2 * muW) + hb / (2 * muO));
-      waterGradient[q] = interfaceShear[q] / muW;
+      const face = interfaceFaceValues(ua, u[(j0 - 1) * nx + i], hw, mesh.heights[j0 - 1], muW, muO);
+      velocity[q] = face.velocity;
+      interfaceShear[q] = face.shear;
+      waterGradient[q] = face.shear / muW;
     }
   }
   // Recirculating flux: largest |ψ| in the cavity, ψ(x, y) = ∫_{−d}^{y} u dy' along each u-face.
