@@ -143,6 +143,8 @@ export interface DrainageInput {
   timelinePoints?: number;
   /** Local-error tolerances of the time integrator on the cell fillings (defaults 1e-3, 1e-3). */
   relativeTolerance?: number;
+  /** Step budget of the time integration (default 200 000). */
+  maxSteps?: number;
   absoluteTolerance?: number;
 }
 
@@ -414,6 +416,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
     relativeTolerance: input.relativeTolerance ?? 1e-3,
     absoluteTolerance: input.absoluteTolerance ?? 1e-3,
     newtonTolerance: 1e-11,
+    ...(input.maxSteps === undefined ? {} : { maxSteps: input.maxSteps }),
     onStep(time, fill) {
       let volume = 0;
       for (let i = 0; i < n; i++) volume += Math.max(0, fill[i]);

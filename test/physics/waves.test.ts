@@ -298,7 +298,7 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
 });
 
 describe('evaluateWaves: design outputs', () => {
-  const example = JSON.parse(readFileSync(new URL('../../examples/waves-worked-example.json', import.meta.url), 'utf8')) as WavesInput;
+  const example = JSON.parse(readFileSync(new URL('./waves-demo-input.json', import.meta.url), 'utf8')) as WavesInput;
   const worked = evaluateWaves(example);
 
   it('worked example (demo): every number finite, map contains the design point, curve has 121 points', () => {

@@ -64,7 +64,7 @@ export const retentionCalculation = defineCalculation({
     workingFluid: { fluid: 'water', temperature: '20 degC' },
     flow: { kind: 'channel', height: '5 mm', bulkVelocity: '2 m/s' },
     contactAngles: { underWorkingFluid: { advancing: 46, receding: 0 } },
-    grooveLength: '50 mm',
+    grooveLength: '20 mm',
     grooveEnds: 'open',
     duration: '2 h',
   },
