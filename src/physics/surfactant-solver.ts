@@ -63,7 +63,19 @@ export function diffusiveLayerThickness(length: number, shearRate: number, bulkD
   return length * LANDEL_FIT.delta0 * Math.pow(1 + (LANDEL_FIT.delta1 * shearRate * length * length) / bulkDiffusivity, -1 / 3);
 }
 
-export interface TransverseSolverInput {
+/** Surfactant, its bulk state and the Newton controls shared by both interface solvers. */
+export interface SurfactantSolveConditions {
+  surfactant: ResolvedSurfactant;
+  /** c0, mol/m³. */
+  bulkConcentration: number;
+  /** T, K. */
+  temperature: number;
+  /** Newton tolerance on the dimensionless residual, ∞-norm (default 1e-10). */
+  tolerance?: number;
+  maxIterations?: number;
+}
+
+export interface TransverseSolverInput extends SurfactantSolveConditions {
   /** P, m. */
   pitch: number;
   /** w, m (0 < w < P). */
@@ -74,16 +86,8 @@ export interface TransverseSolverInput {
   viscosity: number;
   /** b_local of the lubricant, m; undefined or non-finite = gas (no drag). */
   localSlipLength?: number;
-  surfactant: ResolvedSurfactant;
-  /** c0, mol/m³. */
-  bulkConcentration: number;
-  /** T, K. */
-  temperature: number;
   /** Requested cells per period (default 256; the solver picks N ≥ this so the gap is whole cells). */
   cells?: number;
-  /** Newton tolerance on the dimensionless residual, ∞-norm (default 1e-10). */
-  tolerance?: number;
-  maxIterations?: number;
 }
 
 export interface InterfaceProfile {
@@ -358,20 +362,15 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
   };
 }
 
-export interface LongWaveInput {
+export interface LongWaveInput extends SurfactantSolveConditions {
   /** L_g, m. */
   grooveLength: number;
   /** U_c = γ̇ b_∥/φ, clean groove-mean interface velocity, m/s. */
   cleanInterfaceVelocity: number;
   shearRate: number;
   viscosity: number;
-  surfactant: ResolvedSurfactant;
-  bulkConcentration: number;
-  temperature: number;
   /** Cells along the groove (default 200). */
   cells?: number;
-  tolerance?: number;
-  maxIterations?: number;
   /** Richardson-extrapolate the retained slip from `cells` and `cells/2` (default true). */
   extrapolate?: boolean;
 }
