@@ -9,7 +9,7 @@
  * Run: npx tsx bench/slip-error-map.ts [cellsPerPitch]
  */
 import os from 'node:os';
-import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/numerics/groove-cell.js';
+import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/physics/groove/groove-cell.js';
 import {
   belyaevVinogradovaSlipLengthLongitudinal,
   belyaevVinogradovaSlipLengthTransverse,

@@ -12,7 +12,7 @@ import {
   solveTransverseCell,
   type GrooveCellInput,
   type GrooveCellResult,
-} from '../numerics/groove-cell.js';
+} from './groove/groove-cell.js';
 import { ConvergenceError, DomainError, Notes, outcome, type Outcome } from './common.js';
 import { GROOVE_DUCT_REFERENCES } from './groove-duct.js';
 import type { Scenario } from './scenario.js';
@@ -45,7 +45,7 @@ export interface SlipInput {
   wavesRegime?: WavesRegime;
   /** Wetting state from the wetting model ('film-covered' | 'infused-exposed-tops' | 'not-wetting'). */
   wettingState?: string;
-  /** Field-solver resolution (passed to src/numerics/groove-cell.ts). */
+  /** Field-solver resolution (passed to src/physics/groove/groove-cell.ts). */
   grid?: { cellsPerPitch?: number; maxCells?: number; domainHeight?: number };
 }
 
@@ -267,7 +267,7 @@ interface FieldRun {
 }
 
 /**
- * Both groove-cell solves (src/numerics/groove-cell.ts). Non-convergence maps to
+ * Both groove-cell solves (src/physics/groove/groove-cell.ts). Non-convergence maps to
  * ConvergenceError, impossible geometry to DomainError; any other failure of one
  * direction is recorded so that direction falls back to the closed form with a warning.
  */
@@ -323,7 +323,7 @@ function validate(scenario: Scenario): void {
  * lid-sheared duct series (longitudinal) and the shear-driven cavity table
  * (transverse), inserted into the Belyaev–Vinogradova stripe formulas
  * (transverse through the Asmolov–Vinogradova relation); slip tensor for the flow
- * angle. Field: the groove-cell solvers (src/numerics/groove-cell.ts), exact for a
+ * angle. Field: the groove-cell solvers (src/physics/groove/groove-cell.ts), exact for a
  * flat interface; about 0.05–0.3 s along and 0.5–2 s across the grooves on the
  * default grid (more for extreme geometry), so the API should run `field`/`auto`
  * in a worker thread. `auto` uses the closed form only where the measured error

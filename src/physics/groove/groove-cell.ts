@@ -8,10 +8,10 @@
  * τ acts. Viscosity ratio N = μ_lubricant / μ_water.
  *
  * Longitudinal (flow along the grooves): div(μ grad u) = 0 solved with the
- * general finite-volume solver of ./cell-diffusion.ts (harmonic face
+ * general finite-volume solver of ../../numerics/cell-diffusion.ts (harmonic face
  * viscosities: u and μ ∂u/∂y continuous across the mouth; N = 0 = zero-stress
  * mouth exactly). Transverse (flow across the grooves): 2-D Stokes on a MAC
- * mesh, ./stokes-cell.ts. In both b = ū(H) μ_w / τ − H.
+ * mesh, ../../numerics/stokes-cell.ts. In both b = ū(H) μ_w / τ − H.
  *
  * Why finite volumes with multigrid rather than an eigenfunction method: the
  * same code serves the heat engineer's conduction and duct problems with
@@ -38,11 +38,11 @@
  * 4. Richardson L.F. (1911) Phil. Trans. R. Soc. A 210, 307–357 (from memory).
  */
 
-import { solveCellDiffusion, CellInputError } from './cell-diffusion.js';
-import { solveStokesCell } from './stokes-cell.js';
+import { solveCellDiffusion, CellInputError } from '../../numerics/cell-diffusion.js';
+import { solveStokesCell } from '../../numerics/stokes-cell.js';
 
 export { solveCellDiffusion, CellInputError };
-export type { CellDiffusionProblem, CellDiffusionResult, CellBoundary, CellSides } from './cell-diffusion.js';
+export type { CellDiffusionProblem, CellDiffusionResult, CellBoundary, CellSides } from '../../numerics/cell-diffusion.js';
 
 export interface GrooveCellInput {
   /** Texture period P (m), > 0. */
@@ -294,7 +294,7 @@ function interfaceFaceValues(ua: number, ub: number, hw: number, hb: number, muW
  * (non-positive or non-finite lengths, w ≥ P, N < 0) and SolverDivergence on
  * non-convergence.
  *
- * Method: div(μ grad u) = 0 by the finite-volume solver of ./cell-diffusion.ts
+ * Method: div(μ grad u) = 0 by the finite-volume solver of ../../numerics/cell-diffusion.ts
  * on an edge-graded mesh; μ = μ_w above y = 0, N μ_w in the groove; ridge
  * cells fixed (u = 0 on their faces: no slip), u = 0 on the groove floor,
  * μ_w ∂u/∂y = τ at y = H, periodic in z. The harmonic face conductance makes
@@ -482,7 +482,7 @@ function summarise(
  *
  * Method: staggered (MAC) finite volumes on the same edge-graded mesh, the
  * Stokes system solved by the Uzawa / pressure-Schur-complement conjugate
- * gradient method (see ./stokes-cell.ts). The interface y = 0 is flat and
+ * gradient method (see ../../numerics/stokes-cell.ts). The interface y = 0 is flat and
  * impermeable (v = 0 on every face of that line); the tangential velocity u and
  * the stress μ ∂u/∂y are continuous across the mouth through the harmonic face
  * viscosity, as in the longitudinal problem; N = 0 removes the cavity and leaves

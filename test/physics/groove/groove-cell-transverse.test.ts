@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { solveTransverseCell, solveLongitudinalCell, CellInputError } from '../../src/numerics/groove-cell.js';
+import { solveTransverseCell, solveLongitudinalCell, CellInputError } from '../../../src/physics/groove/groove-cell.js';
 
 /** Philip (1972) ZAMP 23, 353; Lauga & Stone (2003) J. Fluid Mech. 489, 55: b_⊥ = (P/2π) ln sec(πφ/2), half of b_∥. */
 const philipTransverse = (pitch: number, fraction: number): number => (pitch / (2 * Math.PI)) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
