@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
 import { resolveFluid } from '../src/materials/resolve.js';
-import { evaluateFlow } from '../src/physics/flow.js';
+import { evaluateFlow } from '../src/physics/flow/flow.js';
 import {
   evaluateHeat,
   rectangularDuctLaminar,
@@ -14,7 +14,7 @@ import {
   thermalSlipAdiabaticGrooves,
   thermalSlipField,
   type HeatInput,
-} from '../src/physics/heat.js';
+} from '../src/physics/heat/heat.js';
 
 const time = <R>(f: () => R): [R, number] => {
   const t0 = performance.now();

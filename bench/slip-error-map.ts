@@ -3,7 +3,7 @@
  * lid-sheared-duct mean local slip; transverse via Asmolov–Vinogradova with the
  * shallow-groove recirculation slip) against the groove-cell field solver, over
  * interface fraction φ, depth ratio d/w and viscosity ratio N. Prints one row per
- * case and the time per field solve. The `auto` rule in src/physics/slip.ts is
+ * case and the time per field solve. The `auto` rule in src/physics/slip/slip.ts is
  * read off this table.
  *
  * Run: npx tsx bench/slip-error-map.ts [cellsPerPitch]
@@ -14,7 +14,7 @@ import {
   belyaevVinogradovaSlipLengthLongitudinal,
   belyaevVinogradovaSlipLengthTransverse,
   grooveLocalSlipLengths,
-} from '../src/physics/stripe-slip.js';
+} from '../src/physics/slip/stripe-slip.js';
 
 type Solver = (input: GrooveCellInput) => GrooveCellResult;
 

@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
-import { evaluateWaves, type WavesInput } from '../src/physics/waves.js';
+import { evaluateWaves, type WavesInput } from '../src/physics/waves/waves.js';
 
 const input = JSON.parse(readFileSync(new URL('../examples/waves-worked-example.json', import.meta.url), 'utf8')) as WavesInput;
 console.log(`node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown'}), shared machine`);

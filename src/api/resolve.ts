@@ -3,9 +3,9 @@
  * catalogue look-up of fluids, flow conditions, texture defaults.
  */
 import { Notes } from '../physics/common.js';
-import { evaluateFlow, type FlowResult } from '../physics/flow.js';
+import { evaluateFlow, type FlowResult } from '../physics/flow/flow.js';
 import type { Scenario, Texture } from '../physics/scenario.js';
-import { resolveInterfacialTension } from '../physics/wetting.js';
+import { resolveInterfacialTension } from '../physics/wetting/wetting.js';
 import type { FluidState } from '../materials/types.js';
 import { resolveFluid } from '../materials/index.js';
 import { canonicalJson } from './envelope.js';

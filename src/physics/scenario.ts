@@ -20,7 +20,7 @@ export interface Texture {
 export type FlowKind = 'channel' | 'pipe' | 'plate' | 'wall-shear';
 export type FlowRegime = 'laminar' | 'transitional' | 'turbulent';
 
-/** Flow conditions at the wall, from {@link import('./flow.js').evaluateFlow}. */
+/** Flow conditions at the wall, from {@link import('./flow/flow.js').evaluateFlow}. */
 export interface FlowState {
   kind: FlowKind;
   /** τ_w, Pa, on a smooth no-slip wall. */

@@ -1,7 +1,7 @@
 /** POST /v1/heat — how the liquid-infused wall changes heat transfer against the solid-filled wall. */
 import { Notes } from '../../physics/common.js';
-import { evaluateHeat } from '../../physics/heat.js';
-import { evaluateSlip } from '../../physics/slip.js';
+import { evaluateHeat } from '../../physics/heat/heat.js';
+import { evaluateSlip } from '../../physics/slip/slip.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { designEcho, resolveDesign } from '../resolve.js';

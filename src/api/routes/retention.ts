@@ -1,8 +1,8 @@
 /** POST /v1/retention — how much lubricant stays in the grooves, and how fast the rest drains. */
 import { Notes } from '../../physics/common.js';
-import { evaluateRetention } from '../../physics/retention.js';
-import { evaluateSlip, type SlipMethod } from '../../physics/slip.js';
-import { evaluateWetting } from '../../physics/wetting.js';
+import { evaluateRetention } from '../../physics/retention/retention.js';
+import { evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
+import { evaluateWetting } from '../../physics/wetting/wetting.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { designEcho, resolveDesign } from '../resolve.js';

@@ -1,7 +1,7 @@
 /** POST /v1/slip — slip lengths and drag change of a lubricant-infused grooved wall. */
 import { Notes } from '../../physics/common.js';
-import { evaluateSlip, type SlipMethod } from '../../physics/slip.js';
-import { evaluateWaves, waveRoughnessWarning } from '../../physics/waves.js';
+import { evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
+import { evaluateWaves, waveRoughnessWarning } from '../../physics/waves/waves.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { designEcho, resolveDesign } from '../resolve.js';

@@ -1,7 +1,7 @@
 /** POST /v1/surfactant — how much of the slip survives traces of surfactant? */
 import { Notes } from '../../physics/common.js';
-import { dragChange, evaluateSlip, type SlipMethod } from '../../physics/slip.js';
-import { evaluateSurfactant } from '../../physics/surfactant.js';
+import { dragChange, evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
+import { evaluateSurfactant } from '../../physics/surfactant/surfactant.js';
 import { getSurfactant, resolveSurfactant, type InterfaceType } from '../../materials/surfactants.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';

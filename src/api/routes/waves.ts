@@ -1,7 +1,7 @@
 /** POST /v1/waves — do capillary waves on the lubricant interface stay calm? */
 import { Notes } from '../../physics/common.js';
-import { evaluateSlip } from '../../physics/slip.js';
-import { evaluateWaves } from '../../physics/waves.js';
+import { evaluateSlip } from '../../physics/slip/slip.js';
+import { evaluateWaves } from '../../physics/waves/waves.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { designEcho, resolveDesign } from '../resolve.js';

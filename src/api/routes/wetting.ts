@@ -1,6 +1,6 @@
 /** POST /v1/wetting — is the lubricant-in-texture state stable under the working fluid? */
 import { Notes } from '../../physics/common.js';
-import { evaluateWetting } from '../../physics/wetting.js';
+import { evaluateWetting } from '../../physics/wetting/wetting.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { fluidEcho, resolveFluidInput, resolveTexture } from '../resolve.js';

@@ -1,0 +1,992 @@
+/**
+ * Interface wave stability of a lubricant-filled streamwise groove under a
+ * wall-bounded flow: does the lubricant–working-fluid interface stay flat
+ * (inside the viscous sublayer, so the surface keeps its slip), or do waves
+ * grow and act as roughness?
+ *
+ * Four views are evaluated and reported together:
+ *  1. Wall-unit scaling: the inertial–capillary number Λ = w⁺ We_τ^(1/3),
+ *     calm/wavy boundary Λ = 1 (common practice, no source).
+ *  2. Confined Kelvin–Helmholtz linear stability of the two-layer interface
+ *     (inviscid, capillarity, gravity, finite depths, interface pinned at the
+ *     groove edges) — see {@link interfaceGrowthRate}.
+ *  3. A critical-layer screen (Miles 1957): is there a height above the
+ *     viscous sublayer where the mean flow moves with the slowest confined
+ *     wave?
+ *  4. Static checks: depinning pressure 2γ/w against the turbulent
+ *     wall-pressure fluctuation, and the Rayleigh–Taylor limit of the pinned
+ *     interface when the denser liquid lies above.
+ *
+ * Regime. Each check is expressed as a load ratio Π (a pressure ratio, so
+ * the four are comparable): Π_Λ = Λ³ (dynamic pressure ρ(u_τ w⁺)² over the
+ * capillary pressure γ/w), Π_KH = (ΔU/ΔU_c)², Π_dep = p′_rms/(2γ/w),
+ * Π_RT = Δρ g_⊥ w²/(π²γ). Calm when every Π < ½. Wavy when Π_Λ > 2 (Λ more
+ * than 2^(1/3) above the trade boundary Λ = 1) or when any physical threshold
+ * is crossed (Π_KH, Π_dep or Π_RT ≥ 1). Marginal in between: for the scaling
+ * criterion the band 2^(−1/3) ≤ Λ ≤ 2^(1/3) is a factor of two either side
+ * of the boundary in the pressure ratio; for the physical criteria it is the
+ * last factor of two before the threshold. The band is our own choice,
+ * documented here. The margin is 1 − 2·max Π: 1 for an unloaded
+ * interface, 0 at the calm edge, negative beyond it.
+ *
+ * References:
+ *  1. Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability,
+ *     chs. X (Rayleigh–Taylor) and XI (Kelvin–Helmholtz). Oxford: Clarendon Press.
+ *  2. Lamb, H. (1932). Hydrodynamics, 6th ed., §§267–268. Cambridge
+ *     University Press.
+ *  3. Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1
+ *     (Kelvin–Helmholtz instability; section number from memory). Cambridge
+ *     University Press. doi:10.1017/CBO9780511616938 (2nd ed., 2004)
+ *  4. Miles, J. W. (1957). On the generation of surface waves by shear flows.
+ *     J. Fluid Mech. 3(2), 185–204. doi:10.1017/S0022112057000567
+ *  5. Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall
+ *     pressure fluctuations beneath turbulent boundary layers. Phys. Fluids A
+ *     3(10), 2410–2420. doi:10.1063/1.858179 (p′_rms/τ_w ≈ 2.5–3.4 from memory)
+ *  6. Spalding, D. B. (1961). A single formula for the "law of the wall".
+ *     J. Appl. Mech. 28(3), 455–458. doi:10.1115/1.3641728
+ */
+import { brent } from '../../numerics/roots.js';
+import { scanAndRefineMinimum } from '../../numerics/minimize.js';
+import { DomainError, Notes, STANDARD_GRAVITY, outcome } from '../common.js';
+import type { Outcome, Reference, Warning } from '../common.js';
+import type { FlowState, Scenario } from '../scenario.js';
+import {
+  SPALDING_1961,
+  VISCOUS_SUBLAYER_EDGE_PLUS,
+  velocityPlusAtWallDistance,
+  wallDistanceAtVelocityPlus,
+} from '../flow/wall-profile.js';
+
+// ---------------------------------------------------------------------------
+// References
+// ---------------------------------------------------------------------------
+
+export const WAVE_REFERENCES = {
+  chandrasekhar1961: {
+    key: 'chandrasekhar1961',
+    citation:
+      'Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability, ch. X (Rayleigh–Taylor instability) and ch. XI (Kelvin–Helmholtz instability). Oxford: Clarendon Press.',
+  },
+  lamb1932: {
+    key: 'lamb1932',
+    citation: 'Lamb, H. (1932). Hydrodynamics, 6th ed., §§267–268 (capillary waves; waves under wind). Cambridge University Press.',
+  },
+  drazinReid1981: {
+    key: 'drazinReid1981',
+    citation: 'Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1 (Kelvin–Helmholtz instability). Cambridge University Press; DOI of the 2nd ed. (2004).',
+    doi: '10.1017/CBO9780511616938',
+  },
+  miles1957: {
+    key: 'miles1957',
+    citation: 'Miles, J. W. (1957). On the generation of surface waves by shear flows. Journal of Fluid Mechanics 3(2), 185–204.',
+    doi: '10.1017/S0022112057000567',
+  },
+  farabeeCasarella1991: {
+    key: 'farabeeCasarella1991',
+    citation:
+      'Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall pressure fluctuations beneath turbulent boundary layers. Physics of Fluids A 3(10), 2410–2420 (rms level 2.5–3.4 τ_w used here from memory).',
+    doi: '10.1063/1.858179',
+  },
+} satisfies Record<string, Reference>;
+
+// ---------------------------------------------------------------------------
+// Two-layer dispersion relation
+// ---------------------------------------------------------------------------
+
+/**
+ * A plane interface between a wall-side layer (the lubricant in the groove,
+ * "layer 1") and an outer layer (the working fluid, "layer 2"), each in
+ * uniform motion along x. SI units throughout.
+ */
+export interface TwoLayerInterface {
+  /** ρ₁, kg/m³, of the wall-side layer (> 0). */
+  wallSideDensity: number;
+  /** ρ₂, kg/m³, of the outer layer (> 0). */
+  outerDensity: number;
+  /** h₁, m, depth of the wall-side layer (groove depth); omitted = deep. */
+  wallSideDepth?: number;
+  /** h₂, m, depth of the outer layer to the opposite wall or symmetry plane; omitted = deep. */
+  outerDepth?: number;
+  /** U₁, m/s. */
+  wallSideVelocity: number;
+  /** U₂, m/s. */
+  outerVelocity: number;
+  /** γ, N/m (> 0). */
+  interfacialTension: number;
+  /**
+   * g_⊥, m/s²: component of gravity pointing from the outer layer into the
+   * wall-side layer. Positive with a denser wall-side layer is stabilising
+   * (lubricant below water on an upward-facing wall).
+   */
+  normalGravity: number;
+  /** m, rad/m: spanwise wavenumber of the pinned mode, π/w; 0 = unconfined interface. */
+  spanwiseWavenumber: number;
+}
+
+/** coth(x) for x > 0, exact to rounding for large x and via the series for tiny x. */
+function hyperbolicCotangent(x: number): number {
+  if (x > 20) return 1;
+  if (x < 1e-4) return 1 / x + x / 3;
+  return 1 / Math.tanh(x);
+}
+
+/** ρ_j coth(K h_j): the added inertia of layer j per unit area times K. */
+function layerInertia(density: number, depth: number | undefined, totalWavenumber: number): number {
+  if (depth === undefined) return density;
+  return density * hyperbolicCotangent(totalWavenumber * depth);
+}
+
+interface DispersionTerms {
+  /** K = √(k² + m²), rad/m. */
+  total: number;
+  /** a₁ = ρ₁ coth(K h₁). */
+  inertia1: number;
+  /** a₂ = ρ₂ coth(K h₂). */
+  inertia2: number;
+  /** R = (ρ₁ − ρ₂) g_⊥ + γK², Pa/m: restoring pressure per unit displacement. */
+  restoring: number;
+}
+
+function dispersionTerms(layers: TwoLayerInterface, streamwiseWavenumber: number): DispersionTerms {
+  const total = Math.hypot(streamwiseWavenumber, layers.spanwiseWavenumber);
+  return {
+    total,
+    inertia1: layerInertia(layers.wallSideDensity, layers.wallSideDepth, total),
+    inertia2: layerInertia(layers.outerDensity, layers.outerDepth, total),
+    restoring: (layers.wallSideDensity - layers.outerDensity) * layers.normalGravity + layers.interfacialTension * total * total,
+  };
+}
+
+/**
+ * Temporal growth rate σ = Im ω of the interface mode η ∝ cos(mz) e^{i(kx − ωt)}.
+ *
+ * Linearised inviscid potential flow in each layer, potential
+ * φ_j ∝ cos(mz) e^{ikx} cosh(K(h_j ∓ y)) with the total wavenumber
+ * K = √(k² + m²) (Laplace's equation in three dimensions: the decay away
+ * from the interface and the coth(K h_j) depth factor both use K, not k);
+ * kinematic condition on each side, and the normal-stress jump balanced by
+ * gravity and by the capillary pressure of the doubly curved interface,
+ * γ(k² + m²)η. The pinned groove interface is represented by its
+ * fundamental spanwise mode cos(πz/w), m = π/w (a one-mode approximation:
+ * the sidewall condition of the lubricant is not imposed exactly). This
+ * gives (Chandrasekhar 1961, ch. XI, eq. for two uniform streams, extended
+ * by the finite depths of Drazin & Reid 1981 and the spanwise mode):
+ *
+ *   a₁(ω − kU₁)² + a₂(ω − kU₂)² = K R,   a_j = ρ_j coth(K h_j),
+ *   R = (ρ₁ − ρ₂) g_⊥ + γK²,
+ *
+ *   ω = k(a₁U₁ + a₂U₂)/(a₁ + a₂) ± √( K R/(a₁ + a₂) − k² a₁a₂ ΔU²/(a₁ + a₂)² ),
+ *
+ * ΔU = U₂ − U₁, so σ² = k² a₁a₂ΔU²/(a₁ + a₂)² − K R/(a₁ + a₂) when positive.
+ *
+ * @param layers the two layers (SI).
+ * @param streamwiseWavenumber k, rad/m (≥ 0).
+ * @returns σ, 1/s (0 for a neutral mode). Validity: inviscid, small slope,
+ *   uniform streams (the shear inside each layer is ignored).
+ */
+export function interfaceGrowthRate(layers: TwoLayerInterface, streamwiseWavenumber: number): number {
+  const t = dispersionTerms(layers, streamwiseWavenumber);
+  if (!(t.total > 0)) return 0;
+  const sum = t.inertia1 + t.inertia2;
+  const deltaU = layers.outerVelocity - layers.wallSideVelocity;
+  const driving = (streamwiseWavenumber ** 2 * t.inertia1 * t.inertia2 * deltaU ** 2) / (sum * sum);
+  const growthSquared = driving - (t.total * t.restoring) / sum;
+  return growthSquared > 0 && Number.isFinite(growthSquared) ? Math.sqrt(growthSquared) : 0;
+}
+
+/**
+ * Velocity difference at which the mode of streamwise wavenumber k is
+ * neutral: ΔU_n²(k) = (a₁ + a₂) K R/(k² a₁a₂) (set σ = 0 in
+ * {@link interfaceGrowthRate}; same references and validity).
+ * @param layers the two layers (SI; the velocities are not used).
+ * @param streamwiseWavenumber k, rad/m.
+ * @returns ΔU_n, m/s; 0 when R ≤ 0 (statically unstable at that K);
+ *   Number.MAX_VALUE for k = 0 with R > 0 (no finite ΔU destabilises it).
+ */
+export function neutralVelocityDifference(layers: TwoLayerInterface, streamwiseWavenumber: number): number {
+  const t = dispersionTerms(layers, streamwiseWavenumber);
+  if (!(t.restoring > 0) || !(t.total > 0)) return 0;
+  if (!(streamwiseWavenumber > 0)) return Number.MAX_VALUE;
+  const value = Math.sqrt(((t.inertia1 + t.inertia2) * t.total * t.restoring) / (streamwiseWavenumber ** 2 * t.inertia1 * t.inertia2));
+  return Number.isFinite(value) ? value : Number.MAX_VALUE;
+}
+
+/**
+ * Intrinsic phase speed of the neutral wave at rest (U₁ = U₂ = 0),
+ * c(k) = √(K R/(a₁ + a₂))/k (the dispersion relation of
+ * {@link interfaceGrowthRate} with ΔU = 0; for a deep free surface it is
+ * Lamb's c² = g/k + γk/ρ, Lamb 1932 §267).
+ * @param layers the two layers (SI; the velocities are not used).
+ * @param streamwiseWavenumber k, rad/m.
+ * @returns c, m/s; 0 where R ≤ 0; Number.MAX_VALUE for k = 0 with R > 0.
+ */
+export function intrinsicPhaseSpeed(layers: TwoLayerInterface, streamwiseWavenumber: number): number {
+  const t = dispersionTerms(layers, streamwiseWavenumber);
+  if (!(t.restoring > 0) || !(streamwiseWavenumber > 0)) return t.restoring > 0 ? Number.MAX_VALUE : 0;
+  const value = Math.sqrt((t.total * t.restoring) / (t.inertia1 + t.inertia2)) / streamwiseWavenumber;
+  return Number.isFinite(value) ? value : Number.MAX_VALUE;
+}
+
+/** Reference wavenumber that sets the scan range: m, else the capillary wavenumber √(|Δρ g_⊥|/γ). */
+function referenceWavenumber(layers: TwoLayerInterface): number {
+  if (layers.spanwiseWavenumber > 0) return layers.spanwiseWavenumber;
+  return Math.sqrt(Math.abs((layers.wallSideDensity - layers.outerDensity) * layers.normalGravity) / layers.interfacialTension);
+}
+
+/** Decades either side of the reference wavenumber covered by the scans. */
+const SCAN_DECADES = 3;
+/** Grid points of the coarse scans (20 per decade). */
+const SCAN_POINTS = 121;
+
+export interface WavenumberExtremum {
+  /** k at the extremum, rad/m (0 when the extremum lies at k → 0). */
+  wavenumber: number;
+  /** The extremal value, in the unit of the quantity extremised (m/s for speeds, 1/s for growth rates). */
+  value: number;
+}
+
+function minimiseOverWavenumber(layers: TwoLayerInterface, f: (k: number) => number): WavenumberExtremum {
+  const reference = referenceWavenumber(layers);
+  if (!(reference > 0)) return { wavenumber: 0, value: f(0) };
+  const lo = Math.log(reference) - SCAN_DECADES * Math.LN10;
+  const hi = Math.log(reference) + SCAN_DECADES * Math.LN10;
+  const best = scanAndRefineMinimum((s) => f(Math.exp(s)), lo, hi, { gridPoints: SCAN_POINTS, xTolerance: 1e-10 });
+  return { wavenumber: Math.exp(best.x), value: best.value };
+}
+
+/**
+ * Critical velocity difference ΔU_c = min_k ΔU_n(k), and the wavenumber
+ * where it occurs (coarse scan over six decades of k around π/w, then
+ * golden-section refinement in log k).
+ *
+ * Unconfined deep layers with gravity (m = 0, h → ∞; Lamb 1932 §268,
+ * Chandrasekhar 1961 ch. XI): ΔU_n² = ((ρ₁ + ρ₂)/(ρ₁ρ₂))(Δρ g/k + γk) is
+ * least at k = √(Δρ g/γ), where Δρ g/k + γk = 2√(Δρ g γ), so
+ *   ΔU_c⁴ = 4 g γ Δρ (ρ₁ + ρ₂)²/(ρ₁² ρ₂²)
+ * (about 6.5 m/s for air over water).
+ *
+ * Confined deep layers without gravity (m = π/w, h → ∞, g = 0):
+ * ΔU_n² = ((ρ₁ + ρ₂)/(ρ₁ρ₂)) γ K³/k². With f(k) = (k² + m²)^(3/2)/k²,
+ * d ln f/dk = 3k/(k² + m²) − 2/k = 0 gives k² = 2m², i.e. k* = √2 π/w,
+ * K*² = 3m², f(k*) = (3m²)^(3/2)/(2m²) = (3√3/2) m, hence
+ *   ΔU_c² = ((ρ₁ + ρ₂)/(ρ₁ρ₂)) (3√3π/2) γ/w
+ * (see {@link confinedCriticalVelocityDifference}).
+ *
+ * Returns 0 when the interface is statically unstable (some K with R ≤ 0).
+ */
+export function criticalVelocityDifference(layers: TwoLayerInterface): WavenumberExtremum {
+  return minimiseOverWavenumber(layers, (k) => neutralVelocityDifference(layers, k));
+}
+
+/**
+ * Closed form for deep layers without gravity, derived in
+ * {@link criticalVelocityDifference}:
+ * ΔU_c = √( ((ρ₁ + ρ₂)/(ρ₁ρ₂)) (3√3π/2) γ/w ), at k* = √2 π/w.
+ * @param densityA ρ₁, kg/m³ (> 0). @param densityB ρ₂, kg/m³ (> 0).
+ * @param interfacialTension γ, N/m. @param grooveWidth w, m.
+ * @returns { velocityDifference (m/s), wavenumber k* (rad/m) }.
+ */
+export function confinedCriticalVelocityDifference(
+  densityA: number,
+  densityB: number,
+  interfacialTension: number,
+  grooveWidth: number,
+): { velocityDifference: number; wavenumber: number } {
+  const velocityDifference = Math.sqrt(
+    ((densityA + densityB) / (densityA * densityB)) * ((3 * Math.sqrt(3) * Math.PI) / 2) * (interfacialTension / grooveWidth),
+  );
+  return { velocityDifference, wavenumber: (Math.SQRT2 * Math.PI) / grooveWidth };
+}
+
+/**
+ * Slowest wave the interface carries at rest: c_min = min_k c(k) with c(k)
+ * from {@link intrinsicPhaseSpeed}. For an unconfined deep water surface
+ * under a much lighter fluid this is the gravity–capillary minimum
+ * c_min⁴ = 4gγΔρ/(ρ₁ + ρ₂)² → 4gγ/ρ (Lamb 1932 §267), about 23 cm/s at
+ * λ ≈ 1.7 cm. Returns 0 when the interface is statically unstable.
+ */
+export function slowestWaveSpeed(layers: TwoLayerInterface): WavenumberExtremum {
+  return minimiseOverWavenumber(layers, (k) => intrinsicPhaseSpeed(layers, k));
+}
+
+/**
+ * Largest growth rate σ_max (1/s) of {@link interfaceGrowthRate} over k, and
+ * the k (rad/m) where it occurs (scan over six decades around the reference
+ * wavenumber, golden-section refinement); value 0 and wavenumber 0 when
+ * every mode is stable.
+ */
+export function fastestGrowingMode(layers: TwoLayerInterface): WavenumberExtremum {
+  const best = minimiseOverWavenumber(layers, (k) => -interfaceGrowthRate(layers, k));
+  return best.value < 0 ? { wavenumber: best.wavenumber, value: -best.value } : { wavenumber: 0, value: 0 };
+}
+
+// ---------------------------------------------------------------------------
+// Evaluation of a design
+// ---------------------------------------------------------------------------
+
+export type WaveRegime = 'calm' | 'marginal' | 'wavy';
+export type WallFacing = 'up' | 'down' | 'vertical';
+export type WaveCriterion = 'inertial-capillary' | 'kelvin-helmholtz' | 'depinning' | 'rayleigh-taylor';
+
+export interface WavesInput {
+  scenario: Scenario;
+  /**
+   * Wall orientation: inclination of the wall from horizontal, degrees, and
+   * whether the textured face looks up (lubricant below the working fluid),
+   * down (lubricant above it) or sideways. Omitted: gravity neglected.
+   */
+  gravity?: { inclination: number; facing: WallFacing };
+  /**
+   * Longitudinal slip length b_∥ of the surface, m, from the slip model. Sets
+   * the interface drift u_s = u_τ² b_∥/ν (Navier slip under the linear
+   * sublayer). Omitted: 0 (interface at rest).
+   */
+  slipLengthLongitudinal?: number;
+  /** Cells per axis of the regime map (default 24, clamped to 2–200). */
+  mapResolution?: number;
+}
+
+export interface GrowthRatePoint {
+  /** k, rad/m. */
+  wavenumber: number;
+  /** σ, 1/s. */
+  growthRate: number;
+  /** ΔU at which this k turns unstable, m/s (the neutral curve; 0 where the interface is statically unstable). */
+  neutralVelocityDifference: number;
+}
+
+export interface WavesResult {
+  wallUnits: {
+    /** ℓ_ν = ν/u_τ, m. */
+    viscousLength: number;
+    /** w⁺ = w/ℓ_ν. */
+    grooveWidthPlus: number;
+    /** d⁺ = d/ℓ_ν. */
+    grooveDepthPlus: number;
+    /** We_τ = μ_w u_τ/γ (friction capillary number). */
+    frictionCapillaryNumber: number;
+    /** We_f = ρ_w u_τ² w/γ = w⁺ We_τ. */
+    frictionWeberNumber: number;
+    /** We_b = ρ_w U_b² w/γ; null without a bulk velocity. */
+    bulkWeberNumber: number | null;
+    /** Λ = w⁺ We_τ^(1/3). */
+    inertialCapillaryNumber: number;
+    /** The trade's calm/wavy boundary Λ = 1 (common practice, no source). */
+    inertialCapillaryBoundary: number;
+    /** u_s = u_τ² b_∥/ν, m/s. */
+    interfaceSlipVelocity: number;
+  };
+  kelvinHelmholtz: {
+    growthRateCurve: GrowthRatePoint[];
+    /** λ at the largest growth rate, m; null when every mode is stable. */
+    mostUnstableWavelength: number | null;
+    /** σ_max, 1/s (0 when stable). */
+    maxGrowthRate: number;
+    /** σ_max ν/u_τ². */
+    maxGrowthRatePlus: number;
+    /** ΔU_c, m/s, from the full dispersion relation; 0 when the interface is statically unstable. */
+    criticalVelocityDifference: number;
+    /** 2π/k at ΔU_c, m (the first wave to grow). */
+    criticalWavelength: number;
+    /** Deep-layer, no-gravity closed form ΔU_c = √(((ρ₁+ρ₂)/(ρ₁ρ₂))(3√3π/2)γ/w), m/s. */
+    deepLayerCriticalVelocityDifference: number;
+    /** ΔU across the interface at the wave's scale, m/s. */
+    velocityDifferenceImposed: number;
+    /** Height above the interface where ΔU is read, y_e = 1/K* = w/(√3π), m. */
+    velocityDifferenceHeight: number;
+    /** c_min, m/s: slowest confined wave, relative to the (resting) layers. */
+    slowestWaveSpeed: number;
+    /** c_min⁺ = c_min/u_τ. */
+    slowestWaveSpeedPlus: number;
+    /** λ of the slowest wave, m. */
+    slowestWaveWavelength: number;
+    /** Layer depths used: h₁ (groove depth) and h₂ (null = deep). */
+    lubricantDepth: number;
+    outerDepth: number | null;
+    /** g_⊥ used, m/s². */
+    normalGravity: number;
+  };
+  criticalLayer: {
+    /** u_s + c_min, m/s: speed of the slowest confined wave relative to the wall. */
+    waveSpeedRelativeToWall: number;
+    /** y_c⁺ where u⁺(y⁺) − u_s⁺ = c_min⁺; null when the wave outruns the fastest mean flow (no such height). */
+    criticalHeightPlus: number | null;
+    /** y_c, m; null as above. */
+    criticalHeight: number | null;
+    /** Sublayer edge used, y⁺ = 5 (common practice, no source). */
+    sublayerEdgePlus: number;
+    /** Largest mean velocity of the flow (centreline or free stream), m/s; null if unknown (wall-shear input). */
+    largestMeanVelocity: number | null;
+    /** True when y_c⁺ lies above the sublayer and inside the flow: waves can be fed there. */
+    exists: boolean;
+  };
+  staticChecks: {
+    /** 2γ/w, Pa. */
+    depinningPressure: number;
+    /** p′_rms range, Pa: 2.5 and 3.4 ρu_τ² (Farabee & Casarella 1991, from memory); 0 in laminar flow. */
+    wallPressureFluctuationLow: number;
+    wallPressureFluctuationHigh: number;
+    /** p′_rms(high)/(2γ/w). */
+    depinningRatio: number;
+    rayleighTaylor: {
+      /** Bo = |Δρ g_⊥| w²/γ. */
+      bondNumber: number;
+      /** π²: the pinned fundamental mode's limit (k → 0). */
+      criticalBondNumber: number;
+      /** True when gravity pulls the denser liquid towards the lighter one. */
+      destabilising: boolean;
+      stable: boolean;
+      /** Widest groove the interface holds against gravity, π√(γ/(|Δρ| g_⊥)), m; null when gravity stabilises. */
+      maxGrooveWidth: number | null;
+    };
+  };
+  /** Load ratio of each criterion (see the module comment). */
+  loadRatios: Record<WaveCriterion, number>;
+  governingCriterion: WaveCriterion;
+  regime: WaveRegime;
+  verdict: { calm: boolean; margin: number };
+  designLimits: {
+    /** Widest groove keeping the regime calm at this flow and tension, m; null if none found. */
+    maxGrooveWidth: number | null;
+    maxGrooveWidthPlus: number | null;
+    /** Lowest interfacial tension keeping it calm, N/m. */
+    minInterfacialTension: number | null;
+    /** Highest friction velocity this design tolerates calm, m/s. */
+    maxFrictionVelocity: number | null;
+  };
+  map: {
+    /** Column abscissae, We_τ (log-spaced). */
+    frictionCapillaryNumbers: number[];
+    /** Row ordinates, w⁺ (log-spaced). */
+    grooveWidthsPlus: number[];
+    /** regimes[row][column] at (w⁺_row, We_τ,column) with this flow and fluids. */
+    regimes: WaveRegime[][];
+    /** For each column, the w⁺ where max Π = 1 (calm/wavy boundary), null outside the search range. */
+    boundaryGrooveWidthPlus: (number | null)[];
+    designPoint: { frictionCapillaryNumber: number; grooveWidthPlus: number };
+  };
+}
+
+/** Cut-offs of the load ratio Π (see the module comment). */
+const CALM_LIMIT = 0.5;
+const SCALING_WAVY_LIMIT = 2;
+const PHYSICAL_WAVY_LIMIT = 1;
+/** p′_rms/τ_w band (Farabee & Casarella 1991, from memory). */
+const PRESSURE_FLUCTUATION_LOW = 2.5;
+const PRESSURE_FLUCTUATION_HIGH = 3.4;
+const DEFAULT_MAP_RESOLUTION = 24;
+
+/** What stays fixed while the design limits and the map vary w, γ or u_τ. */
+interface FixedConditions {
+  lubricantDensity: number;
+  workingDensity: number;
+  workingViscosity: number;
+  grooveDepth: number;
+  outerDepth: number | undefined;
+  normalGravity: number;
+  slipLength: number;
+  laminar: boolean;
+}
+
+interface DesignPoint {
+  grooveWidth: number;
+  interfacialTension: number;
+  frictionVelocity: number;
+}
+
+interface CriteriaEvaluation {
+  layers: TwoLayerInterface;
+  viscousLength: number;
+  grooveWidthPlus: number;
+  frictionCapillaryNumber: number;
+  inertialCapillaryNumber: number;
+  velocityDifferenceImposed: number;
+  velocityDifferenceHeight: number;
+  critical: WavenumberExtremum;
+  depinningPressure: number;
+  pressureFluctuationHigh: number;
+  bondNumber: number;
+  rayleighTaylorDestabilising: boolean;
+  ratios: Record<WaveCriterion, number>;
+}
+
+/**
+ * Mean velocity above the interface at height y, relative to the interface,
+ * in wall units: the linear sublayer in laminar flow, Spalding's law in
+ * turbulent flow (Navier slip shifts the whole near-wall profile by u_s, so
+ * the profile relative to the interface is the smooth-wall one).
+ */
+function relativeVelocityPlus(wallDistancePlus: number, laminar: boolean): number {
+  return laminar ? wallDistancePlus : velocityPlusAtWallDistance(wallDistancePlus);
+}
+
+function evaluateCriteria(fixed: FixedConditions, point: DesignPoint): CriteriaEvaluation {
+  const { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau } = point;
+  const kinematicViscosity = fixed.workingViscosity / fixed.workingDensity;
+  const viscousLength = kinematicViscosity / uTau;
+  const grooveWidthPlus = w / viscousLength;
+  const frictionCapillaryNumber = (fixed.workingViscosity * uTau) / gamma;
+  const inertialCapillaryNumber = grooveWidthPlus * Math.cbrt(frictionCapillaryNumber);
+  // The most dangerous confined wave, k* = √2 π/w, decays over 1/K* = w/(√3 π):
+  // the wave feels the mean-velocity difference accumulated over that height.
+  const velocityDifferenceHeight = w / (Math.sqrt(3) * Math.PI);
+  const velocityDifferenceImposed = uTau * relativeVelocityPlus(velocityDifferenceHeight / viscousLength, fixed.laminar);
+  const slipVelocity = (uTau * uTau * fixed.slipLength) / kinematicViscosity;
+  const layers: TwoLayerInterface = {
+    wallSideDensity: fixed.lubricantDensity,
+    outerDensity: fixed.workingDensity,
+    wallSideDepth: fixed.grooveDepth,
+    outerDepth: fixed.outerDepth,
+    wallSideVelocity: slipVelocity,
+    outerVelocity: slipVelocity + velocityDifferenceImposed,
+    interfacialTension: gamma,
+    normalGravity: fixed.normalGravity,
+    spanwiseWavenumber: Math.PI / w,
+  };
+  const critical = criticalVelocityDifference(layers);
+  const depinningPressure = (2 * gamma) / w;
+  const wallShearStress = fixed.workingDensity * uTau * uTau;
+  const pressureFluctuationHigh = fixed.laminar ? 0 : PRESSURE_FLUCTUATION_HIGH * wallShearStress;
+  const gravityLoad = (fixed.lubricantDensity - fixed.workingDensity) * fixed.normalGravity;
+  const bondNumber = (Math.abs(gravityLoad) * w * w) / gamma;
+  const rayleighTaylorDestabilising = gravityLoad < 0;
+  const rayleighTaylorRatio = rayleighTaylorDestabilising ? bondNumber / (Math.PI * Math.PI) : 0;
+  const kelvinHelmholtzRatio = critical.value > 0 ? (velocityDifferenceImposed / critical.value) ** 2 : 0;
+  return {
+    layers,
+    viscousLength,
+    grooveWidthPlus,
+    frictionCapillaryNumber,
+    inertialCapillaryNumber,
+    velocityDifferenceImposed,
+    velocityDifferenceHeight,
+    critical,
+    depinningPressure,
+    pressureFluctuationHigh,
+    bondNumber,
+    rayleighTaylorDestabilising,
+    ratios: {
+      'inertial-capillary': inertialCapillaryNumber ** 3,
+      'kelvin-helmholtz': kelvinHelmholtzRatio,
+      depinning: pressureFluctuationHigh / depinningPressure,
+      'rayleigh-taylor': rayleighTaylorRatio,
+    },
+  };
+}
+
+function governing(ratios: Record<WaveCriterion, number>): WaveCriterion {
+  let best: WaveCriterion = 'inertial-capillary';
+  for (const key of Object.keys(ratios) as WaveCriterion[]) if (ratios[key] > ratios[best]) best = key;
+  return best;
+}
+
+function regimeOf(ratios: Record<WaveCriterion, number>): WaveRegime {
+  if (
+    ratios['inertial-capillary'] > SCALING_WAVY_LIMIT ||
+    ratios['kelvin-helmholtz'] >= PHYSICAL_WAVY_LIMIT ||
+    ratios.depinning >= PHYSICAL_WAVY_LIMIT ||
+    ratios['rayleigh-taylor'] >= PHYSICAL_WAVY_LIMIT
+  ) {
+    return 'wavy';
+  }
+  return Math.max(...Object.values(ratios)) >= CALM_LIMIT ? 'marginal' : 'calm';
+}
+
+function marginOf(ratios: Record<WaveCriterion, number>): number {
+  return 1 - Math.max(...Object.values(ratios)) / CALM_LIMIT;
+}
+
+/**
+ * Root of g(ln x) = 0 for a monotonic load in x, searched over 30 e-folds
+ * either side of x0 (ln-space Brent). Null when no sign change is found.
+ */
+function solveOnLogScale(g: (x: number) => number, x0: number): number | null {
+  const f = (s: number) => g(Math.exp(s));
+  const lo = Math.log(x0) - 30;
+  const hi = Math.log(x0) + 30;
+  const flo = f(lo);
+  const fhi = f(hi);
+  if (!(flo * fhi < 0)) return null;
+  const root = brent(f, lo, hi, { xTolerance: 1e-12 });
+  return root.converged && Number.isFinite(root.root) ? Math.exp(root.root) : null;
+}
+
+function positive(value: number | undefined, field: string, what: string): number {
+  if (value === undefined || !Number.isFinite(value) || !(value > 0)) {
+    throw new DomainError(`${what} must be a positive finite number (got ${String(value)})`, { field });
+  }
+  return value;
+}
+
+/** Depth of the outer layer seen by the wave: the opposite wall, or the symmetry plane when both walls are textured. */
+function outerLayerDepth(flow: FlowState, notes: Notes): number | undefined {
+  if (flow.kind === 'channel' && flow.height !== undefined && flow.height > 0) {
+    const both = (flow.texturedWalls ?? 1) === 2;
+    notes.assume(
+      both
+        ? 'Outer layer depth for the wave: half the channel height (symmetry plane between two textured walls).'
+        : 'Outer layer depth for the wave: the full channel height (opposite wall smooth).',
+    );
+    return both ? flow.height / 2 : flow.height;
+  }
+  if (flow.kind === 'pipe' && flow.diameter !== undefined && flow.diameter > 0) {
+    notes.assume('Outer layer depth for the wave: the pipe radius.');
+    return flow.diameter / 2;
+  }
+  notes.assume('Outer layer treated as deep for the wave (no opposite wall given).');
+  return undefined;
+}
+
+/** Largest mean velocity of the flow (for the critical-layer screen), m/s, or null when unknown. */
+function largestMeanVelocity(flow: FlowState, slipVelocity: number, kinematicViscosity: number): number | null {
+  const bulk = flow.bulkVelocity;
+  if (flow.kind === 'plate') return bulk !== undefined && bulk > 0 ? bulk : null;
+  if (flow.kind === 'wall-shear') return null;
+  if (flow.regime === 'laminar' && bulk !== undefined && bulk > 0) {
+    // Poiseuille profiles: centreline 3/2 U_b (plates) and 2 U_b (tube) (exact).
+    return flow.kind === 'channel' ? 1.5 * bulk : 2 * bulk;
+  }
+  const halfSize = flow.kind === 'channel' ? (flow.height ?? 0) / 2 : (flow.diameter ?? 0) / 2;
+  const frictionReynolds = flow.frictionReynoldsNumber ?? (halfSize * flow.frictionVelocity) / kinematicViscosity;
+  if (frictionReynolds > 0 && Number.isFinite(frictionReynolds)) {
+    // Wall law at y⁺ = Re_τ; the outer wake is neglected, so this reads the
+    // centreline a little low (a screen, not a profile calculation).
+    return slipVelocity + flow.frictionVelocity * velocityPlusAtWallDistance(frictionReynolds);
+  }
+  return bulk !== undefined && bulk > 0 ? bulk : null;
+}
+
+/** Warning code that the slip/drag result carries when the interface is wavy. */
+export const WAVY_INTERFACE_WARNING_CODE = 'wavy-interface-drag-unreliable';
+
+/**
+ * The warning a drag result must carry when the wave verdict is `wavy`
+ * (waves act as roughness; the slip-based drag reduction is not to be
+ * trusted); null otherwise.
+ */
+export function waveRoughnessWarning(regime: WaveRegime): Warning | null {
+  if (regime !== 'wavy') return null;
+  return {
+    code: WAVY_INTERFACE_WARNING_CODE,
+    severity: 'warning',
+    message:
+      'The lubricant interface is in the wavy regime: interface waves act as roughness, so the computed drag reduction is not to be trusted and may be a drag increase.',
+  };
+}
+
+/**
+ * Evaluate interface wave stability for one design.
+ *
+ * Inputs (SI): scenario.texture.grooveWidth w and grooveDepth d (m);
+ * scenario.lubricant and scenario.workingFluid densities (kg/m³) and the
+ * working fluid's viscosity μ_w (Pa·s); scenario.flow.frictionVelocity u_τ
+ * (m/s); scenario.interfacialTension γ (N/m, required); gravity.inclination
+ * (degrees from horizontal) and facing; slipLengthLongitudinal b_∥ (m).
+ *
+ * Choices (documented where the issue is silent):
+ *  - ℓ_ν = ν_w/u_τ from the working fluid, so We_τ = μ_w u_τ/γ = ρu_τ²ℓ_ν/γ
+ *    holds exactly.
+ *  - Velocity difference across the interface at the wave's scale: the mean
+ *    velocity (Spalding's law, linear in laminar flow) at the decay height
+ *    1/K* = w/(√3π) of the most dangerous confined wave, relative to the
+ *    interface. Both layers drift with the interface slip velocity
+ *    u_s = u_τ² b_∥/ν (the lubricant is an inviscid plug at the interface
+ *    speed), which changes the wave's speed relative to the wall but not ΔU.
+ *  - Layer depths: h₁ = d; h₂ = channel height (half of it with two textured
+ *    walls), pipe radius, or deep. Inertia a_j = ρ_j coth(K h_j) with the
+ *    total wavenumber K = √(k² + (π/w)²).
+ *  - g_⊥ = g cos(inclination) towards the wall for an upward-facing wall,
+ *    away from it for a downward-facing one, 0 for a vertical wall.
+ *  - p′_rms band 2.5–3.4 τ_w; the upper value is used for the check
+ *    (conservative); zero in laminar flow. Transitional flow is treated as
+ *    turbulent.
+ *  - Critical layer: the slowest confined wave travels at u_s + c_min
+ *    relative to the wall (drift of the interface plus its intrinsic speed;
+ *    advection by the outer stream is left out), and its critical height is
+ *    where the mean velocity relative to the interface equals c_min. The
+ *    largest mean velocity is the Poiseuille centreline (laminar), the wall
+ *    law at y⁺ = Re_τ (turbulent channel or pipe), the free stream (plate), or
+ *    unknown (wall-shear input).
+ *  - Rayleigh–Taylor: the pinned fundamental mode with k → 0 (long grooves)
+ *    is stable while Δρ g_⊥ w²/γ < π² (the capillary cut-off √(Δρg/γ) of
+ *    Chandrasekhar 1961 ch. X must stay below π/w).
+ *  - Design limits vary one quantity with everything else fixed (for the
+ *    friction velocity: the flow class and p′/τ_w band stay as given).
+ *
+ * Worked example (examples/waves-worked-example.json, an invented demo):
+ * 30 µm wide, 30 µm deep n-hexadecane grooves (γ = 53 mN/m), water at 1 m/s
+ * in a 10 mm channel (u_τ = 0.0604 m/s): w⁺ = 1.81, We_τ = 1.14×10⁻³,
+ * Λ = 0.189 → calm, margin 0.987; ΔU_c = 5.75 m/s against ΔU = 0.020 m/s;
+ * widest calm groove 126 µm (w⁺ = 7.6), lowest calm tension 0.71 mN/m,
+ * highest calm friction velocity 0.177 m/s.
+ *
+ * @throws DomainError when interfacialTension is absent or a length,
+ *   density, viscosity or the friction velocity is not positive and finite.
+ */
+export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
+  const notes = new Notes();
+  const { scenario } = input;
+  if (scenario.interfacialTension === undefined) {
+    throw new DomainError(
+      'interfacialTension is required for the wave analysis: give it, or take it from the catalogue or the wetting model (Fowkes estimate)',
+      { field: 'interfacialTension' },
+    );
+  }
+  const gamma = positive(scenario.interfacialTension, 'interfacialTension', 'interfacialTension');
+  const w = positive(scenario.texture.grooveWidth, 'scenario.texture.grooveWidth', 'grooveWidth');
+  const d = positive(scenario.texture.grooveDepth, 'scenario.texture.grooveDepth', 'grooveDepth');
+  const lubricantDensity = positive(scenario.lubricant.density, 'scenario.lubricant.density', 'lubricant density');
+  const workingDensity = positive(scenario.workingFluid.density, 'scenario.workingFluid.density', 'working-fluid density');
+  const workingViscosity = positive(scenario.workingFluid.viscosity, 'scenario.workingFluid.viscosity', 'working-fluid viscosity');
+  const uTau = positive(scenario.flow.frictionVelocity, 'scenario.flow.frictionVelocity', 'frictionVelocity');
+  const slipLength = input.slipLengthLongitudinal ?? 0;
+  if (!Number.isFinite(slipLength) || slipLength < 0) {
+    throw new DomainError(`slipLengthLongitudinal must be finite and ≥ 0 (got ${slipLength})`, { field: 'slipLengthLongitudinal' });
+  }
+  if (input.slipLengthLongitudinal === undefined) {
+    notes.assume('No slip length given: interface slip velocity taken as 0 (it shifts the wave speed relative to the wall, not ΔU).');
+  }
+
+  let normalGravity = 0;
+  if (input.gravity === undefined) {
+    notes.assume('Gravity not given: neglected in the dispersion relation and the Rayleigh–Taylor check.');
+  } else {
+    const { inclination, facing } = input.gravity;
+    if (facing !== 'up' && facing !== 'down' && facing !== 'vertical') {
+      throw new DomainError(`gravity.facing must be "up", "down" or "vertical" (got ${String(facing)})`, { field: 'gravity.facing' });
+    }
+    if (!Number.isFinite(inclination)) {
+      throw new DomainError(`gravity.inclination must be a finite angle in degrees (got ${inclination})`, { field: 'gravity.inclination' });
+    }
+    const cosine = Math.cos((inclination * Math.PI) / 180);
+    normalGravity = facing === 'vertical' ? 0 : (facing === 'up' ? 1 : -1) * STANDARD_GRAVITY * cosine;
+    // cos(90°) is 6e-17 in floating point; a vertical wall has no normal gravity.
+    if (Math.abs(normalGravity) < 1e-12) normalGravity = 0;
+  }
+
+  let resolution = Math.round(input.mapResolution ?? DEFAULT_MAP_RESOLUTION);
+  if (!Number.isFinite(resolution) || resolution < 2 || resolution > 200) {
+    const clamped = Number.isFinite(resolution) ? Math.min(200, Math.max(2, resolution)) : DEFAULT_MAP_RESOLUTION;
+    notes.warn('map-resolution-clamped', `mapResolution ${String(input.mapResolution)} outside 2–200; using ${clamped}.`, 'info');
+    resolution = clamped;
+  }
+
+  const flow = scenario.flow;
+  const laminar = flow.regime === 'laminar';
+  const kinematicViscosity = workingViscosity / workingDensity;
+  const fixed: FixedConditions = {
+    lubricantDensity,
+    workingDensity,
+    workingViscosity,
+    grooveDepth: d,
+    outerDepth: outerLayerDepth(flow, notes),
+    normalGravity,
+    slipLength,
+    laminar,
+  };
+  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
+  const at = evaluateCriteria(fixed, design);
+  const layers = at.layers;
+
+  notes
+    .model('waves:inertial-capillary-scaling')
+    .model('waves:confined-kelvin-helmholtz-two-layer')
+    .model('waves:critical-layer-screen')
+    .model('waves:static-depinning-rayleigh-taylor')
+    .cite(
+      WAVE_REFERENCES.chandrasekhar1961,
+      WAVE_REFERENCES.lamb1932,
+      WAVE_REFERENCES.drazinReid1981,
+      WAVE_REFERENCES.miles1957,
+      WAVE_REFERENCES.farabeeCasarella1991,
+      SPALDING_1961,
+    );
+  notes.assume('Calm/wavy boundary Λ = w⁺ We_τ^(1/3) = 1 is a fact of the trade (common practice, no source).');
+  notes.assume('Inviscid linear theory with uniform streams in each layer; the pinned interface is represented by its fundamental spanwise mode cos(πz/w).');
+  if (laminar) {
+    notes.warn(
+      'laminar-flow-wave-scaling',
+      'The flow is laminar: the Λ boundary and the pressure-fluctuation check are calibrated on turbulent near-wall flow; the linear sublayer profile is used for ΔU and no wall-pressure fluctuation is applied.',
+      'caution',
+    );
+  }
+  if (Math.abs(scenario.texture.flowAngle) > 1) {
+    notes.warn(
+      'oblique-grooves-waves',
+      `Grooves at ${scenario.texture.flowAngle}° to the flow: the wave analysis assumes flow along the grooves and uses the full friction velocity (conservative for the streamwise waves).`,
+      'caution',
+    );
+  }
+
+  // --- Kelvin–Helmholtz outputs -------------------------------------------------
+  const m = Math.PI / w;
+  const growthRateCurve: GrowthRatePoint[] = [];
+  const curvePoints = 121;
+  for (let i = 0; i < curvePoints; i++) {
+    // k w/π from 0.02 to 20, log-spaced: both sides of k* = √2 π/w.
+    const k = m * 0.02 * 1000 ** (i / (curvePoints - 1));
+    growthRateCurve.push({
+      wavenumber: k,
+      growthRate: interfaceGrowthRate(layers, k),
+      neutralVelocityDifference: neutralVelocityDifference(layers, k),
+    });
+  }
+  const fastest = fastestGrowingMode(layers);
+  const slowest = slowestWaveSpeed(layers);
+  const closedForm = confinedCriticalVelocityDifference(lubricantDensity, workingDensity, gamma, w);
+  const slipVelocity = layers.wallSideVelocity;
+  if (at.critical.value === 0) {
+    notes.warn(
+      'interface-statically-unstable',
+      'Gravity overcomes the capillary restoring pressure of the pinned interface (Rayleigh–Taylor): no velocity difference is needed for the interface to deform.',
+      'warning',
+    );
+  }
+
+  // --- critical layer -------------------------------------------------------------
+  const slowestPlus = slowest.value / uTau;
+  const criticalHeightPlus = laminar ? slowestPlus : wallDistanceAtVelocityPlus(slowestPlus);
+  const largest = largestMeanVelocity(flow, slipVelocity, kinematicViscosity);
+  const waveSpeedRelativeToWall = slipVelocity + slowest.value;
+  const withinFlow = largest === null || waveSpeedRelativeToWall < largest;
+  const criticalLayerExists = criticalHeightPlus > VISCOUS_SUBLAYER_EDGE_PLUS && withinFlow && slowest.value > 0;
+  if (criticalLayerExists) {
+    notes.warn(
+      'critical-layer-present',
+      `The slowest confined wave (c_min⁺ = ${slowestPlus.toPrecision(3)}) matches the mean flow at y⁺ ≈ ${criticalHeightPlus.toPrecision(3)}, above the viscous sublayer: the flow can feed these waves there (Miles 1957 mechanism; screen of low confidence).`,
+      'caution',
+    );
+  }
+
+  // --- static checks ---------------------------------------------------------------
+  const wallShearStress = workingDensity * uTau * uTau;
+  const densityDifference = Math.abs(lubricantDensity - workingDensity);
+  const rayleighTaylorMaxWidth =
+    at.rayleighTaylorDestabilising && densityDifference > 0 ? Math.PI * Math.sqrt(gamma / (densityDifference * Math.abs(normalGravity))) : null;
+  if (at.ratios['rayleigh-taylor'] >= PHYSICAL_WAVY_LIMIT) {
+    notes.warn(
+      'rayleigh-taylor-unstable',
+      `The denser liquid lies above: Bond number ${at.bondNumber.toPrecision(3)} exceeds π², the pinned interface cannot hold against gravity.`,
+      'warning',
+    );
+  }
+  if (at.ratios.depinning >= PHYSICAL_WAVY_LIMIT) {
+    notes.warn(
+      'depinning-by-pressure-fluctuations',
+      'Turbulent wall-pressure fluctuations exceed the depinning pressure 2γ/w: the interface can be pushed off the groove edges.',
+      'warning',
+    );
+  }
+
+  // --- regime, verdict, limits -----------------------------------------------------
+  const regime = regimeOf(at.ratios);
+  const margin = marginOf(at.ratios);
+  const roughness = waveRoughnessWarning(regime);
+  if (roughness) notes.warn(roughness.code, roughness.message, roughness.severity);
+
+  const maxGrooveWidth = solveOnLogScale((width) => marginOf(evaluateCriteria(fixed, { ...design, grooveWidth: width }).ratios), w);
+  const minInterfacialTension = solveOnLogScale(
+    (tension) => marginOf(evaluateCriteria(fixed, { ...design, interfacialTension: tension }).ratios),
+    gamma,
+  );
+  const maxFrictionVelocity = solveOnLogScale(
+    (velocity) => marginOf(evaluateCriteria(fixed, { ...design, frictionVelocity: velocity }).ratios),
+    uTau,
+  );
+  if (maxGrooveWidth === null || minInterfacialTension === null || maxFrictionVelocity === null) {
+    notes.warn('design-limit-not-found', 'A design limit lies outside the searched range (30 e-folds either side of the design) and is reported as null.', 'info');
+  }
+
+  // --- map ----------------------------------------------------------------------------
+  const designWeT = at.frictionCapillaryNumber;
+  const designWPlus = at.grooveWidthPlus;
+  const boundaryAtDesign = Math.cbrt(1 / designWeT);
+  const wPlusLow = Math.min(designWPlus, boundaryAtDesign) / 10;
+  const wPlusHigh = Math.max(designWPlus, boundaryAtDesign) * 10;
+  const logSpace = (lo: number, hi: number, i: number) => lo * (hi / lo) ** (i / (resolution - 1));
+  const frictionCapillaryNumbers = Array.from({ length: resolution }, (_, i) => logSpace(designWeT / 100, designWeT * 100, i));
+  const grooveWidthsPlus = Array.from({ length: resolution }, (_, i) => logSpace(wPlusLow, wPlusHigh, i));
+  const viscousLength = at.viscousLength;
+  const pointFor = (weT: number, wPlus: number): DesignPoint => ({
+    grooveWidth: wPlus * viscousLength,
+    interfacialTension: (workingViscosity * uTau) / weT,
+    frictionVelocity: uTau,
+  });
+  const regimes = grooveWidthsPlus.map((wPlus) =>
+    frictionCapillaryNumbers.map((weT) => regimeOf(evaluateCriteria(fixed, pointFor(weT, wPlus)).ratios)),
+  );
+  const boundaryGrooveWidthPlus = frictionCapillaryNumbers.map((weT) =>
+    solveOnLogScale((wPlus) => 1 - Math.max(...Object.values(evaluateCriteria(fixed, pointFor(weT, wPlus)).ratios)), Math.cbrt(1 / weT)),
+  );
+
+  const bulk = flow.bulkVelocity;
+  const result: WavesResult = {
+    wallUnits: {
+      viscousLength,
+      grooveWidthPlus: at.grooveWidthPlus,
+      grooveDepthPlus: d / viscousLength,
+      frictionCapillaryNumber: at.frictionCapillaryNumber,
+      frictionWeberNumber: (workingDensity * uTau * uTau * w) / gamma,
+      bulkWeberNumber: bulk !== undefined && bulk > 0 ? (workingDensity * bulk * bulk * w) / gamma : null,
+      inertialCapillaryNumber: at.inertialCapillaryNumber,
+      inertialCapillaryBoundary: 1,
+      interfaceSlipVelocity: slipVelocity,
+    },
+    kelvinHelmholtz: {
+      growthRateCurve,
+      mostUnstableWavelength: fastest.value > 0 && fastest.wavenumber > 0 ? (2 * Math.PI) / fastest.wavenumber : null,
+      maxGrowthRate: fastest.value,
+      maxGrowthRatePlus: (fastest.value * kinematicViscosity) / (uTau * uTau),
+      criticalVelocityDifference: at.critical.value,
+      criticalWavelength: (2 * Math.PI) / at.critical.wavenumber,
+      deepLayerCriticalVelocityDifference: closedForm.velocityDifference,
+      velocityDifferenceImposed: at.velocityDifferenceImposed,
+      velocityDifferenceHeight: at.velocityDifferenceHeight,
+      slowestWaveSpeed: slowest.value,
+      slowestWaveSpeedPlus: slowestPlus,
+      slowestWaveWavelength: (2 * Math.PI) / slowest.wavenumber,
+      lubricantDepth: d,
+      outerDepth: fixed.outerDepth ?? null,
+      normalGravity,
+    },
+    criticalLayer: {
+      waveSpeedRelativeToWall,
+      criticalHeightPlus: withinFlow ? criticalHeightPlus : null,
+      criticalHeight: withinFlow ? criticalHeightPlus * viscousLength : null,
+      sublayerEdgePlus: VISCOUS_SUBLAYER_EDGE_PLUS,
+      largestMeanVelocity: largest,
+      exists: criticalLayerExists,
+    },
+    staticChecks: {
+      depinningPressure: at.depinningPressure,
+      wallPressureFluctuationLow: laminar ? 0 : PRESSURE_FLUCTUATION_LOW * wallShearStress,
+      wallPressureFluctuationHigh: at.pressureFluctuationHigh,
+      depinningRatio: at.ratios.depinning,
+      rayleighTaylor: {
+        bondNumber: at.bondNumber,
+        criticalBondNumber: Math.PI * Math.PI,
+        destabilising: at.rayleighTaylorDestabilising,
+        stable: at.ratios['rayleigh-taylor'] < PHYSICAL_WAVY_LIMIT,
+        maxGrooveWidth: rayleighTaylorMaxWidth,
+      },
+    },
+    loadRatios: at.ratios,
+    governingCriterion: governing(at.ratios),
+    regime,
+    verdict: { calm: regime === 'calm', margin },
+    designLimits: {
+      maxGrooveWidth,
+      maxGrooveWidthPlus: maxGrooveWidth === null ? null : maxGrooveWidth / viscousLength,
+      minInterfacialTension,
+      maxFrictionVelocity,
+    },
+    map: {
+      frictionCapillaryNumbers,
+      grooveWidthsPlus,
+      regimes,
+      boundaryGrooveWidthPlus,
+      designPoint: { frictionCapillaryNumber: designWeT, grooveWidthPlus: designWPlus },
+    },
+  };
+  return outcome(result, notes);
+}
