@@ -48,7 +48,7 @@ describe('plane channel', () => {
 });
 
 describe('pipe', () => {
-  const fixture = JSON.parse(readFileSync(new URL('../../fixtures/flow/colebrook.json', import.meta.url), 'utf8')) as {
+  const fixture = JSON.parse(readFileSync(new URL('../../../fixtures/flow/colebrook.json', import.meta.url), 'utf8')) as {
     cases: { reynolds: number; relativeRoughness: number; frictionFactor: number }[];
   };
   it('Colebrook matches the scipy brentq reference (fixtures/flow/generate_colebrook.py) to 1e-12', () => {

@@ -21,7 +21,7 @@ interface DuctCase {
   pressureDrivenFlux: number;
   pressureDrivenFluxErrorEstimate: number;
 }
-const fixture = JSON.parse(readFileSync(new URL('../../fixtures/slip/groove_duct.json', import.meta.url), 'utf8')) as {
+const fixture = JSON.parse(readFileSync(new URL('../../../fixtures/slip/groove_duct.json', import.meta.url), 'utf8')) as {
   cases: DuctCase[];
 };
 

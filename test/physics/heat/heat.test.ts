@@ -31,10 +31,10 @@ interface LaminarFixture {
   plugUniformTemperature: { plates: number; tube: number };
 }
 const laminar = JSON.parse(
-  readFileSync(new URL('../../fixtures/heat/laminar.json', import.meta.url), 'utf8'),
+  readFileSync(new URL('../../../fixtures/heat/laminar.json', import.meta.url), 'utf8'),
 ) as LaminarFixture;
 
-const ducts = JSON.parse(readFileSync(new URL('../../fixtures/heat/ducts.json', import.meta.url), 'utf8')) as {
+const ducts = JSON.parse(readFileSync(new URL('../../../fixtures/heat/ducts.json', import.meta.url), 'utf8')) as {
   ducts: { aspectRatio: number; frictionFactorReynolds: number }[];
 };
 

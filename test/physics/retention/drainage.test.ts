@@ -11,7 +11,7 @@ interface LumpedCase {
   times: number[];
   lengths: number[];
 }
-const reference = JSON.parse(readFileSync(new URL('../../fixtures/retention/retention_reference.json', import.meta.url), 'utf8')) as {
+const reference = JSON.parse(readFileSync(new URL('../../../fixtures/retention/retention_reference.json', import.meta.url), 'utf8')) as {
   lumped: LumpedCase[];
 };
 

@@ -13,7 +13,7 @@ import {
   type RetentionInput,
 } from '../../../src/physics/retention/retention.js';
 
-const reference = JSON.parse(readFileSync(new URL('../../fixtures/retention/retention_reference.json', import.meta.url), 'utf8')) as {
+const reference = JSON.parse(readFileSync(new URL('../../../fixtures/retention/retention_reference.json', import.meta.url), 'utf8')) as {
   example: { retainedLength: number; gradient: number; curvature: number };
   levequeMeanCoefficient: number;
 };

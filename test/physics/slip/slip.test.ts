@@ -26,10 +26,10 @@ import {
 } from '../../../src/physics/slip/stripe-slip.js';
 import { KARMAN_CONSTANT } from '../../../src/physics/common.js';
 
-const cavityFixture = JSON.parse(readFileSync(new URL('../../fixtures/slip/cavity_lid.json', import.meta.url), 'utf8')) as {
+const cavityFixture = JSON.parse(readFileSync(new URL('../../../fixtures/slip/cavity_lid.json', import.meta.url), 'utf8')) as {
   cases: { depthOverWidth: number; role: string; lidVelocityMean: number; lidVelocityMeanErrorEstimate: number; lidVelocityCentre: number; lidVelocityCentreErrorEstimate: number }[];
 };
-const turbulentFixture = JSON.parse(readFileSync(new URL('../../fixtures/slip/turbulent_drag.json', import.meta.url), 'utf8')) as {
+const turbulentFixture = JSON.parse(readFileSync(new URL('../../../fixtures/slip/turbulent_drag.json', import.meta.url), 'utf8')) as {
   cases: { bulkReynolds: number; smoothSkinFriction: number; deltaUPlus: number; dragReduction: number }[];
 };
 

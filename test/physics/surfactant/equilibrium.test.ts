@@ -10,7 +10,7 @@ import {
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
 import { Notes } from '../../../src/physics/common.js';
 
-const ref = JSON.parse(readFileSync(new URL('../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
+const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const eq = ref.equilibrium;
 
 describe('Langmuir–Szyszkowski equilibrium', () => {

@@ -10,7 +10,7 @@ import {
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
 import { GAS_CONSTANT } from '../../../src/physics/common.js';
 
-const ref = JSON.parse(readFileSync(new URL('../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
+const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });
 
 describe('clean coefficients of Landel et al. (2020)', () => {

@@ -5,7 +5,7 @@ import { marangoniScaling, philipTransverse } from '../../../src/physics/surfact
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
 import { ConvergenceError, GAS_CONSTANT } from '../../../src/physics/common.js';
 
-const ref = JSON.parse(readFileSync(new URL('../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
+const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });
 const T = 298.15;
 const base = { pitch: 100e-6, grooveWidth: 50e-6, shearRate: 1000, viscosity: 1e-3, surfactant: sds, temperature: T };

@@ -160,7 +160,7 @@ describe('finite depths, gravity and confinement against the scipy fixture (fixt
     slowestWaveWavenumber: number;
     growthSamples: { wavenumber: number; growthRate: number }[];
   };
-  const fixture = JSON.parse(readFileSync(new URL('../../fixtures/waves/dispersion.json', import.meta.url), 'utf8')) as { cases: FixtureCase[] };
+  const fixture = JSON.parse(readFileSync(new URL('../../../fixtures/waves/dispersion.json', import.meta.url), 'utf8')) as { cases: FixtureCase[] };
   for (const c of fixture.cases) {
     const layers: TwoLayerInterface = {
       ...c.layers,
