@@ -3,7 +3,7 @@
  * (inline or in the worker pool), from the CLI, and in the OpenAPI document.
  */
 import type { ZodType, output } from 'zod';
-import { ConvergenceError, DomainError } from '../physics/common.js';
+import { ConvergenceError, DomainError } from '../core/errors.js';
 import { envelope, findNonFinite, type CalculationOutput, type Envelope } from './envelope.js';
 import { problem, ProblemError, validationProblem, zodFieldErrors, type Problem } from './problem.js';
 

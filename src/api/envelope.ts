@@ -4,7 +4,8 @@
  * responses.
  */
 import { createHash } from 'node:crypto';
-import type { Reference, Warning } from '../physics/common.js';
+import type { Reference } from '../core/references.js';
+import type { Warning } from '../core/notes.js';
 import { z } from './schemas/zod.js';
 
 export const SERVICE_NAME = 'oilskin';

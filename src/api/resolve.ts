@@ -2,11 +2,11 @@
  * From validated request parts to the resolved SI shapes the physics takes:
  * catalogue look-up of fluids, flow conditions, texture defaults.
  */
-import { Notes } from '../physics/common.js';
+import { Notes } from '../core/notes.js';
 import { evaluateFlow, type FlowResult } from '../physics/flow/flow.js';
 import type { Scenario, Texture } from '../physics/scenario.js';
 import { resolveInterfacialTension } from '../physics/wetting/wetting.js';
-import type { FluidState } from '../materials/types.js';
+import type { FluidState } from '../core/fluid.js';
 import { resolveFluid } from '../materials/index.js';
 import { canonicalJson } from './envelope.js';
 import type { FlowInput, FluidInput, TextureInput } from './schemas/scenario.js';

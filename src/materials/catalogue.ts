@@ -3,7 +3,7 @@
  * was recalled and could not be confirmed against that source during writing
  * carries `note: 'from memory …'`. Temperatures are kelvin, values SI.
  */
-import type { Reference } from '../physics/common.js';
+import type { Reference } from '../core/references.js';
 import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101 } from './dippr.js';
 import {
   FOWKES_1964,
@@ -34,7 +34,8 @@ import {
   seawaterThermalConductivity,
   seawaterViscosity,
 } from './seawater.js';
-import type { CatalogueFluid, FluidPropertyName, PropertyRecord } from './types.js';
+import type { CatalogueFluid, PropertyRecord } from './types.js';
+import type { FluidPropertyName } from '../core/fluid.js';
 import { PROPERTY_UNITS } from './types.js';
 import {
   WATER_SURFACE_TENSION_DISPERSIVE,

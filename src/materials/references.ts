@@ -2,7 +2,7 @@
  * Sources of the catalogue's property values. One entry per publication; the
  * `key` is what `FluidState.origins` and the listing report.
  */
-import type { Reference } from '../physics/common.js';
+import type { Reference } from '../core/references.js';
 
 export const IAPWS_SR6_08: Reference = {
   key: 'iapws-sr6-08',

@@ -2,8 +2,9 @@
  * From a request's fluid description (catalogue id and/or explicit values) to
  * a resolved {@link FluidState} at one temperature.
  */
-import { DomainError, Notes } from '../physics/common.js';
-import type { Reference } from '../physics/common.js';
+import { DomainError } from '../core/errors.js';
+import { Notes } from '../core/notes.js';
+import type { Reference } from '../core/references.js';
 import {
   SEAWATER_EXTRA_REFERENCES,
   SEAWATER_SALINITY_RANGES,
@@ -12,7 +13,8 @@ import {
   seawaterRecords,
 } from './catalogue.js';
 import { DEFAULT_SEAWATER_SALINITY, seawaterFreezingPoint } from './seawater.js';
-import type { CatalogueFluid, FluidPropertyName, FluidPropertySet, FluidState, PropertyRecord } from './types.js';
+import type { CatalogueFluid, PropertyRecord } from './types.js';
+import type { FluidPropertyName, FluidPropertySet, FluidState } from '../core/fluid.js';
 
 /** What a request may say about a fluid. SI units; temperature in K; salinity in g/kg. */
 export interface FluidSpec {

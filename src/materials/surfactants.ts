@@ -10,9 +10,12 @@
  * rate constant m³/(mol·s), desorption rate constant 1/s, diffusivities
  * m²/s, concentrations mol/m³ (1 mol/m³ = 1 mM).
  */
-import { DomainError, type Reference, type Warning } from '../physics/common.js';
+import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
+import { DomainError } from '../core/errors.js';
+import type { Warning } from '../core/notes.js';
+import type { Reference } from '../core/references.js';
 
-export type InterfaceType = 'air-water' | 'oil-water';
+
 
 /** One catalogue number with its witness. */
 export interface SourcedValue {
@@ -197,34 +200,6 @@ export function surfactantListing(): {
     return out;
   });
   return { surfactants, references: [...refs.values()] };
-}
-
-/** Surfactant parameters resolved for one interface, ready for the physics (SI). */
-export interface ResolvedSurfactant {
-  /** Catalogue id, or "custom". */
-  id: string;
-  name: string;
-  interfaceType: InterfaceType;
-  /** Γ_m, mol/m². */
-  maximumSurfaceExcess: number;
-  /** K, m³/mol. */
-  langmuirConstant: number;
-  /** κ_a, m³/(mol·s); absent = diffusion-controlled (instantaneous) exchange. */
-  adsorptionRate?: number;
-  /** κ_d, 1/s; absent = diffusion-controlled (instantaneous) exchange. */
-  desorptionRate?: number;
-  /** D, m²/s. */
-  bulkDiffusivity: number;
-  /** D_I, m²/s. */
-  surfaceDiffusivity: number;
-  /** n, dimensionless. */
-  gibbsPrefactor: number;
-  /** CMC, mol/m³, when known. */
-  criticalMicelleConcentration?: number;
-  /** Where each value came from: a reference key, "input" or "derived". */
-  origins: Record<string, string>;
-  references: Reference[];
-  warnings: Warning[];
 }
 
 /** Request-supplied values (SI); any of them overrides the catalogue. */

@@ -3,7 +3,7 @@
  * and catalogue look-up. Physics modules take these resolved shapes; the API
  * layer builds them from requests.
  */
-import type { FluidState } from '../materials/types.js';
+import type { FluidState } from '../core/fluid.js';
 
 /** Streamwise-groove texture. Lengths in metres, angle in degrees. */
 export interface Texture {

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../src/physics/common.js';
+import { DomainError } from '../../src/core/errors.js';
 import {
   FLUIDS,
   PROPERTY_UNITS,
@@ -10,8 +10,8 @@ import {
   resolveFluid,
   waterDensity,
   waterViscosity,
-  type FluidPropertyName,
 } from '../../src/materials/index.js';
+import type { FluidPropertyName } from '../../src/core/fluid.js';
 
 function domainError(run: () => unknown): DomainError {
   try {

@@ -1,5 +1,5 @@
 /** POST /v1/flow — wall shear stress, friction velocity and viscous length of a flow. */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { fluidEcho, resolveFlow, resolveFluidInput, resolveTexture } from '../resolve.js';

@@ -1,5 +1,5 @@
 /** POST /v1/heat — how the liquid-infused wall changes heat transfer against the solid-filled wall. */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { evaluateHeat } from '../../physics/heat/heat.js';
 import { evaluateSlip } from '../../physics/slip/slip.js';
 import { defineCalculation } from '../calculation.js';

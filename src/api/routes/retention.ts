@@ -1,5 +1,5 @@
 /** POST /v1/retention — how much lubricant stays in the grooves, and how fast the rest drains. */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { evaluateRetention } from '../../physics/retention/retention.js';
 import { evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
 import { evaluateWetting } from '../../physics/wetting/wetting.js';

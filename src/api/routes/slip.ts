@@ -1,5 +1,5 @@
 /** POST /v1/slip — slip lengths and drag change of a lubricant-infused grooved wall. */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
 import { evaluateWaves, waveRoughnessWarning } from '../../physics/waves/waves.js';
 import { defineCalculation } from '../calculation.js';

@@ -1,8 +1,9 @@
 /** POST /v1/surfactant — how much of the slip survives traces of surfactant? */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { dragChange, evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
 import { evaluateSurfactant } from '../../physics/surfactant/surfactant.js';
-import { getSurfactant, resolveSurfactant, type InterfaceType } from '../../materials/surfactants.js';
+import { getSurfactant, resolveSurfactant } from '../../materials/surfactants.js';
+import type { InterfaceType } from '../../core/surfactant.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';
 import { designEcho, resolveDesign } from '../resolve.js';

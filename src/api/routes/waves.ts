@@ -1,5 +1,5 @@
 /** POST /v1/waves — do capillary waves on the lubricant interface stay calm? */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { evaluateSlip } from '../../physics/slip/slip.js';
 import { evaluateWaves } from '../../physics/waves/waves.js';
 import { defineCalculation } from '../calculation.js';

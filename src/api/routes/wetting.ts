@@ -1,5 +1,5 @@
 /** POST /v1/wetting — is the lubricant-in-texture state stable under the working fluid? */
-import { Notes } from '../../physics/common.js';
+import { Notes } from '../../core/notes.js';
 import { evaluateWetting } from '../../physics/wetting/wetting.js';
 import { defineCalculation } from '../calculation.js';
 import { envelopeSchema } from '../envelope.js';

@@ -3,7 +3,8 @@
  * on a smooth, no-slip wall: plane channel, circular pipe, flat plate, or a
  * wall shear stress given directly. All inputs and outputs SI.
  */
-import { Notes, outcome, type Outcome, type Reference } from '../common.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import type { FlowKind, FlowRegime, FlowState, Texture } from '../scenario.js';
 import { safeNewton } from '../../numerics/roots.js';
 

@@ -18,7 +18,7 @@
  * hundred; the wake of the outer flow is not represented).
  */
 import { safeNewton } from '../../numerics/roots.js';
-import type { Reference } from '../common.js';
+import type { Reference } from '../../core/references.js';
 
 /** Spalding's fit constant κ (Spalding 1961). */
 const SPALDING_KAPPA = 0.4;

@@ -46,7 +46,8 @@
  *  [2] White, F. M. 2006 Viscous Fluid Flow, 3rd ed. McGraw-Hill, New York, §3-3.
  */
 import { sumOdd } from '../../numerics/series.js';
-import { DomainError, type Reference } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import type { Reference } from '../../core/references.js';
 
 export const GROOVE_DUCT_REFERENCES: Reference[] = [
   {

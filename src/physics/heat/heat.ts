@@ -40,7 +40,10 @@
  * [10] Wiener, O. 1912 Die Theorie des Mischkörpers für das Feld der stationären
  *      Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (from memory).
  */
-import { ConvergenceError, DomainError, KARMAN_CONSTANT, Notes, outcome, type Outcome, type Reference } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { KARMAN_CONSTANT } from '../../core/constants.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import { grooveLidVelocityMean } from '../groove/groove-duct.js';
 import { integrateRungeKutta4 } from '../../numerics/ode.js';

@@ -58,7 +58,8 @@
 import { integrateConservationChain, type ConservationChain } from '../../numerics/conservation-bdf2.js';
 import { monotoneCubic, type Interpolant } from '../../numerics/interpolation.js';
 import { brent } from '../../numerics/roots.js';
-import { ConvergenceError, DomainError, type Reference } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import type { Reference } from '../../core/references.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
 
 export const DRAINAGE_REFERENCES = {

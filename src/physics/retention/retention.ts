@@ -69,7 +69,10 @@
  *  [7] Wilke, C. R. & Chang, P. 1955 AIChE J. 1, 264–270.
  *  [8] Colosqui, C. E., Wexler, J. S., Liu, Y. & Stone, H. A. 2016 Phys. Rev. Fluids 1, 064101.
  */
-import { ConvergenceError, DomainError, Notes, outcome, STANDARD_GRAVITY, type Outcome, type Reference } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import { STANDARD_GRAVITY } from '../../core/constants.js';
+import type { Reference } from '../../core/references.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux, GROOVE_DUCT_REFERENCES } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
 import type { AnglesUnderWorkingFluid, ContactAngles, WettingState } from '../wetting/wetting.js';

@@ -6,7 +6,9 @@
  * flow rate). Lengths in m.
  */
 import { brent } from '../../numerics/roots.js';
-import { ConvergenceError, DomainError, KARMAN_CONSTANT, type Reference } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { KARMAN_CONSTANT } from '../../core/constants.js';
+import type { Reference } from '../../core/references.js';
 
 export const SLIP_DRAG_REFERENCES = {
   laugaStone2003: {

@@ -13,7 +13,8 @@ import {
   type GrooveCellInput,
   type GrooveCellResult,
 } from '../groove/groove-cell.js';
-import { ConvergenceError, DomainError, Notes, outcome, type Outcome } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
 import { GROOVE_DUCT_REFERENCES } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
 import {

@@ -9,7 +9,8 @@
  * b_s on the stripes, effective slip lengths b_∥ (flow along the stripes) and
  * b_⊥ (across them).
  */
-import { DomainError, type Reference } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import type { Reference } from '../../core/references.js';
 import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../groove/groove-duct.js';
 
 export const STRIPE_SLIP_REFERENCES = {

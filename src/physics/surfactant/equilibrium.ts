@@ -12,8 +12,10 @@
  *     doi:10.1016/S0927-7757(00)00706-8 (prefactor n = 2 for ionic
  *     surfactants without salt in the Gibbs equation).
  */
-import { DomainError, GAS_CONSTANT, Notes } from '../common.js';
-import type { ResolvedSurfactant } from '../../materials/surfactants.js';
+import { DomainError } from '../../core/errors.js';
+import { GAS_CONSTANT } from '../../core/constants.js';
+import { Notes } from '../../core/notes.js';
+import type { ResolvedSurfactant } from '../../core/surfactant.js';
 
 /**
  * Langmuir isotherm Γ = Γ_m K c / (1 + K c) [1].

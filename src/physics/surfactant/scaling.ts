@@ -42,8 +42,8 @@
  *     Z. Angew. Math. Phys. 23, 353–372, doi:10.1007/BF01595477 (DOI from memory).
  */
 import { solveDense } from '../../numerics/linalg.js';
-import { GAS_CONSTANT } from '../common.js';
-import type { ResolvedSurfactant } from '../../materials/surfactants.js';
+import { GAS_CONSTANT } from '../../core/constants.js';
+import type { ResolvedSurfactant } from '../../core/surfactant.js';
 
 /** Fitted constants of the scaling law, eq. (4.29), and of the layer thickness, eqs. (3.20–3.22) [1]. */
 export const LANDEL_FIT = { a1: 2.3, a2: 0.319, delta0: 1.68, delta1: 0.0528 } as const;

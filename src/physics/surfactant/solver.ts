@@ -47,9 +47,10 @@
  */
 import { solveDense } from '../../numerics/linalg.js';
 import { solveDenseNewton } from '../../numerics/newton-dense.js';
-import { ConvergenceError, DomainError, GAS_CONSTANT } from '../common.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { GAS_CONSTANT } from '../../core/constants.js';
 import { LANDEL_FIT } from './scaling.js';
-import type { ResolvedSurfactant } from '../../materials/surfactants.js';
+import type { ResolvedSurfactant } from '../../core/surfactant.js';
 
 /** Exponentially fitted flux weight B(z) = z/(e^z − 1), B(0) = 1. */
 function fittedWeight(z: number): number {

@@ -35,9 +35,12 @@
  *     Proc. Natl Acad. Sci. USA 114, 7254–7259, doi:10.1073/pnas.1702469114.
  */
 import { brent } from '../../numerics/roots.js';
-import { DomainError, Notes, outcome, type Outcome, type Reference } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
-import { SURFACTANT_REFERENCES, type ResolvedSurfactant } from '../../materials/surfactants.js';
+import { SURFACTANT_REFERENCES } from '../../materials/surfactants.js';
+import type { ResolvedSurfactant } from '../../core/surfactant.js';
 import { surfactantEquilibrium, type SurfactantEquilibrium } from './equilibrium.js';
 import {
   cleanTransverseCoefficients,

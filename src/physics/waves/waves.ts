@@ -47,8 +47,11 @@
  */
 import { brent } from '../../numerics/roots.js';
 import { scanAndRefineMinimum } from '../../numerics/minimize.js';
-import { DomainError, Notes, STANDARD_GRAVITY, outcome } from '../common.js';
-import type { Outcome, Reference, Warning } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import { Notes, outcome } from '../../core/notes.js';
+import { STANDARD_GRAVITY } from '../../core/constants.js';
+import type { Outcome, Warning } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import type { FlowState, Scenario } from '../scenario.js';
 import {
   SPALDING_1961,

@@ -41,9 +41,11 @@
  *  [4] Tadmor, R. 2004 Line energy and the relation between advancing, receding,
  *      and Young contact angles. Langmuir 20(18), 7659–7664. doi:10.1021/la049410h
  */
-import type { FluidState } from '../../materials/types.js';
+import type { FluidState } from '../../core/fluid.js';
 import { FOWKES_1964 } from '../../materials/references.js';
-import { DomainError, Notes, outcome, type Outcome, type Reference } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import type { Texture } from '../scenario.js';
 
 export const WETTING_REFERENCES = {

@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../../src/physics/common.js';
+import { DomainError } from '../../../src/core/errors.js';
 import {
   grooveLidVelocityCentre,
   grooveLidVelocityMean,

@@ -21,8 +21,8 @@ import {
   type HeatInput,
   type WallCell,
 } from '../../../src/physics/heat/heat.js';
-import { DomainError } from '../../../src/physics/common.js';
-import type { FluidState } from '../../../src/materials/types.js';
+import { DomainError } from '../../../src/core/errors.js';
+import type { FluidState } from '../../../src/core/fluid.js';
 import type { FlowState } from '../../../src/physics/scenario.js';
 
 interface LaminarFixture {

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, capillaryPressureCurve, steadyColumn, type DrainageInput } from '../../../src/physics/retention/drainage.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../../../src/physics/groove/groove-duct.js';
-import { DomainError } from '../../../src/physics/common.js';
+import { DomainError } from '../../../src/core/errors.js';
 
 interface LumpedCase {
   initialLength: number;

@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import type { FluidState } from '../../../src/materials/types.js';
-import { DomainError, STANDARD_GRAVITY } from '../../../src/physics/common.js';
+import type { FluidState } from '../../../src/core/fluid.js';
+import { DomainError } from '../../../src/core/errors.js';
+import { STANDARD_GRAVITY } from '../../../src/core/constants.js';
 import { evaluateFlow } from '../../../src/physics/flow/flow.js';
 import type { FlowState, Scenario } from '../../../src/physics/scenario.js';
 import {

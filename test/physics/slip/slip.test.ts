@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../../src/physics/common.js';
+import { DomainError } from '../../../src/core/errors.js';
 import { evaluateFlow, type FlowSpec } from '../../../src/physics/flow/flow.js';
-import type { FluidState } from '../../../src/materials/types.js';
+import type { FluidState } from '../../../src/core/fluid.js';
 import type { Scenario, Texture } from '../../../src/physics/scenario.js';
 import { evaluateSlip, type SlipInput } from '../../../src/physics/slip/slip.js';
 import {
@@ -24,7 +24,7 @@ import {
   philipSlipLengthLongitudinal,
   philipSlipLengthTransverse,
 } from '../../../src/physics/slip/stripe-slip.js';
-import { KARMAN_CONSTANT } from '../../../src/physics/common.js';
+import { KARMAN_CONSTANT } from '../../../src/core/constants.js';
 
 const cavityFixture = JSON.parse(readFileSync(new URL('../../../fixtures/slip/cavity_lid.json', import.meta.url), 'utf8')) as {
   cases: { depthOverWidth: number; role: string; lidVelocityMean: number; lidVelocityMeanErrorEstimate: number; lidVelocityCentre: number; lidVelocityCentreErrorEstimate: number }[];

@@ -8,7 +8,7 @@ import {
   szyszkowskiTensionOfConcentration,
 } from '../../../src/physics/surfactant/equilibrium.js';
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
-import { Notes } from '../../../src/physics/common.js';
+import { Notes } from '../../../src/core/notes.js';
 
 const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const eq = ref.equilibrium;

@@ -8,7 +8,7 @@ import {
   slipWithMarangoni,
 } from '../../../src/physics/surfactant/scaling.js';
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
-import { GAS_CONSTANT } from '../../../src/physics/common.js';
+import { GAS_CONSTANT } from '../../../src/core/constants.js';
 
 const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });

@@ -3,7 +3,8 @@ import { readFileSync } from 'node:fs';
 import { absoluteDerivativeStencil, solveLongWaveGroove, solveTransverseInterface } from '../../../src/physics/surfactant/solver.js';
 import { marangoniScaling, philipTransverse } from '../../../src/physics/surfactant/scaling.js';
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
-import { ConvergenceError, GAS_CONSTANT } from '../../../src/physics/common.js';
+import { ConvergenceError } from '../../../src/core/errors.js';
+import { GAS_CONSTANT } from '../../../src/core/constants.js';
 
 const ref = JSON.parse(readFileSync(new URL('../../../fixtures/surfactant/references.json', import.meta.url), 'utf8'));
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });

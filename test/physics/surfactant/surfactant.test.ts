@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateSurfactant, type SurfactantInput } from '../../../src/physics/surfactant/surfactant.js';
 import { resolveSurfactant } from '../../../src/materials/surfactants.js';
-import { DomainError } from '../../../src/physics/common.js';
+import { DomainError } from '../../../src/core/errors.js';
 import type { Scenario } from '../../../src/physics/scenario.js';
 
 // Demo scenario (invented numbers): water over a gas-filled or oil-filled transverse grating, τ_w = 0.89 Pa.

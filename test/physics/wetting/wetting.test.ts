@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { FluidState } from '../../../src/materials/types.js';
-import { DomainError } from '../../../src/physics/common.js';
+import type { FluidState } from '../../../src/core/fluid.js';
+import { DomainError } from '../../../src/core/errors.js';
 import type { Texture } from '../../../src/physics/scenario.js';
 import {
   evaluateWetting,

@@ -1,10 +1,10 @@
 /**
- * Shared vocabulary of every physics module: warnings, references, domain
- * errors and the outcome envelope. Physics functions take SI numbers and
- * return plain objects; they never throw for physically meaningful input
- * (a result plus a warning instead) and throw {@link DomainError} only for
- * input that has no physical meaning (the API maps it to 422).
+ * What every calculation says besides its numbers: warnings, assumptions,
+ * references and the identifiers of the models it ran, accumulated without
+ * duplicates so that composed calculations can merge them. Shared by the
+ * physics and the materials layers.
  */
+import type { Reference } from './references.js';
 
 /** How much a warning matters to the person reading the result. */
 export type Severity = 'info' | 'caution' | 'warning';
@@ -14,45 +14,6 @@ export interface Warning {
   code: string;
   severity: Severity;
   message: string;
-}
-
-export interface Reference {
-  /** Short key, e.g. `dean1978`. */
-  key: string;
-  /** Full citation: authors, year, title, journal, volume, pages. */
-  citation: string;
-  doi?: string;
-}
-
-/**
- * Input that is physically impossible (a groove wider than its pitch, a fluid
- * frozen at the requested temperature). `field` names the offending input by
- * its path in the request where the caller knows it (dot-separated).
- */
-export class DomainError extends Error {
-  readonly field: string | undefined;
-  readonly code: string;
-  constructor(message: string, options: { field?: string; code?: string } = {}) {
-    super(message);
-    this.name = 'DomainError';
-    this.field = options.field;
-    this.code = options.code ?? 'impossible-input';
-  }
-}
-
-/** An iterative solve that did not reach its tolerance; mapped to 422 with the count. */
-export class ConvergenceError extends DomainError {
-  readonly iterations: number;
-  readonly residual: number;
-  constructor(message: string, iterations: number, residual: number, field?: string) {
-    super(`${message} (after ${iterations} iterations, residual ${residual.toExponential(3)})`, {
-      field,
-      code: 'not-converged',
-    });
-    this.name = 'ConvergenceError';
-    this.iterations = iterations;
-    this.residual = residual;
-  }
 }
 
 /**
@@ -121,10 +82,3 @@ export function outcome<T>(result: T, notes: Notes): Outcome<T> {
     models: notes.models,
   };
 }
-
-/** Standard gravitational acceleration, m/s² (CGPM 1901, exact by definition). */
-export const STANDARD_GRAVITY = 9.80665;
-/** Molar gas constant, J/(mol·K) (CODATA 2018, exact since the 2019 SI). */
-export const GAS_CONSTANT = 8.314462618;
-/** von Kármán constant of the log law used throughout (κ = 0.41; common practice, no source). */
-export const KARMAN_CONSTANT = 0.41;

@@ -1,0 +1,38 @@
+/**
+ * The two ways a calculation refuses an input: the input is physically
+ * impossible ({@link DomainError}), or an iteration did not reach its
+ * tolerance ({@link ConvergenceError}). Physics never throws for physically
+ * meaningful input; it returns a result with a warning instead. The API maps
+ * both to 422 problem documents naming the field.
+ */
+
+/**
+ * Input that is physically impossible (a groove wider than its pitch, a fluid
+ * frozen at the requested temperature). `field` names the offending input by
+ * its path in the request where the caller knows it (dot-separated).
+ */
+export class DomainError extends Error {
+  readonly field: string | undefined;
+  readonly code: string;
+  constructor(message: string, options: { field?: string; code?: string } = {}) {
+    super(message);
+    this.name = 'DomainError';
+    this.field = options.field;
+    this.code = options.code ?? 'impossible-input';
+  }
+}
+
+/** An iterative solve that did not reach its tolerance; mapped to 422 with the count. */
+export class ConvergenceError extends DomainError {
+  readonly iterations: number;
+  readonly residual: number;
+  constructor(message: string, iterations: number, residual: number, field?: string) {
+    super(`${message} (after ${iterations} iterations, residual ${residual.toExponential(3)})`, {
+      field,
+      code: 'not-converged',
+    });
+    this.name = 'ConvergenceError';
+    this.iterations = iterations;
+    this.residual = residual;
+  }
+}
