@@ -3,10 +3,9 @@
  * was recalled and could not be confirmed against that source during writing
  * carries `note: 'from memory …'`. Temperatures are kelvin, values SI.
  */
-import type { Reference } from '../core/references.js';
+import { REFERENCES, type Reference } from '../core/references.js';
 import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101 } from './dippr.js';
 import {
-  FOWKES_1964,
   IAPWS_CONDUCTIVITY_2011,
   IAPWS_SR6_08,
   IAPWS_SURFACE_TENSION_2014,
@@ -105,7 +104,7 @@ const WATER: CatalogueFluid = {
       source: IAPWS_SURFACE_TENSION_2014,
       note: 'Against the saturated vapour; taken as the value against air (common practice, no source).',
     },
-    surfaceTensionDispersive: constant(WATER_SURFACE_TENSION_DISPERSIVE, around(20, 5), FOWKES_1964, 'at 20 °C only'),
+    surfaceTensionDispersive: constant(WATER_SURFACE_TENSION_DISPERSIVE, around(20, 5), REFERENCES.fowkes1964, 'at 20 °C only'),
     thermalConductivity: {
       at: waterThermalConductivity,
       validRange: { min: 273.16, max: WATER_LIQUID_RANGE.max },
@@ -244,7 +243,7 @@ function alkane(data: AlkaneData): CatalogueFluid {
       surfaceTension: tension,
       surfaceTensionDispersive: {
         ...tension,
-        source: FOWKES_1964,
+        source: REFERENCES.fowkes1964,
         note: 'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
       },
       interfacialTensionWater: constant(
@@ -473,7 +472,7 @@ const MINERAL_OIL_LIGHT: CatalogueFluid = {
     surfaceTensionDispersive: constant(
       30e-3,
       around(25, 5),
-      FOWKES_1964,
+      REFERENCES.fowkes1964,
       `equal to the total for saturated hydrocarbons (Fowkes 1964); total ${FROM_MEMORY}`,
     ),
   },

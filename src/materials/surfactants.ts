@@ -13,7 +13,8 @@
 import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
 import { DomainError } from '../core/errors.js';
 import type { Warning } from '../core/notes.js';
-import type { Reference } from '../core/references.js';
+import { REFERENCES, type Reference } from '../core/references.js';
+import { CHANG_FRANSES_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
 
 
 
@@ -53,36 +54,15 @@ export interface CatalogueSurfactant {
   interfaces: Partial<Record<InterfaceType, InterfaceAdsorptionData>>;
 }
 
-export const SURFACTANT_REFERENCES = {
-  chang1995: {
-    key: 'chang1995',
-    citation:
-      'Chang, C.-H. & Franses, E. I. (1995) Adsorption dynamics of surfactants at the air/water interface: a critical review of mathematical models, data, and mechanisms. Colloids and Surfaces A 100, 1–45.',
-    doi: '10.1016/0927-7757(94)03061-4',
-  },
-  prosser2001: {
-    key: 'prosser2001',
-    citation:
-      'Prosser, A. J. & Franses, E. I. (2001) Adsorption and surface tension of ionic surfactants at the air–water interface: review and evaluation of equilibrium models. Colloids and Surfaces A 178, 1–40.',
-    doi: '10.1016/S0927-7757(00)00706-8',
-  },
-  landel2020: {
-    key: 'landel2020',
-    citation:
-      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020) A theory for the slip and drag of superhydrophobic surfaces with surfactant. Journal of Fluid Mechanics 883, A18 (arXiv:1904.01194; DOI 10.1017/jfm.2019.857 from memory).',
-  },
-  mukerjee1971: {
-    key: 'mukerjee1971',
-    citation:
-      'Mukerjee, P. & Mysels, K. J. (1971) Critical Micelle Concentrations of Aqueous Surfactant Systems. NSRDS-NBS 36, U.S. National Bureau of Standards, Washington DC.',
-  },
-  rosen2012: {
-    key: 'rosen2012',
-    citation: 'Rosen, M. J. & Kunjappu, J. T. (2012) Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
-  },
-} satisfies Record<string, Reference>;
+/** The sources the surfactant entries cite. */
+const R = {
+  chang1995: CHANG_FRANSES_1995,
+  prosser2001: PROSSER_FRANSES_2001,
+  landel2020: REFERENCES.landel2020,
+  mukerjee1971: MUKERJEE_MYSELS_1971,
+  rosen2012: ROSEN_KUNJAPPU_2012,
+};
 
-const R = SURFACTANT_REFERENCES;
 
 export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   {

@@ -4,48 +4,9 @@
  * wall shear stress given directly. All inputs and outputs SI.
  */
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
-import type { Reference } from '../../core/references.js';
+import { REFERENCES } from '../../core/references.js';
 import type { FlowKind, FlowRegime, FlowState, Texture } from '../scenario.js';
 import { safeNewton } from '../../numerics/roots.js';
-
-export const FLOW_REFERENCES = {
-  dean1978: {
-    key: 'dean1978',
-    citation:
-      'Dean, R. B. (1978). Reynolds number dependence of skin friction and other bulk flow variables in two-dimensional rectangular duct flow. J. Fluids Eng. 100(2), 215–223.',
-    doi: '10.1115/1.3448633',
-  },
-  kim1987: {
-    key: 'kim1987',
-    citation: 'Kim, J., Moin, P. & Moser, R. (1987). Turbulence statistics in fully developed channel flow at low Reynolds number. J. Fluid Mech. 177, 133–166.',
-    doi: '10.1017/S0022112087000892',
-  },
-  colebrook1939: {
-    key: 'colebrook1939',
-    citation:
-      'Colebrook, C. F. (1939). Turbulent flow in pipes, with particular reference to the transition region between the smooth and rough pipe laws. J. Inst. Civ. Eng. 11(4), 133–156.',
-    doi: '10.1680/ijoti.1939.13150',
-  },
-  haaland1983: {
-    key: 'haaland1983',
-    citation: 'Haaland, S. E. (1983). Simple and explicit formulas for the friction factor in turbulent pipe flow. J. Fluids Eng. 105(1), 89–90.',
-    doi: '10.1115/1.3240948',
-  },
-  blasius1908: {
-    key: 'blasius1908',
-    citation: 'Blasius, H. (1908). Grenzschichten in Flüssigkeiten mit kleiner Reibung. Z. Math. Phys. 56, 1–37.',
-  },
-  schlichting2017: {
-    key: 'schlichting2017',
-    citation:
-      'Schlichting, H. & Gersten, K. (2017). Boundary-Layer Theory, 9th ed. Springer (flat-plate skin friction: laminar Blasius, turbulent power law and Schlichting’s log formula).',
-    doi: '10.1007/978-3-662-52919-5',
-  },
-  white2006: {
-    key: 'white2006',
-    citation: 'White, F. M. (2006). Viscous Fluid Flow, 3rd ed. McGraw-Hill (laminar channel and pipe flow, turbulent flat-plate correlations).',
-  },
-} satisfies Record<string, Reference>;
 
 /** Laminar limit of plane-channel flow on the full-height bulk Reynolds number (common practice, no source). */
 export const CHANNEL_LAMINAR_LIMIT = 2000;
@@ -163,12 +124,12 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < CHANNEL_LAMINAR_LIMIT) {
         regime = 'laminar';
         cf = laminarChannelSkinFriction(re);
-        notes.model('channel-laminar-poiseuille').cite(FLOW_REFERENCES.white2006);
+        notes.model('channel-laminar-poiseuille').cite(REFERENCES.white2006);
         notes.assume('Fully developed laminar plane Poiseuille flow between smooth plates.');
       } else {
         regime = re < CHANNEL_TURBULENT_LIMIT ? 'transitional' : 'turbulent';
         cf = deanSkinFriction(re);
-        notes.model('channel-dean-1978').cite(FLOW_REFERENCES.dean1978);
+        notes.model('channel-dean-1978').cite(REFERENCES.dean1978);
         notes.assume('Fully developed turbulent plane-channel flow over smooth walls (Dean 1978 correlation).');
         if (regime === 'transitional') {
           notes.warn(
@@ -205,12 +166,12 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < PIPE_LAMINAR_LIMIT) {
         regime = 'laminar';
         fD = 64 / re;
-        notes.model('pipe-laminar-hagen-poiseuille').cite(FLOW_REFERENCES.white2006);
+        notes.model('pipe-laminar-hagen-poiseuille').cite(REFERENCES.white2006);
         notes.assume('Fully developed laminar Hagen–Poiseuille flow.');
       } else {
         regime = re < PIPE_TURBULENT_LIMIT ? 'transitional' : 'turbulent';
         fD = colebrookFrictionFactor(re, relRough).frictionFactor;
-        notes.model('pipe-colebrook-1939').cite(FLOW_REFERENCES.colebrook1939, FLOW_REFERENCES.haaland1983);
+        notes.model('pipe-colebrook-1939').cite(REFERENCES.colebrook1939, REFERENCES.haaland1983);
         notes.assume('Fully developed turbulent pipe flow; Colebrook equation solved to machine precision.');
         if (regime === 'transitional') {
           notes.warn(
@@ -245,7 +206,7 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < PLATE_TRANSITION_REYNOLDS) {
         regime = 'laminar';
         cf = blasiusSkinFriction(re);
-        notes.model('plate-blasius').cite(FLOW_REFERENCES.blasius1908, FLOW_REFERENCES.schlichting2017);
+        notes.model('plate-blasius').cite(REFERENCES.blasius1908, REFERENCES.schlichting2017);
         notes.assume('Zero-pressure-gradient laminar boundary layer (Blasius); local skin friction at the given distance.');
         if (re < 1e3) {
           notes.warn('boundary-layer-thick', `Re_x = ${fmt(re)} is low: the boundary-layer approximation loses accuracy near the leading edge.`, 'caution');
@@ -254,7 +215,7 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
         regime = 'turbulent';
         const t = turbulentPlateSkinFriction(re);
         cf = t.value;
-        notes.model(t.correlation === 'power-law' ? 'plate-turbulent-power-law' : 'plate-turbulent-schlichting').cite(FLOW_REFERENCES.schlichting2017);
+        notes.model(t.correlation === 'power-law' ? 'plate-turbulent-power-law' : 'plate-turbulent-schlichting').cite(REFERENCES.schlichting2017);
         notes.assume('Turbulent boundary layer from the leading edge (no laminar run accounted for); local skin friction.');
         if (re < 1e6) {
           notes.warn('transition-region', `Re_x = ${fmt(re)} is near the critical value ${fmt(PLATE_TRANSITION_REYNOLDS)}: the boundary layer may still be transitional.`, 'caution');

@@ -18,7 +18,6 @@
  * hundred; the wake of the outer flow is not represented).
  */
 import { safeNewton } from '../../numerics/roots.js';
-import type { Reference } from '../../core/references.js';
 
 /** Spalding's fit constant κ (Spalding 1961). */
 const SPALDING_KAPPA = 0.4;
@@ -26,12 +25,6 @@ const SPALDING_KAPPA = 0.4;
 const SPALDING_INTERCEPT = 5.5;
 /** Largest u⁺ evaluated: e^(κu⁺) stays far from overflow, and y⁺ there (~10¹⁷³) exceeds any flow. */
 const MAX_VELOCITY_PLUS = 1000;
-
-export const SPALDING_1961: Reference = {
-  key: 'spalding1961',
-  citation: 'Spalding, D. B. (1961). A single formula for the "law of the wall". Journal of Applied Mechanics 28(3), 455–458.',
-  doi: '10.1115/1.3641728',
-};
 
 /** Edge of the viscous sublayer in wall units, y⁺ = 5 (common practice, no source). */
 export const VISCOUS_SUBLAYER_EDGE_PLUS = 5;

@@ -47,20 +47,6 @@
  */
 import { sumOdd } from '../../numerics/series.js';
 import { DomainError } from '../../core/errors.js';
-import type { Reference } from '../../core/references.js';
-
-export const GROOVE_DUCT_REFERENCES: Reference[] = [
-  {
-    key: 'shahLondon1978',
-    citation:
-      'Shah, R. K. & London, A. L. 1978 Laminar Flow Forced Convection in Ducts. Advances in Heat Transfer, Supplement 1. Academic Press, New York.',
-    doi: '10.1016/C2013-0-06152-X',
-  },
-  {
-    key: 'white2006',
-    citation: 'White, F. M. 2006 Viscous Fluid Flow, 3rd ed. McGraw-Hill, New York, section 3-3 (rectangular ducts).',
-  },
-];
 
 /** Σ_odd n^−p for p = 3, 4, 5: (1 − 2^−p) ζ(p); ζ(3) = 1.2020569031595942, ζ(5) = 1.03692775514337, ζ(4) = π⁴/90. */
 const ODD_ZETA: Record<3 | 4 | 5, number> = {

@@ -43,66 +43,13 @@
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { KARMAN_CONSTANT } from '../../core/constants.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
-import type { Reference } from '../../core/references.js';
+import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import { grooveLidVelocityMean } from '../groove/groove-duct.js';
 import { integrateRungeKutta4 } from '../../numerics/ode.js';
 import { brent } from '../../numerics/roots.js';
 import { sumSeries } from '../../numerics/series.js';
 import { solveCellDiffusion, type CellDiffusionResult } from '../../numerics/cell-diffusion.js';
-
-export const HEAT_REFERENCES = {
-  shahLondon1978: {
-    key: 'shahLondon1978',
-    citation:
-      'Shah, R. K. & London, A. L. 1978 Laminar Flow Forced Convection in Ducts. Advances in Heat Transfer, Supplement 1. Academic Press, New York.',
-    doi: '10.1016/C2013-0-06152-X',
-  },
-  philip1972: {
-    key: 'philip1972',
-    citation: 'Philip, J. R. 1972 Flows satisfying mixed no-slip and no-shear conditions. Z. angew. Math. Phys. 23, 353–372.',
-    doi: '10.1007/BF01595477',
-  },
-  belyaevVinogradova2010: {
-    key: 'belyaevVinogradova2010',
-    citation:
-      'Belyaev, A. V. & Vinogradova, O. I. 2010 Effective slip in pressure-driven flow past super-hydrophobic stripes. J. Fluid Mech. 652, 489–499.',
-    doi: '10.1017/S002211201000100X',
-  },
-  mikic1974: {
-    key: 'mikic1974',
-    citation: 'Mikić, B. B. 1974 Thermal contact conductance; theoretical considerations. Int. J. Heat Mass Transfer 17, 205–214 (from memory).',
-  },
-  gnielinski1976: {
-    key: 'gnielinski1976',
-    citation: 'Gnielinski, V. 1976 New equations for heat and mass transfer in turbulent pipe and channel flow. Int. Chem. Eng. 16(2), 359–368.',
-  },
-  petukhov1970: {
-    key: 'petukhov1970',
-    citation:
-      'Petukhov, B. S. 1970 Heat transfer and friction in turbulent pipe flow with variable physical properties. Advances in Heat Transfer 6, 503–564.',
-  },
-  dittusBoelter1930: {
-    key: 'dittusBoelter1930',
-    citation:
-      'Dittus, F. W. & Boelter, L. M. K. 1930 Heat transfer in automobile radiators of the tubular type. Univ. Calif. Publ. Eng. 2, 443–461; reprinted Int. Commun. Heat Mass Transfer 12 (1985) 3–22.',
-    doi: '10.1016/0735-1933(85)90003-X',
-  },
-  kader1981: {
-    key: 'kader1981',
-    citation: 'Kader, B. A. 1981 Temperature and concentration profiles in fully turbulent boundary layers. Int. J. Heat Mass Transfer 24(9), 1541–1544.',
-    doi: '10.1016/0017-9310(81)90220-9',
-  },
-  wiener1912: {
-    key: 'wiener1912',
-    citation:
-      'Wiener, O. 1912 Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (from memory).',
-  },
-  patankar1980: {
-    key: 'patankar1980',
-    citation: 'Patankar, S. V. 1980 Numerical Heat Transfer and Fluid Flow. Hemisphere, Washington, ch. 4.',
-  },
-} satisfies Record<string, Reference>;
 
 function requirePositive(value: number, field: string): void {
   if (!(Number.isFinite(value) && value > 0)) throw new DomainError(`${field} must be a positive finite number`, { field });
@@ -1025,7 +972,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   } else {
     throw new DomainError('heat transfer is computed for channel and pipe flows only', { field: 'scenario.flow.kind', code: 'unsupported-flow' });
   }
-  notes.cite(HEAT_REFERENCES.shahLondon1978, HEAT_REFERENCES.philip1972, HEAT_REFERENCES.belyaevVinogradova2010);
+  notes.cite(REFERENCES.shahLondon1978, REFERENCES.philip1972, REFERENCES.belyaevVinogradova2010);
   notes.assume('Flat lubricant–liquid interface; fully developed flow and heat transfer; constant properties.');
   notes.assume('Reference: the same wall with its grooves filled by the solid, at the same flow rate and heating.');
 
@@ -1041,7 +988,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const closedForm = (k: number) => thermalSlipLubricantGrooves(texture.pitch, texture.grooveWidth, texture.grooveDepth, kW, k, kS);
   const closed = closedForm(kO);
   notes.model(`thermal-slip-${closed.model}`);
-  if (closed.model === 'laminate-bounds-mean') notes.cite(HEAT_REFERENCES.wiener1912);
+  if (closed.model === 'laminate-bounds-mean') notes.cite(REFERENCES.wiener1912);
 
   const turbulent = flow.regime !== 'laminar';
   const longitudinal = Math.abs(texture.flowAngle) < 1e-9 || Math.abs(texture.flowAngle - 180) < 1e-9;
@@ -1057,7 +1004,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const useCrossSection = input.method !== 'closed-form' && fieldApplies;
   const fieldThermalSlip = (k: number) => thermalSlipField({ ...wall, lubricantConductivity: k }).thermalSlipLength;
   const thermalSlip = useFieldThermalSlip ? fieldThermalSlip(kO) : closed.thermalSlipLength;
-  if (useFieldThermalSlip) notes.cite(HEAT_REFERENCES.patankar1980).model('thermal-slip-field');
+  if (useFieldThermalSlip) notes.cite(REFERENCES.patankar1980).model('thermal-slip-field');
   else if (closed.estimate) {
     notes.warn('thermal-slip-estimate', 'The closed-form thermal slip is exact only for a solid much more conductive than both liquids; run method "field" for the exact value.', 'caution');
   }
@@ -1076,7 +1023,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const groovePecletNumber = 0;
 
   if (turbulent) {
-    notes.cite(HEAT_REFERENCES.gnielinski1976, HEAT_REFERENCES.petukhov1970, HEAT_REFERENCES.kader1981).model('turbulent-log-law-shift');
+    notes.cite(REFERENCES.gnielinski1976, REFERENCES.petukhov1970, REFERENCES.kader1981).model('turbulent-log-law-shift');
     notes.warn('turbulent-estimate', 'Turbulent heat-transfer change is a low-confidence estimate from shifted velocity and temperature log laws.', 'caution');
     if (flow.regime === 'transitional') notes.warn('transitional-flow', 'Transitional flow: neither the laminar nor the turbulent result is reliable.', 'warning');
     const reH = flow.reynoldsNumber;

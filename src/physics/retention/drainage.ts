@@ -59,27 +59,7 @@ import { integrateConservationChain, type ConservationChain } from '../../numeri
 import { monotoneCubic, type Interpolant } from '../../numerics/interpolation.js';
 import { brent } from '../../numerics/roots.js';
 import { ConvergenceError, DomainError } from '../../core/errors.js';
-import type { Reference } from '../../core/references.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
-
-export const DRAINAGE_REFERENCES = {
-  wexler2015: {
-    key: 'wexler2015',
-    citation: 'Wexler, J. S., Jacobi, I. & Stone, H. A. (2015). Shear-driven failure of liquid-infused surfaces. Phys. Rev. Lett. 114, 168301.',
-    doi: '10.1103/PhysRevLett.114.168301',
-  },
-  colosqui2016: {
-    key: 'colosqui2016',
-    citation:
-      'Colosqui, C. E., Wexler, J. S., Liu, Y. & Stone, H. A. (2016). Crossover from shear-driven to thermally activated drainage of liquid-infused microscale capillaries. Phys. Rev. Fluids 1, 064101.',
-    doi: '10.1103/PhysRevFluids.1.064101',
-  },
-  oliver1977: {
-    key: 'oliver1977',
-    citation: 'Oliver, J. F., Huh, C. & Mason, S. G. (1977). Resistance to spreading of liquids by sharp edges. J. Colloid Interface Sci. 59, 568–581.',
-    doi: '10.1016/0021-9797(77)90052-2',
-  },
-} satisfies Record<string, Reference>;
 
 /**
  * Time for the lumped filled length to fall from L₀ to L (module comment):

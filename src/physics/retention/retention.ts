@@ -72,41 +72,11 @@
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
 import { STANDARD_GRAVITY } from '../../core/constants.js';
-import type { Reference } from '../../core/references.js';
-import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux, GROOVE_DUCT_REFERENCES } from '../groove/groove-duct.js';
+import { REFERENCES } from '../../core/references.js';
+import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
 import type { AnglesUnderWorkingFluid, ContactAngles, WettingState } from '../wetting/wetting.js';
-import { DRAINAGE_REFERENCES, lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
-
-export const RETENTION_REFERENCES = {
-  wexler2015: DRAINAGE_REFERENCES.wexler2015,
-  furmidge1962: {
-    key: 'furmidge1962',
-    citation: 'Furmidge, C. G. L. (1962). Studies at phase interfaces. I. The sliding of liquid drops on solid surfaces and a theory for spray retention. J. Colloid Sci. 17, 309–324.',
-    doi: '10.1016/0095-8522(62)90011-9',
-  },
-  elsherbini2006: {
-    key: 'elsherbini2006',
-    citation: 'ElSherbini, A. I. & Jacobi, A. M. (2006). Retention forces and contact angles for critical liquid drops on non-horizontal surfaces. J. Colloid Interface Sci. 299, 841–849.',
-    doi: '10.1016/j.jcis.2006.02.018',
-  },
-  leveque1928: {
-    key: 'leveque1928',
-    citation: 'Lévêque, M. A. (1928). Les lois de la transmission de chaleur par convection. Ann. Mines 13, 201–299.',
-  },
-  shawHanratty1977: {
-    key: 'shawHanratty1977',
-    citation: 'Shaw, D. A. & Hanratty, T. J. (1977). Turbulent mass transfer rates to a wall for large Schmidt numbers. AIChE J. 23, 28–37 (pages from memory).',
-    doi: '10.1002/aic.690230106',
-  },
-  wilkeChang1955: {
-    key: 'wilkeChang1955',
-    citation: 'Wilke, C. R. & Chang, P. (1955). Correlation of diffusion coefficients in dilute solutions. AIChE J. 1, 264–270.',
-    doi: '10.1002/aic.690010222',
-  },
-  colosqui2016: DRAINAGE_REFERENCES.colosqui2016,
-  oliver1977: DRAINAGE_REFERENCES.oliver1977,
-} satisfies Record<string, Reference>;
+import { lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
 
 const DEG = Math.PI / 180;
 /** Molar mass of water, kg/mol (IUPAC standard atomic weights). */
@@ -350,10 +320,10 @@ function holdLengths(
 export function evaluateRetention(input: RetentionInput): Outcome<RetentionResult> {
   const notes = new Notes();
   notes.model('retention-capillary-pinning-gravity').cite(
-    RETENTION_REFERENCES.wexler2015,
-    RETENTION_REFERENCES.furmidge1962,
-    RETENTION_REFERENCES.elsherbini2006,
-    ...GROOVE_DUCT_REFERENCES,
+    REFERENCES.wexler2015,
+    REFERENCES.furmidge1962,
+    REFERENCES.elsherbini2006,
+    REFERENCES.shahLondon1978, REFERENCES.white2006,
   );
   const { scenario } = input;
   const { texture, lubricant, workingFluid, flow } = scenario;
@@ -580,7 +550,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     'near the retained length the real drainage is slower than this continuum model (thermally activated depinning, Colosqui et al. 2016)',
     'info',
   );
-  notes.cite(RETENTION_REFERENCES.colosqui2016);
+  notes.cite(REFERENCES.colosqui2016);
   notes.warn('flat-sample-hysteresis', 'contact-angle hysteresis measured on flat samples may differ from that inside the grooves', 'info');
   if (input.wettingState === 'not-wetting') {
     notes.warn('not-wetting-relies-on-pinning', 'the lubricant is not wetting under the working fluid: it is held by contact-line pinning alone', 'warning');
@@ -677,18 +647,18 @@ function dissolutionLifetime(
       notes.assume('Wilke–Chang molar volume taken as the liquid molar volume at the working temperature (the boiling-point value is typically 10–20 % larger)');
     }
     diffusivity = wilkeChangDiffusivity(workingFluid.temperature, workingFluid.viscosity, WATER_MOLAR_MASS, volume);
-    notes.cite(RETENTION_REFERENCES.wilkeChang1955);
+    notes.cite(REFERENCES.wilkeChang1955);
   }
   if (!(diffusivity > 0 && Number.isFinite(diffusivity))) throw new DomainError('diffusivity must be positive', { field: 'solubility.diffusivity' });
   const shearRate = flow.wallShearStress / workingFluid.viscosity;
   const leveque = levequeMassTransferCoefficient(diffusivity, shearRate, grooveLength);
   let coefficient = leveque;
   let correlation: 'leveque' | 'shaw-hanratty' = 'leveque';
-  notes.cite(RETENTION_REFERENCES.leveque1928);
+  notes.cite(REFERENCES.leveque1928);
   if (flow.regime !== 'laminar') {
     const schmidt = workingFluid.viscosity / (workingFluid.density * diffusivity);
     const turbulent = turbulentMassTransferCoefficient(flow.frictionVelocity, schmidt);
-    notes.cite(RETENTION_REFERENCES.shawHanratty1977);
+    notes.cite(REFERENCES.shawHanratty1977);
     if (turbulent > leveque) {
       coefficient = turbulent;
       correlation = 'shaw-hanratty';

@@ -8,25 +8,6 @@
 import { brent } from '../../numerics/roots.js';
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { KARMAN_CONSTANT } from '../../core/constants.js';
-import type { Reference } from '../../core/references.js';
-
-export const SLIP_DRAG_REFERENCES = {
-  laugaStone2003: {
-    key: 'laugaStone2003',
-    citation: 'Lauga, E. & Stone, H. A. 2003 Effective slip in pressure-driven Stokes flow. J. Fluid Mech. 489, 55–77.',
-  },
-  fukagata2006: {
-    key: 'fukagata2006',
-    citation:
-      'Fukagata, K., Kasagi, N. & Koumoutsakos, P. 2006 A theoretical prediction of friction drag reduction in turbulent flow by superhydrophobic surfaces. Phys. Fluids 18, 051703.',
-    doi: '10.1063/1.2205307',
-  },
-  ibrahim2021: {
-    key: 'ibrahim2021',
-    citation:
-      'Ibrahim, J. I., Gómez-de-Segura, G., Chung, D. & García-Mayoral, R. 2021 The smooth-wall-like behaviour of turbulence over drag-altering surfaces: a unifying virtual-origin framework. J. Fluid Mech. 915, A56 (authors and title from memory).',
-  },
-} satisfies Record<string, Reference>;
 
 function requireNonNegative(value: number, field: string): void {
   if (!(Number.isFinite(value) && value >= 0)) throw new DomainError(`${field} must be a non-negative finite length`, { field });

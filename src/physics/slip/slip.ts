@@ -6,35 +6,18 @@
  * Pure function of a resolved SI {@link Scenario}; no HTTP, no logging.
  */
 import {
-  CellInputError,
-  SolverDivergence,
-  solveLongitudinalCell,
-  solveTransverseCell,
-  type GrooveCellInput,
-  type GrooveCellResult,
+  CellInputError, SolverDivergence, solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult
 } from '../groove/groove-cell.js';
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
-import { GROOVE_DUCT_REFERENCES } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
 import {
-  SLIP_DRAG_REFERENCES,
-  laminarChannelDragReductionBothWalls,
-  laminarChannelDragReductionOneWall,
-  laminarPipeDragReduction,
-  turbulentDragChange,
-  virtualOriginShift,
+  laminarChannelDragReductionBothWalls, laminarChannelDragReductionOneWall, laminarPipeDragReduction, turbulentDragChange, virtualOriginShift
 } from './drag.js';
 import {
-  STRIPE_SLIP_REFERENCES,
-  TENSOR_SLIP_REFERENCE,
-  belyaevVinogradovaSlipLengthLongitudinal,
-  belyaevVinogradovaSlipLengthTransverse,
-  grooveLocalSlipLengths,
-  interfacialShearRatioFromSlip,
-  obliqueSlipLengths,
-  type GrooveLocalSlip,
+  belyaevVinogradovaSlipLengthLongitudinal, belyaevVinogradovaSlipLengthTransverse, grooveLocalSlipLengths, interfacialShearRatioFromSlip, obliqueSlipLengths, type GrooveLocalSlip
 } from './stripe-slip.js';
+import { REFERENCES } from '../../core/references.js';
 
 export type SlipMethod = 'auto' | 'closed-form' | 'field';
 export type WavesRegime = 'calm' | 'marginal' | 'wavy';
@@ -347,13 +330,13 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const { texture, lubricant, workingFluid, flow } = scenario;
   const notes = new Notes();
   notes.model('slip/belyaev-vinogradova-duct-local-slip').cite(
-    STRIPE_SLIP_REFERENCES.philip1972,
-    STRIPE_SLIP_REFERENCES.laugaStone2003,
-    STRIPE_SLIP_REFERENCES.belyaevVinogradova2010,
-    STRIPE_SLIP_REFERENCES.asmolovVinogradova2012,
-    STRIPE_SLIP_REFERENCES.schoenecker2014,
-    TENSOR_SLIP_REFERENCE,
-    ...GROOVE_DUCT_REFERENCES,
+    REFERENCES.philip1972,
+    REFERENCES.laugaStone2003,
+    REFERENCES.belyaevVinogradova2010,
+    REFERENCES.asmolovVinogradova2012,
+    REFERENCES.schoenecker2014,
+    REFERENCES.bazantVinogradova2008,
+    REFERENCES.shahLondon1978, REFERENCES.white2006,
   );
   notes.assume('Flat lubricant–working-liquid interface pinned at the groove edges; Stokes flow inside the texture.');
   notes.assume('Grooves long compared with their width and pitch (fully developed flow in the groove).');
@@ -540,7 +523,7 @@ export function dragChange(
   const { flow } = scenario;
   const b = Math.max(slipAlongFlow, 0);
   if (flow.regime === 'laminar') {
-    notes.cite(SLIP_DRAG_REFERENCES.laugaStone2003);
+    notes.cite(REFERENCES.laugaStone2003);
     if (flow.kind === 'channel') {
       const H = flow.height;
       if (!(H !== undefined && Number.isFinite(H) && H > 0)) {
@@ -570,7 +553,7 @@ export function dragChange(
     };
   }
 
-  notes.cite(SLIP_DRAG_REFERENCES.fukagata2006, SLIP_DRAG_REFERENCES.ibrahim2021).model('drag/virtual-origin-fixed-bulk-reynolds');
+  notes.cite(REFERENCES.fukagata2006, REFERENCES.ibrahim2021).model('drag/virtual-origin-fixed-bulk-reynolds');
   if (flow.regime === 'transitional') {
     notes.warn(
       'transitional-flow-drag',

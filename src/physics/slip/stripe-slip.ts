@@ -10,36 +10,7 @@
  * b_⊥ (across them).
  */
 import { DomainError } from '../../core/errors.js';
-import type { Reference } from '../../core/references.js';
 import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../groove/groove-duct.js';
-
-export const STRIPE_SLIP_REFERENCES = {
-  philip1972: {
-    key: 'philip1972',
-    citation: 'Philip, J. R. 1972 Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. (ZAMP) 23, 353–372.',
-  },
-  laugaStone2003: {
-    key: 'laugaStone2003',
-    citation: 'Lauga, E. & Stone, H. A. 2003 Effective slip in pressure-driven Stokes flow. J. Fluid Mech. 489, 55–77.',
-  },
-  belyaevVinogradova2010: {
-    key: 'belyaevVinogradova2010',
-    citation:
-      'Belyaev, A. V. & Vinogradova, O. I. 2010 Effective slip in pressure-driven flow past super-hydrophobic stripes. J. Fluid Mech. 652, 489–499.',
-    doi: '10.1017/S0022112010000741',
-  },
-  asmolovVinogradova2012: {
-    key: 'asmolovVinogradova2012',
-    citation:
-      'Asmolov, E. S. & Vinogradova, O. I. 2012 Effective slip boundary condition for arbitrary one-dimensional surfaces. J. Fluid Mech. 706, 108–117.',
-    doi: '10.1017/jfm.2012.228',
-  },
-  schoenecker2014: {
-    key: 'schoenecker2014',
-    citation:
-      'Schönecker, C., Baier, T. & Hardt, S. 2014 Influence of the enclosed fluid on the flow over a microstructured surface in the Cassie state. J. Fluid Mech. 740, 168–195.',
-  },
-} satisfies Record<string, Reference>;
 
 function requirePositive(value: number, field: string, what: string): void {
   if (!(Number.isFinite(value) && value > 0)) throw new DomainError(`${what} must be a positive finite number`, { field });
@@ -145,11 +116,6 @@ export function obliqueSlipLengths(
     crossFlow: (slipLengthLongitudinal - slipLengthTransverse) * s * c,
   };
 }
-
-export const TENSOR_SLIP_REFERENCE: Reference = {
-  key: 'bazantVinogradova2008',
-  citation: 'Bazant, M. Z. & Vinogradova, O. I. 2008 Tensorial hydrodynamic slip. J. Fluid Mech. 613, 125–134 (pages from memory).',
-};
 
 export interface GrooveLocalSlip {
   /** Mean over the groove mouth of the longitudinal local slip, m. */

@@ -37,37 +37,14 @@
 import { brent } from '../../numerics/roots.js';
 import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
-import type { Reference } from '../../core/references.js';
+import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
-import { SURFACTANT_REFERENCES } from '../../materials/surfactants.js';
 import type { ResolvedSurfactant } from '../../core/surfactant.js';
 import { surfactantEquilibrium, type SurfactantEquilibrium } from './equilibrium.js';
 import {
-  cleanTransverseCoefficients,
-  marangoniScaling,
-  philipTransverse,
-  slipWithMarangoni,
-  type SurfactantGroups,
+  cleanTransverseCoefficients, marangoniScaling, philipTransverse, slipWithMarangoni, type SurfactantGroups
 } from './scaling.js';
 import { solveLongWaveGroove, solveTransverseInterface, type InterfaceProfile } from './solver.js';
-
-export const SURFACTANT_SLIP_REFERENCES = {
-  landel2020: SURFACTANT_REFERENCES.landel2020,
-  philip1972: {
-    key: 'philip1972',
-    citation: 'Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. 23, 353–372 (DOI 10.1007/BF01595477 from memory).',
-  },
-  peaudecerf2017: {
-    key: 'peaudecerf2017',
-    citation:
-      'Peaudecerf, F. J., Landel, J. R., Goldstein, R. E. & Luzzatto-Fegiz, P. (2017) Traces of surfactants can severely limit the drag reduction of superhydrophobic surfaces. Proc. Natl Acad. Sci. USA 114, 7254–7259.',
-    doi: '10.1073/pnas.1702469114',
-  },
-  scharfetter1969: {
-    key: 'scharfetter1969',
-    citation: 'Scharfetter, D. L. & Gummel, H. K. (1969) Large-signal analysis of a silicon Read diode oscillator. IEEE Trans. Electron Devices 16, 64–77 (DOI 10.1109/T-ED.1969.16566 from memory).',
-  },
-} satisfies Record<string, Reference>;
 
 export type SurfactantMethod = 'scaling' | 'solver' | 'auto';
 export type SurfactantRegime = 'clean' | 'partially-mobile' | 'immobilised' | 'stagnant-cap';
@@ -391,7 +368,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
  */
 export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantResult> {
   const notes = new Notes();
-  notes.cite(SURFACTANT_SLIP_REFERENCES.landel2020, SURFACTANT_SLIP_REFERENCES.philip1972, SURFACTANT_SLIP_REFERENCES.peaudecerf2017);
+  notes.cite(REFERENCES.landel2020, REFERENCES.philip1972, REFERENCES.peaudecerf2017);
   notes.cite(...input.surfactant.references);
   for (const w of input.surfactant.warnings) notes.warn(w.code, w.message, w.severity);
   if (!Number.isFinite(input.temperature) || input.temperature <= 0) throw new DomainError('temperature must be positive (K)', { field: 'temperature' });
@@ -405,7 +382,7 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   }
   const pr = prepare(input, notes);
   if (input.method !== 'scaling') {
-    notes.cite(SURFACTANT_SLIP_REFERENCES.scharfetter1969);
+    notes.cite(REFERENCES.scharfetter1969);
     notes.assume('interface solver: working fluid as a Stokes half-space over one texture period (flow height ≫ pitch)');
     if (pr.halfHeight !== undefined && pr.halfHeight < 5 * pr.pitch) {
       notes.warn('solver-confined-flow', 'flow half-height below 5 pitches: the half-space interface solver overstates the clean interface velocity', 'caution');

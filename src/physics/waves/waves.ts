@@ -51,46 +51,15 @@ import { DomainError } from '../../core/errors.js';
 import { Notes, outcome } from '../../core/notes.js';
 import { STANDARD_GRAVITY } from '../../core/constants.js';
 import type { Outcome, Warning } from '../../core/notes.js';
-import type { Reference } from '../../core/references.js';
+import { REFERENCES } from '../../core/references.js';
 import type { FlowState, Scenario } from '../scenario.js';
 import {
-  SPALDING_1961,
-  VISCOUS_SUBLAYER_EDGE_PLUS,
-  velocityPlusAtWallDistance,
-  wallDistanceAtVelocityPlus,
+  VISCOUS_SUBLAYER_EDGE_PLUS, velocityPlusAtWallDistance, wallDistanceAtVelocityPlus
 } from '../flow/wall-profile.js';
 
 // ---------------------------------------------------------------------------
 // References
 // ---------------------------------------------------------------------------
-
-export const WAVE_REFERENCES = {
-  chandrasekhar1961: {
-    key: 'chandrasekhar1961',
-    citation:
-      'Chandrasekhar, S. (1961). Hydrodynamic and Hydromagnetic Stability, ch. X (Rayleigh–Taylor instability) and ch. XI (Kelvin–Helmholtz instability). Oxford: Clarendon Press.',
-  },
-  lamb1932: {
-    key: 'lamb1932',
-    citation: 'Lamb, H. (1932). Hydrodynamics, 6th ed., §§267–268 (capillary waves; waves under wind). Cambridge University Press.',
-  },
-  drazinReid1981: {
-    key: 'drazinReid1981',
-    citation: 'Drazin, P. G. & Reid, W. H. (1981). Hydrodynamic Stability, ch. 1 (Kelvin–Helmholtz instability). Cambridge University Press; DOI of the 2nd ed. (2004).',
-    doi: '10.1017/CBO9780511616938',
-  },
-  miles1957: {
-    key: 'miles1957',
-    citation: 'Miles, J. W. (1957). On the generation of surface waves by shear flows. Journal of Fluid Mechanics 3(2), 185–204.',
-    doi: '10.1017/S0022112057000567',
-  },
-  farabeeCasarella1991: {
-    key: 'farabeeCasarella1991',
-    citation:
-      'Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall pressure fluctuations beneath turbulent boundary layers. Physics of Fluids A 3(10), 2410–2420 (rms level 2.5–3.4 τ_w used here from memory).',
-    doi: '10.1063/1.858179',
-  },
-} satisfies Record<string, Reference>;
 
 // ---------------------------------------------------------------------------
 // Two-layer dispersion relation
@@ -797,12 +766,12 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     .model('waves:critical-layer-screen')
     .model('waves:static-depinning-rayleigh-taylor')
     .cite(
-      WAVE_REFERENCES.chandrasekhar1961,
-      WAVE_REFERENCES.lamb1932,
-      WAVE_REFERENCES.drazinReid1981,
-      WAVE_REFERENCES.miles1957,
-      WAVE_REFERENCES.farabeeCasarella1991,
-      SPALDING_1961,
+      REFERENCES.chandrasekhar1961,
+      REFERENCES.lamb1932,
+      REFERENCES.drazinReid1981,
+      REFERENCES.miles1957,
+      REFERENCES.farabeeCasarella1991,
+      REFERENCES.spalding1961,
     );
   notes.assume('Calm/wavy boundary Λ = w⁺ We_τ^(1/3) = 1 is a fact of the trade (common practice, no source).');
   notes.assume('Inviscid linear theory with uniform streams in each layer; the pinned interface is represented by its fundamental spanwise mode cos(πz/w).');

@@ -42,32 +42,10 @@
  *      and Young contact angles. Langmuir 20(18), 7659–7664. doi:10.1021/la049410h
  */
 import type { FluidState } from '../../core/fluid.js';
-import { FOWKES_1964 } from '../../materials/references.js';
 import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
-import type { Reference } from '../../core/references.js';
+import { REFERENCES } from '../../core/references.js';
 import type { Texture } from '../scenario.js';
-
-export const WETTING_REFERENCES = {
-  bico2002: {
-    key: 'bico2002',
-    citation: 'Bico, J., Thiele, U. & Quéré, D. (2002). Wetting of textured surfaces. Colloids Surf. A 206, 41–46.',
-    doi: '10.1016/S0927-7757(02)00061-4',
-  },
-  smith2013: {
-    key: 'smith2013',
-    citation:
-      'Smith, J. D., Dhiman, R., Anand, S., Reza-Garduno, E., Cohen, R. E., McKinley, G. H. & Varanasi, K. K. (2013). Droplet mobility on lubricant-impregnated surfaces. Soft Matter 9, 1772–1780.',
-    doi: '10.1039/C2SM27032C',
-  },
-  fowkes1964: FOWKES_1964,
-  tadmor2004: {
-    key: 'tadmor2004',
-    citation:
-      'Tadmor, R. (2004). Line energy and the relation between advancing, receding, and Young contact angles. Langmuir 20(18), 7659–7664.',
-    doi: '10.1021/la049410h',
-  },
-} satisfies Record<string, Reference>;
 
 /** Dispersive part of water's surface tension, N/m (Fowkes 1964, 21.8 ± 0.7 mN/m at 20 °C; from memory). */
 export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
@@ -253,7 +231,7 @@ export function resolveInterfacialTension(
     gammaWd = WATER_DISPERSIVE_SURFACE_TENSION;
   }
   const value = fowkesInterfacialTension(gammaO, gammaOd, gammaW, gammaWd);
-  notes.cite(WETTING_REFERENCES.fowkes1964);
+  notes.cite(REFERENCES.fowkes1964);
   notes.warn(
     'interfacial-tension-estimated',
     `interfacial tension estimated by Fowkes' geometric-mean rule (${(value * 1e3).toFixed(1)} mN/m); typically within a few mN/m for alkane/water, less reliable for polar or fluorinated lubricants`,
@@ -270,7 +248,7 @@ export function resolveInterfacialTension(
  */
 export function evaluateWetting(input: WettingInput): Outcome<WettingResult> {
   const notes = new Notes();
-  notes.model('wetting-three-state-energies').cite(WETTING_REFERENCES.bico2002, WETTING_REFERENCES.smith2013);
+  notes.model('wetting-three-state-energies').cite(REFERENCES.bico2002, REFERENCES.smith2013);
   const { roughnessRatio, topSolidFraction } = grooveTextureRatios(input.texture);
   const criticalAngle = hemiwickingCriticalAngle(roughnessRatio, topSolidFraction);
   const cosCritical = Math.cos(criticalAngle * DEG);
@@ -313,7 +291,7 @@ export function evaluateWetting(input: WettingInput): Outcome<WettingResult> {
   } else if (under) {
     cosTheta = Math.cos(tadmorEquilibriumAngle(under.advancing, under.receding) * DEG);
     origin = 'tadmor-from-hysteresis';
-    notes.cite(WETTING_REFERENCES.tadmor2004);
+    notes.cite(REFERENCES.tadmor2004);
     notes.warn('equilibrium-angle-estimated', "equilibrium angle under the working fluid estimated from the advancing and receding angles (Tadmor's relation)", 'caution');
   } else {
     throw new DomainError('contact angles needed: under the working fluid, or in air for both liquids', { field: 'contactAngles' });
