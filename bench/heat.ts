@@ -7,14 +7,10 @@ import { readFileSync } from 'node:fs';
 import os from 'node:os';
 import { resolveFluid } from '../src/materials/resolve.js';
 import { evaluateFlow } from '../src/physics/flow/flow.js';
-import {
-  evaluateHeat,
-  rectangularDuctLaminar,
-  solveHeatCrossSection,
-  thermalSlipAdiabaticGrooves,
-  thermalSlipField,
-  type HeatInput,
-} from '../src/physics/heat/heat.js';
+import { evaluateHeat, type HeatInput } from '../src/physics/heat/heat.js';
+import { solveHeatCrossSection, thermalSlipField } from '../src/physics/heat/conduction-field.js';
+import { rectangularDuctLaminar } from '../src/physics/heat/ducts.js';
+import { thermalSlipAdiabaticGrooves } from '../src/physics/heat/thermal-slip.js';
 
 const time = <R>(f: () => R): [R, number] => {
   const t0 = performance.now();

@@ -36,3 +36,15 @@ export class ConvergenceError extends DomainError {
     this.residual = residual;
   }
 }
+
+/** Throws a DomainError naming `field` unless `value` is a positive finite number. */
+export function requirePositive(value: number, field: string, what = field): void {
+  if (!(Number.isFinite(value) && value > 0)) throw new DomainError(`${what} must be a positive finite number`, { field });
+}
+
+/** Throws a DomainError naming `field` unless 0 < `value` < 1. */
+export function requireFraction(value: number, field: string): void {
+  if (!(Number.isFinite(value) && value > 0 && value < 1)) {
+    throw new DomainError(`${field} must lie strictly between 0 and 1`, { field });
+  }
+}

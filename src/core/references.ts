@@ -196,13 +196,15 @@ export const REFERENCES = bibliography({
 
   // --- Heat transfer -----------------------------------------------------------------------------
   mikic1974: {
-    citation: 'Mikić, B. B. (1974). Thermal contact conductance; theoretical considerations. Int. J. Heat Mass Transfer 17, 205–214 (from memory).',
+    citation: 'Mikić, B. B. (1974). Thermal contact conductance; theoretical considerations. Int. J. Heat Mass Transfer 17, 205–214 (from memory, DOI too).',
+    doi: '10.1016/0017-9310(74)90082-9',
   },
   gnielinski1976: {
     citation: 'Gnielinski, V. (1976). New equations for heat and mass transfer in turbulent pipe and channel flow. Int. Chem. Eng. 16(2), 359–368.',
   },
   petukhov1970: {
-    citation: 'Petukhov, B. S. (1970). Heat transfer and friction in turbulent pipe flow with variable physical properties. Advances in Heat Transfer 6, 503–564.',
+    citation: 'Petukhov, B. S. (1970). Heat transfer and friction in turbulent pipe flow with variable physical properties. Advances in Heat Transfer 6, 503–564 (DOI from memory).',
+    doi: '10.1016/S0065-2717(08)70153-9',
   },
   dittusBoelter1930: {
     citation:
@@ -210,7 +212,7 @@ export const REFERENCES = bibliography({
     doi: '10.1016/0735-1933(85)90003-X',
   },
   kader1981: {
-    citation: 'Kader, B. A. (1981). Temperature and concentration profiles in fully turbulent boundary layers. Int. J. Heat Mass Transfer 24(9), 1541–1544.',
+    citation: 'Kader, B. A. (1981). Temperature and concentration profiles in fully turbulent boundary layers. Int. J. Heat Mass Transfer 24(9), 1541–1544 (DOI from memory).',
     doi: '10.1016/0017-9310(81)90220-9',
   },
   wiener1912: {
