@@ -31,16 +31,10 @@
  *    drive: G_total = G + b; each holding mechanism then retains
  *    Δp/|G_total|. Gravity alone: hold length Δp/|b|; vertical hydrostatic hold
  *    height γ κ_max/(|Δρ| g).
- * 4. Dissolution into once-through water [order of magnitude]: lifetime
- *    t = ρ_o d/(k_m c_sat) (lubricant mass per unit interface area over the
- *    dissolution flux, clean water outside). k_m: laminar, the Lévêque mean over
- *    the groove length L in the wall shear rate S = τ_w/μ_w,
- *    k_m = [3/(2 Γ(4/3) 9^(1/3))] (D² S/L)^(1/3) = 0.8075 (D² S/L)^(1/3) [5];
- *    turbulent, Shaw & Hanratty's high-Schmidt correlation k_m = 0.0889 u_τ Sc^(−0.704)
- *    [6] (constants from memory), or the Lévêque value if larger (short strips).
- *    Diffusivity of the lubricant in water from Wilke & Chang [7]:
- *    D = 7.4×10⁻⁸ (φ M_w)^½ T/(μ_w V_b^0.6) cm²/s (μ_w in cP, V_b the molar volume
- *    at the normal boiling point in cm³/mol, φ = 2.6 for water).
+ * 4. Dissolution into once-through water [order of magnitude]: ./dissolution.ts.
+ *
+ * The holding mechanisms 1–3 are small functions in ./holding.ts, the drainage
+ * model (steady column, lumped plug, finite volumes) in ./drainage.ts.
  *
  * Steady retained share and timeline. When capillary back-pressure binds, the
  * retained volume is that of the drainage model's steady column (drainage.ts,
@@ -58,16 +52,9 @@
  * slower than the continuum model (thermally activated depinning, ref. 8); a
  * `not-wetting` lubricant is held by pinning alone.
  *
- * References:
- *  [1] Wexler, J. S., Jacobi, I. & Stone, H. A. 2015 Phys. Rev. Lett. 114, 168301.
- *  [2] Shah, R. K. & London, A. L. 1978 Laminar Flow Forced Convection in Ducts.
- *  [3] Furmidge, C. G. L. 1962 J. Colloid Sci. 17, 309–324.
- *  [4] ElSherbini, A. I. & Jacobi, A. M. 2006 J. Colloid Interface Sci. 299, 841–849.
- *  [5] Lévêque, M. A. 1928 Ann. Mines 13, 201–299 (mean coefficient as in
- *      Bird, Stewart & Lightfoot 2002, Transport Phenomena, 2nd ed., §12.2; from memory).
- *  [6] Shaw, D. A. & Hanratty, T. J. 1977 AIChE J. 23, 28–37 (from memory).
- *  [7] Wilke, C. R. & Chang, P. 1955 AIChE J. 1, 264–270.
- *  [8] Colosqui, C. E., Wexler, J. S., Liu, Y. & Stone, H. A. 2016 Phys. Rev. Fluids 1, 064101.
+ * References (full citations under these keys in src/core/references.ts):
+ * [1] wexler2015, [2] shahLondon1978, [3] furmidge1962, [4] elsherbini2006,
+ * [8] colosqui2016; the dissolution sources in ./dissolution.ts.
  */
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
@@ -75,108 +62,12 @@ import { STANDARD_GRAVITY } from '../../core/constants.js';
 import { REFERENCES } from '../../core/references.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
-import type { AnglesUnderWorkingFluid, ContactAngles, WettingState } from '../wetting/wetting.js';
+import type { ContactAngles, WettingState } from '../wetting/wetting.js';
+import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
+import { holdLengths, type CurvatureLimit } from './holding.js';
 import { lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
 
 const DEG = Math.PI / 180;
-/** Molar mass of water, kg/mol (IUPAC standard atomic weights). */
-const WATER_MOLAR_MASS = 0.018015;
-/** Wilke–Chang association factor of water [7]. */
-const WILKE_CHANG_WATER_ASSOCIATION = 2.6;
-/** Γ(4/3) (Abramowitz & Stegun 1964, Table 6.1). */
-const GAMMA_FOUR_THIRDS = 0.8929795115692492;
-/** Mean Lévêque coefficient 3/(2 Γ(4/3) 9^(1/3)) (module comment, [5]). */
-export const LEVEQUE_MEAN_COEFFICIENT = 3 / (2 * GAMMA_FOUR_THIRDS * Math.cbrt(9));
-
-export type CurvatureLimit = 'receding-angle' | 'floor-touching' | 'none';
-
-/**
- * Largest capillary curvature a groove meniscus sustains before the front recedes
- * (mechanism 1): 2 cos θ_R/w if its pinned arc reaches θ_R with sag ≤ d, else 8d/(w² + 4d²).
- * @param grooveWidth w, m; @param grooveDepth d, m; @param recedingAngle θ_R, degrees
- * @returns curvature, 1/m (0 when θ_R ≥ 90°), and which limit applies.
- */
-export function maximumCapillaryCurvature(
-  grooveWidth: number,
-  grooveDepth: number,
-  recedingAngle: number,
-): { curvature: number; limit: CurvatureLimit } {
-  if (recedingAngle >= 90) return { curvature: 0, limit: 'none' };
-  const cosine = Math.cos(recedingAngle * DEG);
-  const sag = (grooveWidth * (1 - Math.sin(recedingAngle * DEG))) / (2 * cosine);
-  if (sag <= grooveDepth) return { curvature: (2 * cosine) / grooveWidth, limit: 'receding-angle' };
-  return { curvature: (8 * grooveDepth) / (grooveWidth ** 2 + 4 * grooveDepth ** 2), limit: 'floor-touching' };
-}
-
-/** Back-pressure gradient that cancels the shear-driven flux, G = τ Q̂_s/Q̂_p, Pa/m. */
-export function backPressureGradient(grooveWidth: number, grooveDepth: number, interfacialShear: number): number {
-  return (interfacialShear * shearDrivenGrooveFlux(grooveWidth, grooveDepth)) / pressureDrivenGrooveFlux(grooveWidth, grooveDepth);
-}
-
-/**
- * Steady retained length of the capillary mechanism, L∞ = γ κ_max/G (module comment).
- * @returns m; 0 when no capillary suction, and Infinity is never returned (G ≤ 0 gives the full `cap`).
- */
-export function capillaryRetainedLength(interfacialTension: number, curvature: number, gradient: number, cap = Number.MAX_VALUE): number {
-  const g = Math.abs(gradient);
-  if (!(g > 0)) return cap;
-  return Math.min(cap, (interfacialTension * curvature) / g);
-}
-
-/**
- * Pinning pressure of a plug, Δp_pin = k γ (cos θ_R − cos θ_A)(w + 2d)/(w d), Pa (mechanism 2).
- */
-export function pinningPressure(
-  interfacialTension: number,
-  advancingAngle: number,
-  recedingAngle: number,
-  grooveWidth: number,
-  grooveDepth: number,
-  shapeFactor = 1,
-): number {
-  const hysteresis = Math.max(0, Math.cos(recedingAngle * DEG) - Math.cos(advancingAngle * DEG));
-  return (shapeFactor * interfacialTension * hysteresis * (grooveWidth + 2 * grooveDepth)) / (grooveWidth * grooveDepth);
-}
-
-/**
- * Wilke–Chang (1955) diffusivity of a dilute solute in a solvent [7].
- * @param temperature T, K; @param solventViscosity μ, Pa·s; @param solventMolarMass M, kg/mol
- * @param soluteMolarVolume V_b at the normal boiling point, m³/mol; @param association φ (2.6 water)
- * @returns m²/s
- */
-export function wilkeChangDiffusivity(
-  temperature: number,
-  solventViscosity: number,
-  solventMolarMass: number,
-  soluteMolarVolume: number,
-  association = WILKE_CHANG_WATER_ASSOCIATION,
-): number {
-  const cgs = (7.4e-8 * Math.sqrt(association * solventMolarMass * 1e3) * temperature) / (solventViscosity * 1e3 * (soluteMolarVolume * 1e6) ** 0.6);
-  return cgs * 1e-4;
-}
-
-/** Lévêque mean mass-transfer coefficient over a strip of length L in wall shear rate S, m/s [5]. */
-export function levequeMassTransferCoefficient(diffusivity: number, wallShearRate: number, length: number): number {
-  return LEVEQUE_MEAN_COEFFICIENT * Math.cbrt((diffusivity * diffusivity * wallShearRate) / length);
-}
-
-/** Shaw & Hanratty (1977) fully developed turbulent high-Schmidt coefficient k = 0.0889 u_τ Sc^−0.704, m/s [6]. */
-export function turbulentMassTransferCoefficient(frictionVelocity: number, schmidtNumber: number): number {
-  return 0.0889 * frictionVelocity * schmidtNumber ** -0.704;
-}
-
-export interface Solubility {
-  /** Saturation solubility of the lubricant in the working fluid. */
-  value: number;
-  /** kg/m³ (mass concentration) or mole fraction (needs molarMass). */
-  unit: 'kg/m3' | 'mole-fraction';
-  /** Lubricant molar mass, kg/mol (mole fraction conversion, Wilke–Chang volume estimate). */
-  molarMass?: number;
-  /** Lubricant molar volume at its normal boiling point, m³/mol (Wilke–Chang). */
-  molarVolumeAtBoilingPoint?: number;
-  /** Diffusivity of the lubricant in the working fluid, m²/s (skips Wilke–Chang). */
-  diffusivity?: number;
-}
 
 export interface RetentionInput {
   scenario: Scenario;
@@ -242,12 +133,7 @@ export interface RetentionResult {
       /** Vertical hydrostatic hold height γ κ_max/(|Δρ| g), m (null when Δρ = 0 or no suction). */
       hydrostaticHoldHeight: number | null;
     };
-    dissolution: {
-      lifetime: number | null;
-      massTransferCoefficient: number | null;
-      diffusivity: number | null;
-      correlation: 'leveque' | 'shaw-hanratty' | null;
-    };
+    dissolution: DissolutionEstimate;
   };
   bindingMechanism: RetentionMechanism;
   dominantDrive: 'shear' | 'gravity';
@@ -278,36 +164,6 @@ export interface RetentionResult {
     depthSensitivity: number;
     width: 'narrower' | 'wider' | 'either';
     depth: 'shallower' | 'deeper' | 'either';
-  };
-}
-
-interface HoldLengths {
-  capillary: number;
-  pinning: number;
-  drive: number;
-}
-
-function holdLengths(
-  w: number,
-  d: number,
-  gamma: number,
-  tau: number,
-  body: number,
-  angles: AnglesUnderWorkingFluid,
-  shapeFactor: number,
-  cap: number,
-): HoldLengths & { gradient: number; curvature: { curvature: number; limit: CurvatureLimit }; pin: number } {
-  const curvature = maximumCapillaryCurvature(w, d, angles.receding);
-  const gradient = backPressureGradient(w, d, tau);
-  const drive = gradient + body;
-  const pin = pinningPressure(gamma, angles.advancing, angles.receding, w, d, shapeFactor);
-  return {
-    gradient,
-    curvature,
-    pin,
-    drive,
-    capillary: capillaryRetainedLength(gamma, curvature.curvature, drive, cap),
-    pinning: capillaryRetainedLength(1, pin, drive, cap),
   };
 }
 
@@ -442,7 +298,9 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     capillaryBinds && column ? Math.min(initialFill, column.equivalentLength / segmentLength) : Math.min(initialFill, retainedLength / segmentLength);
 
   // Dissolution lifetime.
-  const dissolution = dissolutionLifetime(input, scenario, notes, segmentLength * segments);
+  const dissolution = input.solubility
+    ? dissolutionLifetime({ solubility: input.solubility, scenario, grooveLength: segmentLength * segments }, notes)
+    : NO_DISSOLUTION;
   if (dissolution.lifetime !== null && dissolution.lifetime < input.duration) {
     binding = 'dissolution';
     notes.warn('dissolution-within-duration', 'the lubricant dissolves within the requested duration (order-of-magnitude estimate)', 'warning');
@@ -610,62 +468,4 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     },
     notes,
   );
-}
-
-function dissolutionLifetime(
-  input: RetentionInput,
-  scenario: Scenario,
-  notes: Notes,
-  grooveLength: number,
-): RetentionResult['mechanisms']['dissolution'] {
-  const none = { lifetime: null, massTransferCoefficient: null, diffusivity: null, correlation: null };
-  const solubility = input.solubility;
-  if (!solubility) return none;
-  const { lubricant, workingFluid, flow, texture } = scenario;
-  if (!(solubility.value >= 0 && Number.isFinite(solubility.value))) throw new DomainError('solubility must be non-negative', { field: 'solubility.value' });
-  if (solubility.value === 0) return none;
-  let saturation: number;
-  if (solubility.unit === 'kg/m3') {
-    saturation = solubility.value;
-  } else {
-    if (!(solubility.value < 1)) throw new DomainError('mole fraction must be below 1', { field: 'solubility.value' });
-    if (!(solubility.molarMass && solubility.molarMass > 0)) throw new DomainError('mole-fraction solubility needs the lubricant molar mass', { field: 'solubility.molarMass' });
-    // Dilute: c = x ρ_w M_o/M_w.
-    saturation = (solubility.value * workingFluid.density * solubility.molarMass) / WATER_MOLAR_MASS;
-  }
-  let diffusivity = solubility.diffusivity;
-  if (diffusivity === undefined) {
-    if (!/water/i.test(workingFluid.id) && !/water/i.test(workingFluid.name)) {
-      throw new DomainError('Wilke–Chang estimate implemented for water: give the diffusivity', { field: 'solubility.diffusivity' });
-    }
-    let volume = solubility.molarVolumeAtBoilingPoint;
-    if (volume === undefined) {
-      if (!(solubility.molarMass && solubility.molarMass > 0)) {
-        throw new DomainError('give the diffusivity, or the molar mass for the Wilke–Chang estimate', { field: 'solubility.molarMass' });
-      }
-      volume = solubility.molarMass / lubricant.density;
-      notes.assume('Wilke–Chang molar volume taken as the liquid molar volume at the working temperature (the boiling-point value is typically 10–20 % larger)');
-    }
-    diffusivity = wilkeChangDiffusivity(workingFluid.temperature, workingFluid.viscosity, WATER_MOLAR_MASS, volume);
-    notes.cite(REFERENCES.wilkeChang1955);
-  }
-  if (!(diffusivity > 0 && Number.isFinite(diffusivity))) throw new DomainError('diffusivity must be positive', { field: 'solubility.diffusivity' });
-  const shearRate = flow.wallShearStress / workingFluid.viscosity;
-  const leveque = levequeMassTransferCoefficient(diffusivity, shearRate, grooveLength);
-  let coefficient = leveque;
-  let correlation: 'leveque' | 'shaw-hanratty' = 'leveque';
-  notes.cite(REFERENCES.leveque1928);
-  if (flow.regime !== 'laminar') {
-    const schmidt = workingFluid.viscosity / (workingFluid.density * diffusivity);
-    const turbulent = turbulentMassTransferCoefficient(flow.frictionVelocity, schmidt);
-    notes.cite(REFERENCES.shawHanratty1977);
-    if (turbulent > leveque) {
-      coefficient = turbulent;
-      correlation = 'shaw-hanratty';
-    }
-    if (flow.regime === 'transitional') notes.warn('dissolution-transitional', 'transitional flow: turbulent mass-transfer correlation used', 'caution');
-  }
-  const lifetime = (lubricant.density * texture.grooveDepth) / (coefficient * saturation);
-  notes.warn('dissolution-order-of-magnitude', 'dissolution lifetime is an order-of-magnitude estimate (clean once-through water, flat interface)', 'info');
-  return { lifetime, massTransferCoefficient: coefficient, diffusivity, correlation };
 }

@@ -5,18 +5,11 @@ import { DomainError } from '../../../src/core/errors.js';
 import { STANDARD_GRAVITY } from '../../../src/core/constants.js';
 import { evaluateFlow } from '../../../src/physics/flow/flow.js';
 import type { FlowState, Scenario } from '../../../src/physics/scenario.js';
-import {
-  backPressureGradient,
-  evaluateRetention,
-  LEVEQUE_MEAN_COEFFICIENT,
-  maximumCapillaryCurvature,
-  wilkeChangDiffusivity,
-  type RetentionInput,
-} from '../../../src/physics/retention/retention.js';
+import { evaluateRetention, type RetentionInput } from '../../../src/physics/retention/retention.js';
+import { backPressureGradient, maximumCapillaryCurvature } from '../../../src/physics/retention/holding.js';
 
 const reference = JSON.parse(readFileSync(new URL('../../../fixtures/retention/retention_reference.json', import.meta.url), 'utf8')) as {
   example: { retainedLength: number; gradient: number; curvature: number };
-  levequeMeanCoefficient: number;
 };
 
 function fluid(id: string, props: Partial<FluidState>): FluidState {
@@ -132,33 +125,6 @@ describe('gravity along the groove', () => {
     const up = heavy('against-flow');
     expect(down.retainedLengthWithGravity).toBeLessThan(down.retainedLength);
     expect(up.retainedLengthWithGravity).toBeGreaterThan(up.retainedLength);
-  });
-});
-
-describe('dissolution lifetime', () => {
-  it('mean Lévêque coefficient 3/(2Γ(4/3)9^(1/3)) = 0.8075 (scipy.special.gamma in the fixture)', () => {
-    expect(LEVEQUE_MEAN_COEFFICIENT).toBeCloseTo(reference.levequeMeanCoefficient, 14);
-  });
-  it('Wilke–Chang scales as T/(μ V_b^0.6) (exact property of the correlation)', () => {
-    const base = wilkeChangDiffusivity(293.15, 1e-3, 0.018015, 229e-6);
-    expect(wilkeChangDiffusivity(2 * 293.15, 1e-3, 0.018015, 229e-6) / base).toBeCloseTo(2, 12);
-    expect(wilkeChangDiffusivity(293.15, 2e-3, 0.018015, 229e-6) / base).toBeCloseTo(0.5, 12);
-    expect(wilkeChangDiffusivity(293.15, 1e-3, 0.018015, 2 * 229e-6) / base).toBeCloseTo(2 ** -0.6, 12);
-    // Order of magnitude of small-molecule diffusivities in water, 10⁻¹⁰–10⁻⁹ m²/s (common practice, no source).
-    expect(base).toBeGreaterThan(1e-10);
-    expect(base).toBeLessThan(1e-9);
-  });
-  it('decane in turbulent once-through water lasts months (order of magnitude; common practice, no source)', () => {
-    const input = exampleInput({
-      // Decane: solubility about 0.05 mg/L, M = 0.142 kg/mol, Le Bas volume about 229 cm³/mol (all from memory).
-      solubility: { value: 5.2e-5, unit: 'kg/m3', molarMass: 0.14228, molarVolumeAtBoilingPoint: 229e-6 },
-    });
-    input.scenario = { ...input.scenario, lubricant: fluid('decane', { density: 730, viscosity: 0.92e-3 }), flow: channel(0.01, 1) };
-    const r = evaluateRetention(input).result;
-    const months = r.dissolutionLifetime! / (30 * 86400);
-    expect(r.mechanisms.dissolution.correlation).toBe('shaw-hanratty');
-    expect(months).toBeGreaterThan(0.3);
-    expect(months).toBeLessThan(30);
   });
 });
 
