@@ -5,7 +5,8 @@ import { STANDARD_GRAVITY } from '../../../src/core/constants.js';
 import { evaluateFlow } from '../../../src/physics/flow/flow.js';
 import type { FlowState, Scenario } from '../../../src/physics/scenario.js';
 import type { FluidState } from '../../../src/core/fluid.js';
-import { evaluateWaves, waveRoughnessWarning, WAVY_INTERFACE_WARNING_CODE, type WaveRegime, type WavesInput } from '../../../src/physics/waves/waves.js';
+import { evaluateWaves, waveRoughnessWarning, WAVY_INTERFACE_WARNING_CODE, type WavesInput } from '../../../src/physics/waves/waves.js';
+import type { WaveRegime } from '../../../src/physics/waves/criteria.js';
 import { velocityPlusAtWallDistance } from '../../../src/physics/flow/wall-profile.js';
 
 // Fluids: water at 20 °C (ρ = 998.2 kg/m³, μ = 1.002 mPa·s; IAPWS values, common practice),
