@@ -76,24 +76,20 @@ export interface DesignInput {
  * flow conditions on the working fluid, interfacial tension from input, catalogue or Fowkes.
  * `needsTension: false` leaves an unknown tension undefined instead of failing.
  */
-export function resolveDesign(input: DesignInput, notes: Notes, needsTension = true): { scenario: Scenario; flow: FlowResult; tensionOrigin?: string } {
+export function resolveDesign(input: DesignInput, notes: Notes, needsTension = true): { scenario: Scenario; flow: FlowResult } {
   const lubricant = resolveFluidInput(input.lubricant, 'lubricant', notes);
   const workingFluid = resolveFluidInput(input.workingFluid, 'workingFluid', notes);
   const texture = resolveTexture(input.texture);
   const flow = resolveFlow(input.flow, workingFluid, notes, texture);
   let interfacialTension: number | undefined;
-  let tensionOrigin: string | undefined;
   try {
-    const t = resolveInterfacialTension(lubricant, workingFluid, input.interfacialTension, notes);
-    interfacialTension = t.value;
-    tensionOrigin = t.origin;
+    interfacialTension = resolveInterfacialTension(lubricant, workingFluid, input.interfacialTension, notes).value;
   } catch (error) {
     if (needsTension) throw error;
   }
   return {
     scenario: { texture, lubricant, workingFluid, flow, ...(interfacialTension === undefined ? {} : { interfacialTension }) },
     flow,
-    ...(tensionOrigin === undefined ? {} : { tensionOrigin }),
   };
 }
 

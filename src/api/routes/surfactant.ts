@@ -1,6 +1,7 @@
 /** POST /v1/surfactant — how much of the slip survives traces of surfactant? */
 import { Notes } from '../../core/notes.js';
-import { dragChange, evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
+import { evaluateSlip, type SlipMethod } from '../../physics/slip/slip.js';
+import { dragChange } from '../../physics/slip/drag.js';
 import { evaluateSurfactant } from '../../physics/surfactant/surfactant.js';
 import { getSurfactant, resolveSurfactant } from '../../materials/surfactants.js';
 import type { InterfaceType } from '../../core/surfactant.js';

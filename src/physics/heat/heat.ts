@@ -223,7 +223,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   if (closed.model === 'laminate-bounds-mean') notes.cite(REFERENCES.wiener1912);
 
   const turbulent = flow.regime !== 'laminar';
-  const longitudinal = Math.abs(texture.flowAngle) < 1e-9 || Math.abs(texture.flowAngle - 180) < 1e-9;
+  const longitudinal = Math.abs(texture.flowAngle) < 1e-9;
   const fieldApplies = !turbulent && !config.pipe && input.heating === 'uniform-flux' && longitudinal;
   if (input.method === 'field' && !fieldApplies) {
     notes.warn(

@@ -1,13 +1,16 @@
 /**
  * Drag change produced by an effective wall slip length: exact laminar results
  * at fixed flow rate, and the turbulent virtual-origin model at fixed bulk
- * Reynolds number. Drag reduction DR is a fraction, positive = less drag:
+ * Reynolds number; {@link dragChange} picks the one that fits a flow. Drag reduction DR is a fraction, positive = less drag:
  * DR = 1 − τ_slip/τ_smooth (equivalently 1 − Δp_slip/Δp_smooth at the same
  * flow rate). Lengths in m.
  */
 import { brent } from '../../numerics/roots.js';
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { KARMAN_CONSTANT } from '../../core/constants.js';
+import type { Notes } from '../../core/notes.js';
+import { REFERENCES } from '../../core/references.js';
+import type { Scenario } from '../scenario.js';
 
 function requireNonNegative(value: number, field: string): void {
   if (!(Number.isFinite(value) && value >= 0)) throw new DomainError(`${field} must be a non-negative finite length`, { field });
@@ -205,5 +208,125 @@ export function turbulentDragChange(
     slipLengthLongitudinalPlus: lx,
     slipLengthTransversePlus: lz,
     iterations: solved.iterations,
+  };
+}
+
+export type DragChange =
+  | {
+      kind: 'laminar-fixed-flow-rate';
+      /** DR = 1 − Δp/Δp₀ at equal flow rate; positive = less drag. */
+      dragReduction: number;
+      geometry: 'channel-both-walls' | 'channel-one-wall' | 'pipe';
+      /** Slip length along the mean flow used, m. */
+      slipLength: number;
+      /** Channel height H or pipe radius R, m. */
+      lengthScale: number;
+    }
+  | {
+      kind: 'turbulent-fixed-bulk-reynolds';
+      deltaUPlus: number;
+      /** DR = 1 − τ_w/τ_w0 at fixed bulk Reynolds number; positive = less drag. */
+      dragReduction: number;
+      /** u_τ of the slipping wall, m/s. */
+      frictionVelocityReduced: number;
+      /** Slip lengths in the reduced wall units used in ΔU⁺. */
+      slipLengthAlongFlowPlus: number;
+      slipLengthSpanwisePlus: number;
+      /** C_f0 of the smooth wall the change refers to. */
+      smoothSkinFriction: number;
+      iterations: number;
+    }
+  | {
+      kind: 'turbulent-log-law-shift';
+      /** ΔU⁺ in the smooth-wall units (no skin-friction coefficient to convert it to DR). */
+      deltaUPlus: number;
+    }
+  | {
+      kind: 'not-evaluated';
+      reason: string;
+    };
+
+/**
+ * Drag change of a slipping wall in the scenario's flow (laminar fixed flow rate,
+ * or turbulent virtual-origin shift at fixed bulk Reynolds number), from the slip
+ * lengths along the flow and spanwise (m). Exported so that other models (e.g.
+ * surfactant-reduced slip) reuse the one drag model.
+ */
+export function dragChange(
+  scenario: Scenario,
+  slipAlongFlow: number,
+  slipSpanwise: number,
+  kinematicViscosity: number,
+  notes: Notes,
+): DragChange {
+  const { flow } = scenario;
+  const b = Math.max(slipAlongFlow, 0);
+  if (flow.regime === 'laminar') {
+    notes.cite(REFERENCES.laugaStone2003);
+    if (flow.kind === 'channel') {
+      const H = flow.height;
+      if (!(H !== undefined && Number.isFinite(H) && H > 0)) {
+        throw new DomainError('a channel flow needs its full height', { field: 'flow.height' });
+      }
+      const walls = flow.texturedWalls ?? 2;
+      notes.model('drag/laminar-channel-fixed-flow-rate');
+      return {
+        kind: 'laminar-fixed-flow-rate',
+        dragReduction: walls === 2 ? laminarChannelDragReductionBothWalls(H, b) : laminarChannelDragReductionOneWall(H, b),
+        geometry: walls === 2 ? 'channel-both-walls' : 'channel-one-wall',
+        slipLength: b,
+        lengthScale: H,
+      };
+    }
+    if (flow.kind === 'pipe') {
+      const D = flow.diameter;
+      if (!(D !== undefined && Number.isFinite(D) && D > 0)) {
+        throw new DomainError('a pipe flow needs its diameter', { field: 'flow.diameter' });
+      }
+      notes.model('drag/laminar-pipe-fixed-flow-rate');
+      return { kind: 'laminar-fixed-flow-rate', dragReduction: laminarPipeDragReduction(D / 2, b), geometry: 'pipe', slipLength: b, lengthScale: D / 2 };
+    }
+    return {
+      kind: 'not-evaluated',
+      reason: `no closed-form laminar drag change for a '${flow.kind}' flow; the slip velocity is τ_w b/μ`,
+    };
+  }
+
+  notes.cite(REFERENCES.fukagata2006, REFERENCES.ibrahim2021).model('drag/virtual-origin-fixed-bulk-reynolds');
+  if (flow.regime === 'transitional') {
+    notes.warn(
+      'transitional-flow-drag',
+      'The flow is transitional; the turbulent virtual-origin drag model is applied but transition itself may shift with slip.',
+      'caution',
+    );
+  }
+  const cf = flow.skinFrictionCoefficient;
+  if (!(cf !== undefined && Number.isFinite(cf) && cf > 0)) {
+    notes.warn(
+      'no-skin-friction-coefficient',
+      'No skin-friction coefficient is known for this flow, so only the log-law shift ΔU⁺ (smooth-wall units) is reported.',
+      'caution',
+    );
+    return {
+      kind: 'turbulent-log-law-shift',
+      deltaUPlus: virtualOriginShift(b / flow.viscousLength, Math.max(slipSpanwise, 0) / flow.viscousLength),
+    };
+  }
+  if (flow.kind === 'channel' && flow.texturedWalls === 1) {
+    notes.assume('Turbulent channel with one textured wall: the drag change is that of the textured wall, as if both walls were textured.');
+  }
+  if (flow.kind === 'plate') {
+    notes.assume('Flat plate: the fixed-bulk-Reynolds-number log-law relation is applied with the free-stream velocity and the local C_f.');
+  }
+  const turbulent = turbulentDragChange(b, Math.max(slipSpanwise, 0), flow.frictionVelocity, kinematicViscosity, cf);
+  return {
+    kind: 'turbulent-fixed-bulk-reynolds',
+    deltaUPlus: turbulent.deltaUPlus,
+    dragReduction: turbulent.dragReduction,
+    frictionVelocityReduced: turbulent.frictionVelocityReduced,
+    slipLengthAlongFlowPlus: turbulent.slipLengthLongitudinalPlus,
+    slipLengthSpanwisePlus: turbulent.slipLengthTransversePlus,
+    smoothSkinFriction: cf,
+    iterations: turbulent.iterations,
   };
 }
