@@ -131,7 +131,7 @@ function laminarNusselt(config: Configuration, heating: HeatingCondition, slip: 
   return nusseltUniformTemperature(config.geometry, x, y).nusselt;
 }
 
-/** Laminar friction ratio at fixed flow rate (physics.md §4 drag-change formulas, exact Navier-slip results). */
+/** Laminar friction ratio at fixed flow rate: the exact Navier-slip results of ../slip/drag.ts. */
 function laminarFrictionRatio(config: Configuration, slip: number): number {
   const L = config.ratioLength;
   if (config.geometry === 'plates-both') return L / (L + 6 * slip);
@@ -363,7 +363,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const slipVelocity = (flow.wallShearStress * result.slipLength) / scenario.workingFluid.viscosity;
   const lubricantDiffusivity = kO / (scenario.lubricant.density * cO);
   result.groovePecletNumber = (slipVelocity * texture.grooveWidth) / lubricantDiffusivity;
-  // Where conduction-only homogenisation is not enough (physics.md §7; thresholds common practice, no source).
+  // Where conduction-only homogenisation is not enough (thresholds common practice, no source).
   const comparableSolid = kS < 10 * Math.max(kW, kO);
   if (result.groovePecletNumber > 1 && comparableSolid) {
     notes.warn(

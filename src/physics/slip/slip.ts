@@ -87,7 +87,7 @@ export interface SlipResult {
   fieldSolverStats?: FieldSolverStats;
 }
 
-/** Texture limits of the smooth-wall (virtual-origin) regime, wall units (physics.md §4; Ibrahim et al. 2021). */
+/** Texture limits of the smooth-wall (virtual-origin) regime, wall units (Ibrahim et al. 2021 for the framework; the bounds ~5 and ~25 are common practice, no source). */
 const SLIP_PLUS_LIMIT = 5;
 const PITCH_PLUS_LIMIT = 25;
 /** Stokes assumption inside the texture. */

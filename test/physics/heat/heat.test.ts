@@ -97,7 +97,7 @@ describe('evaluateHeat', () => {
     expect(r0.nusselt!).toBeCloseTo(48 / 11, 10);
     const r1 = evaluateHeat({ ...input, solid: equal, slip: { slipLengthLongitudinal: 50e-6 }, scenario: { ...input.scenario, flow: pipe } }).result;
     expect(r1.nusselt!).toBeCloseTo(nusseltUniformFluxTube(0.25, 0)!, 12);
-    expect(r1.frictionRatio).toBeCloseTo(200 / 400, 12); // R/(R + 4b), physics.md §4 laminar pipe formula
+    expect(r1.frictionRatio).toBeCloseTo(200 / 400, 12); // R/(R + 4b): exact laminar Navier-slip pipe flow at fixed flow rate, Q ∝ R⁴(1 + 4b/R)
   });
   it('turbulent flow: labelled low confidence, smooth Nu from Gnielinski on D_h = 2H', () => {
     const input = demoInput();

@@ -12,7 +12,7 @@ describe('turbulent correlations', () => {
   it('Kader (1981) β(0.71) ≈ 3.85 (air; value from memory)', () => {
     expect(kaderThermalConstant(0.71)).toBeCloseTo(3.85, 1);
   });
-  it('a smooth wall gives ratio 1; a thermal resistance lowers Nu; drag reduction from ΔU+ ≈ 18 % at Re_m ≈ 1e4, ΔU+ from ℓ+ = 2 (physics.md §4 computed check)', () => {
+  it('a smooth wall gives ratio 1; a thermal resistance lowers Nu; drag reduction from ΔU+ ≈ 18 % at Re_m ≈ 1e4, ΔU+ from ℓ+ = 2 (the log-law relation checked against the scipy fixture fixtures/slip/turbulent_drag.json in test/physics/slip)', () => {
     const base = { reynolds: 2e4, prandtl: 7, viscousLength: 5e-6, thermalSlipLength: 0 };
     expect(turbulentHeatTransfer(base).heatTransferRatio).toBe(1);
     expect(turbulentHeatTransfer({ ...base, thermalSlipLength: 2e-6 }).heatTransferRatio).toBeLessThan(1);
