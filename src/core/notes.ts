@@ -4,6 +4,7 @@
  * duplicates so that composed calculations can merge them. Shared by the
  * physics and the materials layers.
  */
+import type { ModelId } from './models.js';
 import type { Reference } from './references.js';
 
 /** How much a warning matters to the person reading the result. */
@@ -25,7 +26,7 @@ export class Notes {
   readonly warnings: Warning[] = [];
   readonly assumptions: string[] = [];
   readonly references: Reference[] = [];
-  readonly models: string[] = [];
+  readonly models: ModelId[] = [];
 
   warn(code: string, message: string, severity: Severity = 'warning'): this {
     if (!this.warnings.some((w) => w.code === code && w.message === message)) {
@@ -46,7 +47,7 @@ export class Notes {
     return this;
   }
 
-  model(id: string): this {
+  model(id: ModelId): this {
     if (!this.models.includes(id)) this.models.push(id);
     return this;
   }
@@ -64,13 +65,13 @@ export interface NotesLike {
   warnings: readonly Warning[];
   assumptions: readonly string[];
   references: readonly Reference[];
-  models?: readonly string[];
+  models?: readonly ModelId[];
 }
 
 /** Standard envelope returned by top-level physics calculations. */
 export interface Outcome<T> extends NotesLike {
   result: T;
-  models: string[];
+  models: ModelId[];
 }
 
 export function outcome<T>(result: T, notes: Notes): Outcome<T> {

@@ -124,12 +124,12 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < CHANNEL_LAMINAR_LIMIT) {
         regime = 'laminar';
         cf = laminarChannelSkinFriction(re);
-        notes.model('channel-laminar-poiseuille').cite(REFERENCES.white2006);
+        notes.model('flow.channel-laminar').cite(REFERENCES.white2006);
         notes.assume('Fully developed laminar plane Poiseuille flow between smooth plates.');
       } else {
         regime = re < CHANNEL_TURBULENT_LIMIT ? 'transitional' : 'turbulent';
         cf = deanSkinFriction(re);
-        notes.model('channel-dean-1978').cite(REFERENCES.dean1978);
+        notes.model('flow.channel-turbulent-dean').cite(REFERENCES.dean1978);
         notes.assume('Fully developed turbulent plane-channel flow over smooth walls (Dean 1978 correlation).');
         if (regime === 'transitional') {
           notes.warn(
@@ -166,12 +166,12 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < PIPE_LAMINAR_LIMIT) {
         regime = 'laminar';
         fD = 64 / re;
-        notes.model('pipe-laminar-hagen-poiseuille').cite(REFERENCES.white2006);
+        notes.model('flow.pipe-laminar').cite(REFERENCES.white2006);
         notes.assume('Fully developed laminar Hagen–Poiseuille flow.');
       } else {
         regime = re < PIPE_TURBULENT_LIMIT ? 'transitional' : 'turbulent';
         fD = colebrookFrictionFactor(re, relRough).frictionFactor;
-        notes.model('pipe-colebrook-1939').cite(REFERENCES.colebrook1939, REFERENCES.haaland1983);
+        notes.model('flow.pipe-turbulent-colebrook').cite(REFERENCES.colebrook1939, REFERENCES.haaland1983);
         notes.assume('Fully developed turbulent pipe flow; Colebrook equation solved to machine precision.');
         if (regime === 'transitional') {
           notes.warn(
@@ -206,7 +206,7 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       if (re < PLATE_TRANSITION_REYNOLDS) {
         regime = 'laminar';
         cf = blasiusSkinFriction(re);
-        notes.model('plate-blasius').cite(REFERENCES.blasius1908, REFERENCES.schlichting2017);
+        notes.model('flow.plate-laminar-blasius').cite(REFERENCES.blasius1908, REFERENCES.schlichting2017);
         notes.assume('Zero-pressure-gradient laminar boundary layer (Blasius); local skin friction at the given distance.');
         if (re < 1e3) {
           notes.warn('boundary-layer-thick', `Re_x = ${fmt(re)} is low: the boundary-layer approximation loses accuracy near the leading edge.`, 'caution');
@@ -215,7 +215,7 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
         regime = 'turbulent';
         const t = turbulentPlateSkinFriction(re);
         cf = t.value;
-        notes.model(t.correlation === 'power-law' ? 'plate-turbulent-power-law' : 'plate-turbulent-schlichting').cite(REFERENCES.schlichting2017);
+        notes.model(t.correlation === 'power-law' ? 'flow.plate-turbulent-power-law' : 'flow.plate-turbulent-schlichting').cite(REFERENCES.schlichting2017);
         notes.assume('Turbulent boundary layer from the leading edge (no laminar run accounted for); local skin friction.');
         if (re < 1e6) {
           notes.warn('transition-region', `Re_x = ${fmt(re)} is near the critical value ${fmt(PLATE_TRANSITION_REYNOLDS)}: the boundary layer may still be transitional.`, 'caution');
@@ -240,7 +240,7 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       const ut = Math.sqrt(spec.wallShearStress / density);
       const regime = spec.regime ?? 'turbulent';
       if (spec.regime === undefined) notes.assume('Wall shear stress given directly; the flow is taken as turbulent for the drag models.');
-      notes.model('wall-shear-given');
+      notes.model('flow.wall-shear-given');
       state = {
         kind: 'wall-shear',
         wallShearStress: spec.wallShearStress,

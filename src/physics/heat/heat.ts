@@ -33,8 +33,15 @@ import {
   nusseltUniformTemperature,
   type LaminarGeometry,
 } from './laminar.js';
-import { thermalSlipLubricantGrooves } from './thermal-slip.js';
+import { thermalSlipLubricantGrooves, type ThermalSlipClosedForm } from './thermal-slip.js';
+import type { ModelId } from '../../core/models.js';
 import { turbulentHeatTransfer } from './turbulent.js';
+
+const CLOSED_FORM_MODEL: Record<ThermalSlipClosedForm['model'], ModelId> = {
+  'isothermal-ridges-striped': 'heat.thermal-slip-striped',
+  'laminate-bounds-mean': 'heat.thermal-slip-laminate-bounds',
+  'identical-materials': 'heat.thermal-slip-identical-materials',
+};
 
 /** Largest sensitivity sweep run with the field thermal slip (cost: one conduction solve per point). */
 const FIELD_SWEEP_LIMIT = 25;
@@ -219,7 +226,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   };
   const closedForm = (k: number) => thermalSlipLubricantGrooves(texture.pitch, texture.grooveWidth, texture.grooveDepth, kW, k, kS);
   const closed = closedForm(kO);
-  notes.model(`thermal-slip-${closed.model}`);
+  notes.model(CLOSED_FORM_MODEL[closed.model]);
   if (closed.model === 'laminate-bounds-mean') notes.cite(REFERENCES.wiener1912);
 
   const turbulent = flow.regime !== 'laminar';
@@ -236,7 +243,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const useCrossSection = input.method !== 'closed-form' && fieldApplies;
   const fieldThermalSlip = (k: number) => thermalSlipField({ ...wall, lubricantConductivity: k }).thermalSlipLength;
   const thermalSlip = useFieldThermalSlip ? fieldThermalSlip(kO) : closed.thermalSlipLength;
-  if (useFieldThermalSlip) notes.cite(REFERENCES.patankar1980).model('thermal-slip-field');
+  if (useFieldThermalSlip) notes.cite(REFERENCES.patankar1980).model('heat.thermal-slip-field');
   else if (closed.estimate) {
     notes.warn('thermal-slip-estimate', 'The closed-form thermal slip is exact only for a solid much more conductive than both liquids; run method "field" for the exact value.', 'caution');
   }
@@ -255,7 +262,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   const groovePecletNumber = 0;
 
   if (turbulent) {
-    notes.cite(REFERENCES.gnielinski1976, REFERENCES.petukhov1970, REFERENCES.kader1981).model('turbulent-log-law-shift');
+    notes.cite(REFERENCES.gnielinski1976, REFERENCES.petukhov1970, REFERENCES.kader1981).model('heat.turbulent-log-law-shift');
     notes.warn('turbulent-estimate', 'Turbulent heat-transfer change is a low-confidence estimate from shifted velocity and temperature log laws.', 'caution');
     if (flow.regime === 'transitional') notes.warn('transitional-flow', 'Transitional flow: neither the laminar nor the turbulent result is reliable.', 'warning');
     const reH = flow.reynoldsNumber;
@@ -304,7 +311,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         lubricantHeatCapacity: scenario.lubricant.density * cO,
         lubricantMotion: input.lubricantMotion,
       });
-      notes.model('field-cross-section');
+      notes.model('heat.cross-section-field');
       const smoothOverall = Dh / kW / (wallResistance + Dh / (kW * smooth));
       result = {
         thermalSlipLength: thermalSlip,
@@ -326,6 +333,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       const nusselt = laminarNusselt(config, input.heating, slip, thermalSlip);
       const nusseltSlip = laminarNusselt(config, input.heating, slip, 0);
       const frictionRatio = laminarFrictionRatio(config, slip);
+      notes.model('heat.laminar-closed-form');
       result = {
         thermalSlipLength: thermalSlip,
         thermalSlipLengthClosedForm: closed.thermalSlipLength,
@@ -342,7 +350,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         confidence: 'normal',
         groovePecletNumber,
       };
-      if (input.heating === 'uniform-temperature') notes.model('uniform-temperature-shooting');
+      if (input.heating === 'uniform-temperature') notes.model('heat.uniform-temperature-shooting');
       if (input.heating === 'uniform-temperature' && thermalSlip !== 0) {
         notes.assume('Uniform wall temperature with thermal slip: the Robin condition T_f = T_w − b_t ∂T/∂n on the homogenised wall.');
       }

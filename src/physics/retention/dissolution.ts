@@ -139,6 +139,7 @@ export function dissolutionLifetime(input: DissolutionInput, notes: Notes): Diss
     if (flow.regime === 'transitional') notes.warn('dissolution-transitional', 'transitional flow: turbulent mass-transfer correlation used', 'caution');
   }
   const lifetime = (lubricant.density * texture.grooveDepth) / (coefficient * saturation);
+  notes.model('retention.dissolution');
   notes.warn('dissolution-order-of-magnitude', 'dissolution lifetime is an order-of-magnitude estimate (clean once-through water, flat interface)', 'info');
   return { lifetime, massTransferCoefficient: coefficient, diffusivity, correlation };
 }

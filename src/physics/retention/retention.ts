@@ -175,7 +175,7 @@ export interface RetentionResult {
  */
 export function evaluateRetention(input: RetentionInput): Outcome<RetentionResult> {
   const notes = new Notes();
-  notes.model('retention-capillary-pinning-gravity').cite(
+  notes.model('retention.holding-mechanisms').cite(
     REFERENCES.wexler2015,
     REFERENCES.furmidge1962,
     REFERENCES.elsherbini2006,
@@ -330,7 +330,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     const change = initialLength - finalLength;
     timeTo90 = change > 1e-12 * initialLength && speed > 0 ? lumpedDrainageTime(initialLength, initialLength - 0.9 * change, stopLength, speed) : null;
     conservationError = null;
-    notes.model('drainage-lumped-plug');
+    notes.model('retention.drainage-lumped-plug');
   };
   if (useFiniteVolume) {
     timelineModel = 'finite-volume';
@@ -360,7 +360,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       finalRetainedFraction = drainage.finalRetainedFraction;
       timeTo90 = drainage.timeTo90PercentChange;
       conservationError = drainage.conservationError;
-      notes.model('drainage-finite-volume-bdf2');
+      notes.model('retention.drainage-finite-volume');
     } catch (error) {
       if (!(error instanceof ConvergenceError)) throw error;
       notes.warn(

@@ -269,7 +269,7 @@ export function dragChange(
         throw new DomainError('a channel flow needs its full height', { field: 'flow.height' });
       }
       const walls = flow.texturedWalls ?? 2;
-      notes.model('drag/laminar-channel-fixed-flow-rate');
+      notes.model('drag.laminar-channel');
       return {
         kind: 'laminar-fixed-flow-rate',
         dragReduction: walls === 2 ? laminarChannelDragReductionBothWalls(H, b) : laminarChannelDragReductionOneWall(H, b),
@@ -283,7 +283,7 @@ export function dragChange(
       if (!(D !== undefined && Number.isFinite(D) && D > 0)) {
         throw new DomainError('a pipe flow needs its diameter', { field: 'flow.diameter' });
       }
-      notes.model('drag/laminar-pipe-fixed-flow-rate');
+      notes.model('drag.laminar-pipe');
       return { kind: 'laminar-fixed-flow-rate', dragReduction: laminarPipeDragReduction(D / 2, b), geometry: 'pipe', slipLength: b, lengthScale: D / 2 };
     }
     return {
@@ -292,7 +292,7 @@ export function dragChange(
     };
   }
 
-  notes.cite(REFERENCES.fukagata2006, REFERENCES.ibrahim2021).model('drag/virtual-origin-fixed-bulk-reynolds');
+  notes.cite(REFERENCES.fukagata2006, REFERENCES.ibrahim2021).model('drag.turbulent-virtual-origin');
   if (flow.regime === 'transitional') {
     notes.warn(
       'transitional-flow-drag',
@@ -307,6 +307,7 @@ export function dragChange(
       'No skin-friction coefficient is known for this flow, so only the log-law shift ΔU⁺ (smooth-wall units) is reported.',
       'caution',
     );
+    notes.model('drag.turbulent-log-law-shift');
     return {
       kind: 'turbulent-log-law-shift',
       deltaUPlus: virtualOriginShift(b / flow.viscousLength, Math.max(slipSpanwise, 0) / flow.viscousLength),

@@ -181,7 +181,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   validate(scenario);
   const { texture, lubricant, workingFluid, flow } = scenario;
   const notes = new Notes();
-  notes.model('slip/belyaev-vinogradova-duct-local-slip').cite(
+  notes.model('slip.stripe-closed-form').cite(
     REFERENCES.philip1972,
     REFERENCES.laugaStone2003,
     REFERENCES.belyaevVinogradova2010,
@@ -255,7 +255,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const methodUsed: SlipResult['methodUsed'] = fieldLongitudinal || fieldTransverse ? 'field' : 'closed-form';
   let fieldSolverStats: FieldSolverStats | undefined;
   if (field && (fieldLongitudinal || fieldTransverse)) {
-    notes.model('slip/groove-cell-field-solver');
+    notes.model('slip.groove-cell-field');
     fieldSolverStats = {
       ...(fieldLongitudinal ? { longitudinal: cellStats(fieldLongitudinal) } : {}),
       ...(fieldTransverse ? { transverse: cellStats(fieldTransverse) } : {}),

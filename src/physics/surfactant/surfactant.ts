@@ -184,12 +184,12 @@ function prepare(input: SurfactantInput, notes: Notes): Prepared {
     const cc = cleanTransverseCoefficients(pitch / halfHeight, phi);
     centreSf = 2 * shearRate * halfHeight * cc.centreCoefficient;
     slipSf = (halfHeight * 2 * cc.meanCoefficient) / (1 - cc.meanCoefficient);
-    notes.model(`landel2020-clean-${cc.method}`);
+    notes.model('surfactant.clean-grating-channel');
   } else {
     const p = philipTransverse(pitch, phi, shearRate);
     centreSf = p.centreVelocity;
     slipSf = p.slipLength;
-    notes.model('landel2020-clean-short-period');
+    notes.model('surfactant.clean-grating-half-space');
   }
   // A lubricant far less viscous than the working fluid is a gas (plastron): no local drag (our threshold, 5 %).
   const gas = input.underlying === 'gas' || (input.underlying === undefined && scenario.lubricant.viscosity < 0.05 * mu);
@@ -287,7 +287,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
     interfaceProfile = uniformProfile(pr, scal.marangoniReduction, tauW);
     marangoniStress = scal.marangoniReduction * tauW;
     drop = marangoniStress * pr.width;
-    notes.model('landel2020-scaling-4.29');
+    notes.model('surfactant.marangoni-scaling');
   } else {
     const tol = input.solver?.tolerance ?? 1e-10;
     const sol = solveTransverseInterface({
@@ -333,8 +333,8 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
       stagnant = stagnant || lw.stagnantCap;
       solverInfo.longWaveIterations = lw.iterations;
     }
-    notes.model('interface-solver-transverse');
-    if (Lg !== undefined) notes.model('long-wave-groove');
+    notes.model('surfactant.interface-solver');
+    if (Lg !== undefined) notes.model('surfactant.long-wave-groove');
   }
   const slipLength = bPar * cos2 + bPerp * sin2;
   const slipRetained = cleanFlow > 0 ? slipLength / cleanFlow : 1;

@@ -375,10 +375,10 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const layers = at.layers;
 
   notes
-    .model('waves:inertial-capillary-scaling')
-    .model('waves:confined-kelvin-helmholtz-two-layer')
-    .model('waves:critical-layer-screen')
-    .model('waves:static-depinning-rayleigh-taylor')
+    .model('waves.inertial-capillary-scaling')
+    .model('waves.confined-kelvin-helmholtz')
+    .model('waves.critical-layer-screen')
+    .model('waves.static-depinning-rayleigh-taylor')
     .cite(
       REFERENCES.chandrasekhar1961,
       REFERENCES.lamb1932,

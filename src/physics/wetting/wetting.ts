@@ -248,7 +248,7 @@ export function resolveInterfacialTension(
  */
 export function evaluateWetting(input: WettingInput): Outcome<WettingResult> {
   const notes = new Notes();
-  notes.model('wetting-three-state-energies').cite(REFERENCES.bico2002, REFERENCES.smith2013);
+  notes.model('wetting.three-state-energies').cite(REFERENCES.bico2002, REFERENCES.smith2013);
   const { roughnessRatio, topSolidFraction } = grooveTextureRatios(input.texture);
   const criticalAngle = hemiwickingCriticalAngle(roughnessRatio, topSolidFraction);
   const cosCritical = Math.cos(criticalAngle * DEG);
