@@ -28,7 +28,7 @@ describe('POST /v1/flow', () => {
     expect(body.result.reynoldsNumber).toBeLessThan(10500);
     // Dean (1978) at Re ≈ 9966: τ_w ≈ 3.65 Pa (computed from the formula)
     expect(body.result.wallShearStress).toBeCloseTo(3.65, 1);
-    expect(body.result.wallUnits.grooveWidth).toBeCloseTo(50e-6 / body.result.viscousLength, 8);
+    expect(body.result.wallUnits.grooveWidthPlus).toBeCloseTo(50e-6 / body.result.viscousLength, 8);
     expect(body.inputs.texture.grooveWidth).toBeCloseTo(50e-6, 15);
     expect(body.inputs.workingFluid.temperature).toBeCloseTo(293.15, 10);
     expect(body.provenance.inputsHash).toMatch(/^[0-9a-f]{64}$/);

@@ -74,7 +74,7 @@ export const retentionCalculation = defineCalculation({
     const slipMethod: SlipMethod = input.slipMethod ?? 'closed-form';
     const slip = evaluateSlip({ scenario, method: slipMethod });
     notes.cite(...slip.references);
-    notes.assume(`Interfacial shear = wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} from the ${slip.result.methodUsed} slip solution.`);
+    notes.assume(`Interfacial shear = wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} from the ${slip.result.method} slip solution.`);
     let wettingState;
     if (input.contactAngles.underWorkingFluid || input.contactAngles.inAir) {
       const wetting = evaluateWetting({ texture: scenario.texture, lubricant: scenario.lubricant, workingFluid: scenario.workingFluid, contactAngles: input.contactAngles, interfacialTension: scenario.interfacialTension });

@@ -89,7 +89,7 @@ export const surfactantCalculation = defineCalculation({
     const slipMethod: SlipMethod = input.slipMethod ?? 'auto';
     const slip = evaluateSlip({ scenario, method: slipMethod });
     notes.cite(...slip.references);
-    notes.assume(`Clean slip from the ${slip.result.methodUsed} slip solution (as /v1/slip).`);
+    notes.assume(`Clean slip from the ${slip.result.method} slip solution (as /v1/slip).`);
     const gasFilled = input.underlying === 'gas' || (input.underlying === undefined && scenario.lubricant.viscosity < 0.05 * scenario.workingFluid.viscosity);
     let interfaceType: InterfaceType = gasFilled ? 'air-water' : 'oil-water';
     const entry = input.surfactant.id === undefined ? undefined : getSurfactant(input.surfactant.id);

@@ -95,8 +95,8 @@ export interface FlowFluid {
 }
 
 export interface FlowResult extends FlowState {
-  /** Texture dimensions in viscous lengths, when a texture was given. */
-  wallUnits?: { grooveWidth: number; pitch: number; grooveDepth: number };
+  /** Texture dimensions in viscous lengths ℓ_ν, when a texture was given. */
+  wallUnits?: { grooveWidthPlus: number; pitchPlus: number; grooveDepthPlus: number };
 }
 
 /**
@@ -254,9 +254,9 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
   const result: FlowResult = { ...state };
   if (texture) {
     result.wallUnits = {
-      grooveWidth: texture.grooveWidth / state.viscousLength,
-      pitch: texture.pitch / state.viscousLength,
-      grooveDepth: texture.grooveDepth / state.viscousLength,
+      grooveWidthPlus: texture.grooveWidth / state.viscousLength,
+      pitchPlus: texture.pitch / state.viscousLength,
+      grooveDepthPlus: texture.grooveDepth / state.viscousLength,
     };
   }
   return outcome(result, notes);

@@ -7,6 +7,7 @@
  */
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { SourcedNumber } from '../../core/values.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import {
@@ -36,6 +37,8 @@ export interface SlipInput {
   /** Field-solver resolution (passed to src/physics/groove/groove-cell.ts). */
   grid?: { cellsPerPitch?: number; maxCells?: number; domainHeight?: number };
 }
+
+export type ClosedFormErrorSource = 'measured' | 'error-map';
 
 export interface FieldSolverRunStats {
   unknowns: number;
@@ -72,17 +75,20 @@ export interface SlipResult {
   interfacialShearRatio: number;
   /** The same ratio for flow exactly along the grooves (θ = 0). */
   interfacialShearRatioLongitudinal: number;
-  wallUnits: { slipLengthLongitudinal: number; slipLengthTransverse: number; pitch: number; grooveWidth: number };
+  /** Slip lengths and texture sizes in viscous lengths ℓ_ν of the smooth wall. */
+  wallUnits: { slipLengthLongitudinalPlus: number; slipLengthTransversePlus: number; pitchPlus: number; grooveWidthPlus: number };
   /** Mean lubricant velocity at the interface for longitudinal shear times w over ν of the working liquid. */
   textureReynoldsNumber: number;
   drag: DragChange;
-  methodUsed: 'closed-form' | 'field';
-  /** Relative error of the closed form against the field solver (measured if both ran, else the error map). */
+  /** Method used: 'field' where the groove-cell solver ran for at least one direction. */
+  method: 'closed-form' | 'field';
+  /**
+   * Relative error |b_closed − b_exact|/b_exact of the closed form for each slip length:
+   * source 'measured' where the field solver ran for that direction, else 'error-map'.
+   */
   closedFormError: {
-    longitudinal: number;
-    transverse: number;
-    /** 'measured' where the field solver ran for that direction, else 'error-map'. */
-    source: { longitudinal: 'measured' | 'error-map'; transverse: 'measured' | 'error-map' };
+    slipLengthLongitudinal: SourcedNumber<ClosedFormErrorSource>;
+    slipLengthTransverse: SourcedNumber<ClosedFormErrorSource>;
   };
   fieldSolverStats?: FieldSolverStats;
 }
@@ -245,14 +251,14 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
     ? fieldLongitudinal.interfacialShearRatio
     : interfacialShearRatioFromSlip(closedLongitudinal, local.longitudinalMean, phi);
   const closedFormError: SlipResult['closedFormError'] = {
-    longitudinal: fieldLongitudinal ? relative(closedLongitudinal, fieldLongitudinal.slipLength) : estimate.longitudinal,
-    transverse: fieldTransverse ? relative(closedTransverse, fieldTransverse.slipLength) : estimate.transverse,
-    source: {
-      longitudinal: fieldLongitudinal ? 'measured' : 'error-map',
-      transverse: fieldTransverse ? 'measured' : 'error-map',
-    },
+    slipLengthLongitudinal: fieldLongitudinal
+      ? { value: relative(closedLongitudinal, fieldLongitudinal.slipLength), source: 'measured' }
+      : { value: estimate.longitudinal, source: 'error-map' },
+    slipLengthTransverse: fieldTransverse
+      ? { value: relative(closedTransverse, fieldTransverse.slipLength), source: 'measured' }
+      : { value: estimate.transverse, source: 'error-map' },
   };
-  const methodUsed: SlipResult['methodUsed'] = fieldLongitudinal || fieldTransverse ? 'field' : 'closed-form';
+  const methodUsed: SlipResult['method'] = fieldLongitudinal || fieldTransverse ? 'field' : 'closed-form';
   let fieldSolverStats: FieldSolverStats | undefined;
   if (field && (fieldLongitudinal || fieldTransverse)) {
     notes.model('slip.groove-cell-field');
@@ -268,8 +274,8 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
     );
   }
   const reportedError = Math.max(
-    fieldLongitudinal ? 0 : closedFormError.longitudinal,
-    fieldTransverse ? 0 : closedFormError.transverse,
+    fieldLongitudinal ? 0 : closedFormError.slipLengthLongitudinal.value,
+    fieldTransverse ? 0 : closedFormError.slipLengthTransverse.value,
   );
   if (reportedError >= AUTO_ERROR_LIMIT) {
     notes.warn(
@@ -284,10 +290,10 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const cosine = Math.abs(Math.cos((texture.flowAngle * Math.PI) / 180));
   const viscousLength = flow.viscousLength;
   const wallUnits = {
-    slipLengthLongitudinal: slipLengthLongitudinal / viscousLength,
-    slipLengthTransverse: slipLengthTransverse / viscousLength,
-    pitch: P / viscousLength,
-    grooveWidth: w / viscousLength,
+    slipLengthLongitudinalPlus: slipLengthLongitudinal / viscousLength,
+    slipLengthTransversePlus: slipLengthTransverse / viscousLength,
+    pitchPlus: P / viscousLength,
+    grooveWidthPlus: w / viscousLength,
   };
   // Mean stripe velocity τ b_∥/(μ φ) (plane-mean argument in stripe-slip.ts).
   const interfaceVelocity = (flow.wallShearStress * slipLengthLongitudinal) / (workingFluid.viscosity * phi);
@@ -297,16 +303,16 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
 
   // Validity warnings.
   if (flow.regime !== 'laminar') {
-    if (Math.max(wallUnits.slipLengthLongitudinal, wallUnits.slipLengthTransverse) > SLIP_PLUS_LIMIT) {
+    if (Math.max(wallUnits.slipLengthLongitudinalPlus, wallUnits.slipLengthTransversePlus) > SLIP_PLUS_LIMIT) {
       notes.warn(
         'slip-beyond-smooth-wall-regime',
-        `Slip length of ${Math.max(wallUnits.slipLengthLongitudinal, wallUnits.slipLengthTransverse).toFixed(2)} viscous lengths exceeds ~${SLIP_PLUS_LIMIT}: the virtual-origin model is outside its calibrated range.`,
+        `Slip length of ${Math.max(wallUnits.slipLengthLongitudinalPlus, wallUnits.slipLengthTransversePlus).toFixed(2)} viscous lengths exceeds ~${SLIP_PLUS_LIMIT}: the virtual-origin model is outside its calibrated range.`,
       );
     }
-    if (wallUnits.pitch > PITCH_PLUS_LIMIT) {
+    if (wallUnits.pitchPlus > PITCH_PLUS_LIMIT) {
       notes.warn(
         'pitch-too-large-in-wall-units',
-        `Texture pitch of ${wallUnits.pitch.toFixed(1)} viscous lengths exceeds ~${PITCH_PLUS_LIMIT}: turbulence penetrates the texture and the slip-length model no longer holds.`,
+        `Texture pitch of ${wallUnits.pitchPlus.toFixed(1)} viscous lengths exceeds ~${PITCH_PLUS_LIMIT}: turbulence penetrates the texture and the slip-length model no longer holds.`,
       );
     }
   }
@@ -337,7 +343,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
       wallUnits,
       textureReynoldsNumber,
       drag,
-      methodUsed,
+      method: methodUsed,
       closedFormError,
       ...(fieldSolverStats ? { fieldSolverStats } : {}),
     },

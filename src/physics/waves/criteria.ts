@@ -5,15 +5,22 @@
  * Regime. Each check is expressed as a load ratio Π (a pressure ratio, so
  * the four are comparable): Π_Λ = Λ³ (dynamic pressure ρ(u_τ w⁺)² over the
  * capillary pressure γ/w), Π_KH = (ΔU/ΔU_c)², Π_dep = p′_rms/(2γ/w),
- * Π_RT = Δρ g_⊥ w²/(π²γ). Calm when every Π < ½. Wavy when Π_Λ > 2 (Λ more
- * than 2^(1/3) above the trade boundary Λ = 1) or when any physical threshold
- * is crossed (Π_KH, Π_dep or Π_RT ≥ 1). Marginal in between: for the scaling
- * criterion the band 2^(−1/3) ≤ Λ ≤ 2^(1/3) is a factor of two either side
- * of the boundary in the pressure ratio; for the physical criteria it is the
- * last factor of two before the threshold. The band is our own choice,
- * documented here. The margin is 1 − 2·max Π: 1 for an unloaded
- * interface, 0 at the calm edge, negative beyond it.
+ * Π_RT = Δρ g_⊥ w²/(π²γ). The published (trade) boundary between calm and
+ * wavy interfaces is Λ = 1, i.e. Π_Λ = 1 (common practice, no source); the
+ * physical criteria have their thresholds at Π = 1.
  *
+ * Bands (our own choice, a factor of two in the pressure ratio either side of
+ * the boundary, so that a verdict of "calm" keeps a reserve):
+ *   calm      every Π < ½             (Λ < 2^(−1/3) ≈ 0.794)
+ *   marginal  otherwise, unless wavy   (0.794 ≤ Λ ≤ 2^(1/3) ≈ 1.26)
+ *   wavy      Π_Λ > 2 (Λ > 1.26), or Π_KH, Π_dep or Π_RT ≥ 1
+ * So a design at Λ = 0.997 is marginal, not calm: it sits on the trade
+ * boundary without the reserve a calm verdict promises.
+ *
+ * Verdict: passes when the regime is calm. Margin = 1 − Π_max/½ (the fraction
+ * of the calm band's load still unused): 1 for an unloaded interface, 0 at the
+ * calm edge, −1 on the trade boundary Λ = 1 (Π = 1), −3 at the wavy edge of
+ * the scaling criterion (Π = 2). The design limits are where the margin is 0.
  */
 import { brent } from '../../numerics/roots.js';
 import { criticalVelocityDifference, type TwoLayerInterface, type WavenumberExtremum } from './dispersion.js';
@@ -146,6 +153,7 @@ export function regimeOf(ratios: Record<WaveCriterion, number>): WaveRegime {
   return Math.max(...Object.values(ratios)) >= CALM_LIMIT ? 'marginal' : 'calm';
 }
 
+/** Verdict margin: 1 − Π_max/½ (module comment). */
 export function marginOf(ratios: Record<WaveCriterion, number>): number {
   return 1 - Math.max(...Object.values(ratios)) / CALM_LIMIT;
 }
@@ -163,4 +171,20 @@ export function solveOnLogScale(g: (x: number) => number, x0: number): number | 
   if (!(flo * fhi < 0)) return null;
   const root = brent(f, lo, hi, { xTolerance: 1e-12 });
   return root.converged && Number.isFinite(root.root) ? Math.exp(root.root) : null;
+}
+
+const CRITERION_WORDS: Record<WaveCriterion, string> = {
+  'inertial-capillary': 'inertial–capillary load Λ³',
+  'kelvin-helmholtz': 'Kelvin–Helmholtz load (ΔU/ΔU_c)²',
+  depinning: 'depinning load p′_rms/(2γ/w)',
+  'rayleigh-taylor': 'Rayleigh–Taylor load Δρg_⊥w²/(π²γ)',
+};
+
+/** The criterion of the waves verdict in words, with the governing load. */
+export function wavesCriterion(ratios: Record<WaveCriterion, number>): string {
+  const key = governing(ratios);
+  return (
+    `calm: every load ratio Π below ½ (Λ = w⁺We_τ^(1/3) below 2^(−1/3) ≈ 0.794, a factor two in pressure under the trade boundary Λ = 1); ` +
+    `governing: ${CRITERION_WORDS[key]} = ${ratios[key].toPrecision(3)}; margin = 1 − Π_max/½`
+  );
 }

@@ -44,7 +44,9 @@ import {
   type FixedConditions,
   type WaveCriterion,
   type WaveRegime,
+  wavesCriterion,
 } from './criteria.js';
+import type { Verdict } from '../../core/values.js';
 import {
   confinedCriticalVelocityDifference,
   fastestGrowingMode,
@@ -84,7 +86,8 @@ export interface GrowthRatePoint {
 }
 
 export interface WavesResult {
-  wallUnits: {
+  /** The wall-unit scaling of the design: sizes in viscous lengths and the dimensionless groups. */
+  scaling: {
     /** ℓ_ν = ν/u_τ, m. */
     viscousLength: number;
     /** w⁺ = w/ℓ_ν. */
@@ -172,7 +175,8 @@ export interface WavesResult {
   loadRatios: Record<WaveCriterion, number>;
   governingCriterion: WaveCriterion;
   regime: WaveRegime;
-  verdict: { calm: boolean; margin: number };
+  /** Passes when calm (./criteria.ts); lifted out of the result by the composition. */
+  verdict: Verdict;
   designLimits: {
     /** Widest groove keeping the regime calm at this flow and tension, m; null if none found. */
     maxGrooveWidth: number | null;
@@ -507,7 +511,7 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
 
   const bulk = flow.bulkVelocity;
   const result: WavesResult = {
-    wallUnits: {
+    scaling: {
       viscousLength,
       grooveWidthPlus: at.grooveWidthPlus,
       grooveDepthPlus: d / viscousLength,
@@ -559,7 +563,7 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     loadRatios: at.ratios,
     governingCriterion: governing(at.ratios),
     regime,
-    verdict: { calm: regime === 'calm', margin },
+    verdict: { passes: regime === 'calm', margin, criterion: wavesCriterion(at.ratios) },
     designLimits: {
       maxGrooveWidth,
       maxGrooveWidthPlus: maxGrooveWidth === null ? null : maxGrooveWidth / viscousLength,

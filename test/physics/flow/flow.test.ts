@@ -100,6 +100,6 @@ describe('wall units', () => {
     const out = evaluateFlow(water20, { kind: 'wall-shear', wallShearStress: 1 }, { grooveWidth: 50e-6, pitch: 100e-6, grooveDepth: 20e-6, flowAngle: 0 });
     const ut = Math.sqrt(1 / water20.density);
     const lv = water20.viscosity / water20.density / ut;
-    expect(out.result.wallUnits!.grooveWidth).toBeCloseTo(50e-6 / lv, 10);
+    expect(out.result.wallUnits!.grooveWidthPlus).toBeCloseTo(50e-6 / lv, 10);
   });
 });

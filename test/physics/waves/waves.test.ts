@@ -105,11 +105,11 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     const tensions = [0.06, 0.03, 0.01, 0.004];
     const limits = tensions.map((gamma) => evaluateWaves({ scenario: design({ interfacialTension: gamma }), mapResolution: 2 }).result);
     for (const r of limits) {
-      expect(r.designLimits.maxGrooveWidthPlus! / (2 ** (-1 / 3) * r.wallUnits.frictionCapillaryNumber ** (-1 / 3)) - 1).toBeCloseTo(0, 8);
+      expect(r.designLimits.maxGrooveWidthPlus! / (2 ** (-1 / 3) * r.scaling.frictionCapillaryNumber ** (-1 / 3)) - 1).toBeCloseTo(0, 8);
     }
     const slope =
       Math.log(limits[3].designLimits.maxGrooveWidthPlus! / limits[0].designLimits.maxGrooveWidthPlus!) /
-      Math.log(limits[3].wallUnits.frictionCapillaryNumber / limits[0].wallUnits.frictionCapillaryNumber);
+      Math.log(limits[3].scaling.frictionCapillaryNumber / limits[0].scaling.frictionCapillaryNumber);
     expect(slope).toBeCloseTo(-1 / 3, 8);
   });
 
@@ -117,7 +117,7 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     const widths = [5e-6, 20e-6, 60e-6, 120e-6, 200e-6, 400e-6, 1e-3];
     const results = widths.map((w) => evaluateWaves({ scenario: design({ grooveWidth: w }), mapResolution: 2 }).result);
     for (let i = 1; i < results.length; i++) {
-      expect(results[i].wallUnits.inertialCapillaryNumber).toBeGreaterThan(results[i - 1].wallUnits.inertialCapillaryNumber);
+      expect(results[i].scaling.inertialCapillaryNumber).toBeGreaterThan(results[i - 1].scaling.inertialCapillaryNumber);
       expect(REGIME_RANK[results[i].regime]).toBeGreaterThanOrEqual(REGIME_RANK[results[i - 1].regime]);
       expect(results[i].verdict.margin).toBeLessThan(results[i - 1].verdict.margin);
     }
@@ -130,7 +130,7 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     const tensions = [0.07, 0.03, 0.01, 3e-3, 1e-3, 3e-4, 1e-4];
     const results = tensions.map((gamma) => evaluateWaves({ scenario: design({ grooveWidth: 60e-6, interfacialTension: gamma }), mapResolution: 2 }).result);
     for (let i = 1; i < results.length; i++) {
-      expect(results[i].wallUnits.inertialCapillaryNumber).toBeGreaterThan(results[i - 1].wallUnits.inertialCapillaryNumber);
+      expect(results[i].scaling.inertialCapillaryNumber).toBeGreaterThan(results[i - 1].scaling.inertialCapillaryNumber);
       expect(REGIME_RANK[results[i].regime]).toBeGreaterThanOrEqual(REGIME_RANK[results[i - 1].regime]);
     }
     expect(results[0].regime).toBe('calm');
@@ -138,7 +138,7 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     // the lowest calm tension reported at the first design lies where Λ = 2^(−1/3)
     const minimum = results[0].designLimits.minInterfacialTension!;
     const atMinimum = evaluateWaves({ scenario: design({ grooveWidth: 60e-6, interfacialTension: minimum }), mapResolution: 2 }).result;
-    expect(atMinimum.wallUnits.inertialCapillaryNumber).toBeCloseTo(2 ** (-1 / 3), 8);
+    expect(atMinimum.scaling.inertialCapillaryNumber).toBeCloseTo(2 ** (-1 / 3), 8);
   });
 
   it('channel at bulk Re ≈ 3000: doubling the bulk Weber number (halving γ at fixed flow) raises Λ by 2^(1/3) (common practice, no source)', () => {
@@ -147,17 +147,40 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     expect(Math.abs(flow.reynoldsNumber! - 3000)).toBeLessThan(10);
     const base = evaluateWaves({ scenario: design({ flow, interfacialTension: 0.04 }), mapResolution: 2 }).result;
     const doubled = evaluateWaves({ scenario: design({ flow, interfacialTension: 0.02 }), mapResolution: 2 }).result;
-    expect(doubled.wallUnits.bulkWeberNumber! / base.wallUnits.bulkWeberNumber!).toBeCloseTo(2, 12);
-    expect(doubled.wallUnits.inertialCapillaryNumber / base.wallUnits.inertialCapillaryNumber).toBeCloseTo(2 ** (1 / 3), 12);
+    expect(doubled.scaling.bulkWeberNumber! / base.scaling.bulkWeberNumber!).toBeCloseTo(2, 12);
+    expect(doubled.scaling.inertialCapillaryNumber / base.scaling.inertialCapillaryNumber).toBeCloseTo(2 ** (1 / 3), 12);
   });
 
   it('wall-unit numbers follow their definitions: We_τ = μu_τ/γ = ρu_τ²ℓ_ν/γ, We_f = w⁺ We_τ, Λ³ = w⁺³ We_τ (algebraic identities)', () => {
-    const r = evaluateWaves({ scenario: design(), mapResolution: 2 }).result.wallUnits;
+    const r = evaluateWaves({ scenario: design(), mapResolution: 2 }).result.scaling;
     const uTau = Math.sqrt(3.65 / water.density);
     expect(r.frictionCapillaryNumber).toBeCloseTo((water.viscosity * uTau) / 0.053, 15);
     expect(r.frictionCapillaryNumber / ((water.density * uTau ** 2 * r.viscousLength) / 0.053)).toBeCloseTo(1, 12);
     expect(r.frictionWeberNumber / (r.grooveWidthPlus * r.frictionCapillaryNumber)).toBeCloseTo(1, 12);
     expect(r.inertialCapillaryNumber ** 3 / (r.grooveWidthPlus ** 3 * r.frictionCapillaryNumber)).toBeCloseTo(1, 12);
+  });
+});
+
+describe('evaluateWaves: bands, verdict and margin agree with their documentation (src/physics/waves/criteria.ts)', () => {
+  const lambdaAt = (grooveWidth: number) => evaluateWaves({ scenario: design({ grooveWidth }), mapResolution: 2 }).result;
+  const base = lambdaAt(30e-6);
+  // Λ = w⁺ We_τ^(1/3) is linear in w at fixed flow and tension (definition), so this width puts Λ at 0.997.
+  const width = (30e-6 * 0.997) / base.scaling.inertialCapillaryNumber;
+  it('Λ = 0.997, just under the trade boundary Λ = 1, is marginal, not calm; margin = 1 − 2Λ³ ≈ −0.98 (band edge 2^(−1/3) ≈ 0.794)', () => {
+    const r = lambdaAt(width);
+    expect(r.scaling.inertialCapillaryNumber).toBeCloseTo(0.997, 10);
+    expect(r.governingCriterion).toBe('inertial-capillary');
+    expect(r.regime).toBe('marginal');
+    expect(r.verdict.passes).toBe(false);
+    expect(r.verdict.margin).toBeCloseTo(1 - 2 * 0.997 ** 3, 10);
+    expect(r.verdict.criterion).toContain('0.794');
+  });
+  it('the margin is 1 − Π_max/½ over the reported load ratios, and passes exactly when it is positive', () => {
+    for (const w of [10e-6, 30e-6, 100e-6, width, 300e-6]) {
+      const r = lambdaAt(w);
+      expect(r.verdict.margin).toBeCloseTo(1 - Math.max(...Object.values(r.loadRatios)) / 0.5, 12);
+      expect(r.verdict.passes).toBe(r.verdict.margin > 0);
+    }
   });
 });
 
