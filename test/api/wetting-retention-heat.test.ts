@@ -30,7 +30,7 @@ describe('POST /v1/wetting', () => {
       payload: { texture: groove, lubricant: { fluid: 'n-decane' }, workingFluid: { fluid: 'water' }, contactAngles: { underWorkingFluid: { advancing: 130, receding: 110, equilibrium: 120 } } },
     });
     expect(res.json().result.state).toBe('not-wetting');
-    expect(res.json().verdict.stable).toBe(false);
+    expect(res.json().verdict.passes).toBe(false);
   });
   it('receding above advancing → 422 naming the receding angle', async () => {
     const res = await app.inject({

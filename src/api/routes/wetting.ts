@@ -68,7 +68,7 @@ export const wettingCalculation = defineCalculation({
     return {
       inputs: { texture, lubricant: fluidEcho(lubricant), workingFluid: fluidEcho(workingFluid), contactAngles: input.contactAngles, interfacialTension: r.interfacialTension.value },
       result: r,
-      verdict: { stable: r.state !== 'not-wetting', margin: r.state === 'not-wetting' ? -Math.abs(r.energyMargin.value) : Math.abs(r.energyMargin.value) },
+      verdict: r.verdict,
       ...notes,
     };
   },

@@ -62,6 +62,7 @@ import { STANDARD_GRAVITY } from '../../core/constants.js';
 import { REFERENCES } from '../../core/references.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
+import type { Verdict } from '../../core/values.js';
 import type { ContactAngles, WettingState } from '../wetting/wetting.js';
 import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
 import { holdLengths, type CurvatureLimit } from './holding.js';
@@ -145,7 +146,8 @@ export interface RetentionResult {
    * capillary back-pressure binds (what the timeline tends to), else binding length/segment.
    */
   retainedFraction: number;
-  verdict: { retained: boolean; margin: number };
+  /** Passes when the steady retained share reaches the target fill; margin = share/target − 1. */
+  verdict: Verdict;
   segmentLength: number;
   segments: number;
   timeline: TimelinePoint[];
@@ -374,6 +376,8 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
     lumpedTimeline();
   }
 
+  explainTimelineEnd(notes, { retainedFraction, finalRetainedFraction, timeline, timelineModel, binding, duration: input.duration });
+
   // Recommendations: barrier spacing and geometry direction.
   let maxSegmentLength = retainedLength / targetFill;
   if (capillaryBinds && column) {
@@ -448,7 +452,11 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       retainedLength,
       criticalPlugLength: shearOnly.pinning,
       retainedFraction,
-      verdict: { retained: retainedFraction >= targetFill, margin: retainedFraction / targetFill - 1 },
+      verdict: {
+        passes: retainedFraction >= targetFill,
+        margin: retainedFraction / targetFill - 1,
+        criterion: `retained: the steady retained share of the groove volume (${retainedFraction.toPrecision(3)}) reaches the target fill ${targetFill}; margin = share/target − 1`,
+      },
       segmentLength,
       segments,
       timeline,
@@ -467,5 +475,52 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       },
     },
     notes,
+  );
+}
+
+/** Share of the groove volume within which the timeline's end and the steady share count as the same (our choice). */
+const TIMELINE_AGREEMENT = 0.02;
+
+/**
+ * The steady retained share (the verdict's basis) and the timeline's last point
+ * come from different pieces of the model: the steady column of the capillary
+ * model (meniscus sag, end meniscus) or the critical plug length, against the
+ * finite-volume or lumped drainage over the requested duration. Where they
+ * differ by more than {@link TIMELINE_AGREEMENT} of the groove volume, say
+ * which difference it is, so the two numbers never contradict each other
+ * silently.
+ */
+function explainTimelineEnd(
+  notes: Notes,
+  run: {
+    retainedFraction: number;
+    finalRetainedFraction: number;
+    timeline: TimelinePoint[];
+    timelineModel: 'finite-volume' | 'lumped-plug';
+    binding: RetentionMechanism;
+    duration: number;
+  },
+): void {
+  const { retainedFraction: steady, finalRetainedFraction: end, timeline } = run;
+  if (Math.abs(end - steady) <= TIMELINE_AGREEMENT) return;
+  const share = (x: number) => `${(100 * x).toFixed(1)} %`;
+  const last = timeline[timeline.length - 1];
+  const before = timeline[Math.max(0, timeline.length - 11)];
+  // Still moving towards the steady share over the last tenth of the samples: the duration was too short.
+  const settling = last !== undefined && before !== undefined && (last.retainedFraction - before.retainedFraction) * (steady - end) > 0;
+  let why: string;
+  if (settling) {
+    why = `the timeline is still changing at the end of the ${run.duration.toPrecision(3)} s duration (drainage near the retained length is slow); a longer duration approaches the steady state`;
+  } else if (run.timelineModel === 'lumped-plug' && run.binding === 'capillary-back-pressure') {
+    why = 'the timeline comes from the lumped plug model, which has neither the meniscus sag nor the end meniscus of the steady capillary column';
+  } else if (run.timelineModel === 'lumped-plug') {
+    why = 'the timeline follows one plug sliding out to the critical length; break-up into several pinned plugs, which the steady share counts, is not modelled in time';
+  } else {
+    why = 'the finite-volume timeline settles on its own discrete steady state, which differs from the steady column of the closed form';
+  }
+  notes.warn(
+    'timeline-differs-from-steady-state',
+    `the drainage timeline ends at ${share(end)} of the groove volume while the steady retained share is ${share(steady)}: ${why}. The verdict uses the steady share.`,
+    'caution',
   );
 }

@@ -46,6 +46,7 @@ import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Texture } from '../scenario.js';
+import type { SourcedNumber, Verdict } from '../../core/values.js';
 
 /** Dispersive part of water's surface tension, N/m (Fowkes 1964, 21.8 ± 0.7 mN/m at 20 °C; from memory). */
 export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
@@ -84,7 +85,7 @@ export interface WettingResult {
   /** θ_c, degrees: cos θ_c = (1 − φ_s)/(r − φ_s). */
   criticalAngle: number;
   /** θ_os(w), degrees, and where it came from. */
-  equilibriumAngleUnderWorkingFluid: { value: number; origin: AngleOrigin };
+  equilibriumAngleUnderWorkingFluid: SourcedNumber<AngleOrigin>;
   spreadingCoefficients: {
     /** S_os(w) = γ_sw − γ_os − γ_ow, N/m (≤ 0 when only the angle under the working fluid is known). */
     lubricantOnSolidUnderWorkingFluid: number;
@@ -95,14 +96,21 @@ export interface WettingResult {
   };
   state: WettingState;
   /** Energy per unit projected area, J/m², separating the state from the nearest other state. */
-  energyMargin: { value: number; towards: WettingState };
+  energyMargin: number;
+  /** The state {@link energyMargin} separates it from. */
+  nearestState: WettingState;
   /** E₁, E₂, E₃ relative to the film-covered state, J/m². */
   stateEnergies: Record<WettingState, number>;
   /** Hemiwicking: the lubricant's angle in the filling medium is below θ_c. */
   fillsSpontaneously: boolean;
   /** Medium the texture is filled from in that judgement (air when in-air angles are given). */
   fillingMedium: 'air' | 'working-fluid';
-  interfacialTension: { value: number; origin: InterfacialTensionOrigin };
+  interfacialTension: SourcedNumber<InterfacialTensionOrigin>;
+  /**
+   * Stable (passes) when the lubricant-filled texture, film-covered or infused, has the lower energy than the
+   * state displaced by the working fluid; margin = (E_displaced − E_wetting)/γ_ow.
+   */
+  verdict: Verdict;
 }
 
 const DEG = Math.PI / 180;
@@ -198,16 +206,16 @@ export function resolveInterfacialTension(
   workingFluid: FluidState,
   given: number | undefined,
   notes: Notes,
-): { value: number; origin: InterfacialTensionOrigin } {
+): SourcedNumber<InterfacialTensionOrigin> {
   if (given !== undefined) {
     if (!(Number.isFinite(given) && given > 0)) throw new DomainError('interfacial tension must be positive', { field: 'interfacialTension' });
-    return { value: given, origin: 'input' };
+    return { value: given, source: 'input' };
   }
   if (isWater(workingFluid) && lubricant.interfacialTensionWater !== undefined && lubricant.interfacialTensionWater > 0) {
     if (/sea/i.test(workingFluid.id)) {
       notes.warn('interfacial-tension-fresh-water', 'catalogue interfacial tension is against fresh water; seawater salts shift it by a few per cent', 'info');
     }
-    return { value: lubricant.interfacialTensionWater, origin: 'catalogue' };
+    return { value: lubricant.interfacialTensionWater, source: 'catalogue' };
   }
   const gammaO = lubricant.surfaceTension;
   const gammaW = workingFluid.surfaceTension;
@@ -238,7 +246,7 @@ export function resolveInterfacialTension(
     'caution',
   );
   if (!(value > 0)) throw new DomainError('Fowkes estimate gives no interfacial tension: the liquids would mix', { field: 'interfacialTension' });
-  return { value, origin: 'fowkes-estimate' };
+  return { value, source: 'fowkes-estimate' };
 }
 
 /**
@@ -359,19 +367,37 @@ export function evaluateWetting(input: WettingInput): Outcome<WettingResult> {
       roughnessRatio,
       topSolidFraction,
       criticalAngle,
-      equilibriumAngleUnderWorkingFluid: { value: theta, origin },
+      equilibriumAngleUnderWorkingFluid: { value: theta, source: origin },
       spreadingCoefficients: {
         lubricantOnSolidUnderWorkingFluid: spreadingUnder,
         lubricantOnWorkingFluidInAir: spreadingInAir,
         cloaking: spreadingInAir === null ? null : spreadingInAir > 0,
       },
       state,
-      energyMargin: { value: Math.max(0, margin), towards },
+      energyMargin: Math.max(0, margin),
+      nearestState: towards,
       stateEnergies,
       fillsSpontaneously,
       fillingMedium,
       interfacialTension: tension,
+      verdict: wettingVerdict(stateEnergies, gamma, criticalAngle),
     },
     notes,
   );
+}
+
+/**
+ * Verdict of the wetting question: passes when the better of the two wetting
+ * states (film-covered, infused) lies below the displaced state; the margin is
+ * their energy gap per unit projected area in units of γ_ow (dimensionless,
+ * zero at θ_os(w) = θ_c).
+ */
+function wettingVerdict(energies: Record<WettingState, number>, interfacialTension: number, criticalAngle: number): Verdict {
+  const wetting = Math.min(energies['film-covered'], energies['infused-exposed-tops']);
+  const margin = (energies['not-wetting'] - wetting) / interfacialTension;
+  return {
+    passes: margin > 0,
+    margin,
+    criterion: `stable: the lubricant-filled texture has a lower energy than the texture displaced by the working fluid, i.e. the lubricant's angle under the working fluid below θ_c = ${criticalAngle.toFixed(1)}°; margin = (E_displaced − E_wetting)/γ_ow per unit projected area`,
+  };
 }

@@ -30,7 +30,7 @@ describe('interfacial tension (Fowkes 1964)', () => {
 
   it('evaluateWetting uses Fowkes when neither input nor catalogue gives it, with a warning', () => {
     const r = evaluateWetting({ texture, lubricant: hexadecane, workingFluid: water, contactAngles: { underWorkingFluid: { advancing: 10, receding: 0, equilibrium: 5 } } });
-    expect(r.result.interfacialTension.origin).toBe('fowkes-estimate');
+    expect(r.result.interfacialTension.source).toBe('fowkes-estimate');
     expect(r.result.interfacialTension.value).toBeCloseTo(0.05133, 5);
     expect(r.warnings.some((w) => w.code === 'interfacial-tension-estimated')).toBe(true);
   });
@@ -38,9 +38,9 @@ describe('interfacial tension (Fowkes 1964)', () => {
   it('prefers input, then the catalogue value against water', () => {
     const lub = { ...hexadecane, interfacialTensionWater: 0.053 };
     const cat = evaluateWetting({ texture, lubricant: lub, workingFluid: water, contactAngles: { underWorkingFluid: { advancing: 10, receding: 0, equilibrium: 5 } } });
-    expect(cat.result.interfacialTension).toEqual({ value: 0.053, origin: 'catalogue' });
+    expect(cat.result.interfacialTension).toEqual({ value: 0.053, source: 'catalogue' });
     const given = evaluateWetting({ texture, lubricant: lub, workingFluid: water, interfacialTension: 0.04, contactAngles: { underWorkingFluid: { advancing: 10, receding: 0, equilibrium: 5 } } });
-    expect(given.result.interfacialTension).toEqual({ value: 0.04, origin: 'input' });
+    expect(given.result.interfacialTension).toEqual({ value: 0.04, source: 'input' });
   });
 });
 
@@ -81,18 +81,24 @@ describe('state boundaries (Smith et al. 2013, Soft Matter 9, 1772: θ_os(w) = 0
   });
 
   it('energy margin vanishes continuously at θ_c and equals γ[(r − φ)cos θ − (1 − φ)] just inside (derived from the state energies)', () => {
-    const inside = run(thetaC - 1e-6).result.energyMargin;
-    const outside = run(thetaC + 1e-6).result.energyMargin;
-    expect(inside.towards).toBe('not-wetting');
-    expect(outside.towards).toBe('infused-exposed-tops');
-    expect(inside.value).toBeLessThan(1e-8);
-    expect(outside.value).toBeLessThan(1e-8);
+    const inside = run(thetaC - 1e-6).result;
+    const outside = run(thetaC + 1e-6).result;
+    expect(inside.nearestState).toBe('not-wetting');
+    expect(outside.nearestState).toBe('infused-exposed-tops');
+    expect(inside.energyMargin).toBeLessThan(1e-8);
+    expect(outside.energyMargin).toBeLessThan(1e-8);
     // θ = 40°: E₃ − E₂ = 0.05·(0.9 cos 40° − 0.5) = 0.009472 J/m²; E₁ − E₂ = 0.5·0.05·(1 − cos 40°) = 0.005849 J/m².
     const at40 = run(40).result;
     const c = Math.cos((40 * Math.PI) / 180);
     expect(at40.stateEnergies['not-wetting'] - at40.stateEnergies['infused-exposed-tops']).toBeCloseTo(0.05 * (0.9 * c - 0.5), 14);
-    expect(at40.energyMargin.towards).toBe('film-covered');
-    expect(at40.energyMargin.value).toBeCloseTo(0.5 * 0.05 * (1 - c), 14);
+    expect(at40.nearestState).toBe('film-covered');
+    expect(at40.energyMargin).toBeCloseTo(0.5 * 0.05 * (1 - c), 14);
+    // Verdict margin: (E₃ − min(E₁, E₂))/γ = 0.9 cos 40° − 0.5 (the same energies in units of γ = 0.05 N/m).
+    expect(at40.verdict.passes).toBe(true);
+    expect(at40.verdict.margin).toBeCloseTo(0.9 * c - 0.5, 12);
+    expect(inside.verdict.passes).toBe(true);
+    expect(outside.verdict.passes).toBe(false);
+    expect(Math.abs(inside.verdict.margin)).toBeLessThan(1e-6);
   });
 
   it('not-wetting warns that only pinning can hold the lubricant', () => {
@@ -105,7 +111,7 @@ describe("Young's law from in-air angles and spreading coefficients", () => {
     const r = evaluateWetting({ texture, lubricant: hexadecane, workingFluid: water, interfacialTension: 0.0513, contactAngles: { inAir: { lubricant: 40, workingFluid: 110 } } });
     const expected = (0.0275 * Math.cos((40 * Math.PI) / 180) - 0.0728 * Math.cos((110 * Math.PI) / 180)) / 0.0513;
     expect(Math.cos((r.result.equilibriumAngleUnderWorkingFluid.value * Math.PI) / 180)).toBeCloseTo(expected, 13);
-    expect(r.result.equilibriumAngleUnderWorkingFluid.origin).toBe('young-from-air');
+    expect(r.result.equilibriumAngleUnderWorkingFluid.source).toBe('young-from-air');
     // Spreading of hexadecane on water in air: 72.8 − 51.3 − 27.5 = −6.0 mN/m, no cloaking (definition of S_ow(a)).
     expect(r.result.spreadingCoefficients.lubricantOnWorkingFluidInAir).toBeCloseTo(0.0728 - 0.0513 - 0.0275, 14);
     expect(r.result.spreadingCoefficients.cloaking).toBe(false);
@@ -119,7 +125,7 @@ describe("Young's law from in-air angles and spreading coefficients", () => {
     // S_os(w) = 27.5 − 72.8 cos 150° − 51.3 = +39.2 mN/m (arithmetic of the definition).
     expect(r.result.spreadingCoefficients.lubricantOnSolidUnderWorkingFluid).toBeCloseTo(0.0275 - 0.0728 * Math.cos((150 * Math.PI) / 180) - 0.0513, 13);
     expect(r.result.state).toBe('film-covered');
-    expect(r.result.energyMargin.value).toBeCloseTo(0.5 * r.result.spreadingCoefficients.lubricantOnSolidUnderWorkingFluid, 13);
+    expect(r.result.energyMargin).toBeCloseTo(0.5 * r.result.spreadingCoefficients.lubricantOnSolidUnderWorkingFluid, 13);
   });
 });
 
