@@ -74,17 +74,17 @@ for (const [name, r, ms] of [['field (auto)', field, fieldMs], ['closed-form', c
   const x = r.result;
   console.log(
     `${name}: b_t = ${(x.thermalSlipLength * 1e6).toFixed(3)} um, b = ${(x.slipLength * 1e6).toFixed(4)} um, Nu = ${x.nusselt?.toFixed(4)}, ` +
-      `Nu0 = ${x.nusseltSmooth.toFixed(4)}, ratio = ${x.heatTransferRatio?.toFixed(4)}, overall = ${x.overallConductanceRatio.toFixed(4)}, ` +
-      `friction = ${x.frictionRatio.toFixed(5)}, closedFormError = ${x.closedFormError?.toExponential(3) ?? 'n/a'}, Pe_g = ${x.groovePecletNumber.toExponential(2)}, ${ms.toFixed(0)} ms`,
+      `Nu0 = ${x.nusseltSmooth.toFixed(4)}, ratio = ${x.nusseltRatio?.toFixed(4)}, overall = ${x.heatFluxRatio.toFixed(4)}, ` +
+      `friction = ${x.frictionRatio.toFixed(5)}, closedFormError = ${x.closedFormError?.nusselt.value.toExponential(3) ?? 'n/a'}, Pe_g = ${x.groovePecletNumber.toExponential(2)}, ${ms.toFixed(0)} ms`,
   );
   console.log(`   warnings: ${r.warnings.map((w) => w.code).join(', ') || 'none'}`);
 }
 const s = field.result.sensitivity!;
 console.log('   sensitivity (k_o W/(m K) : Nu/Nu0 : overall)');
 for (let i = 0; i < s.lubricantConductivity.length; i++) {
-  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.heatTransferRatio[i]?.toFixed(4)}\t${s.overallConductanceRatio[i]?.toFixed(4)}`);
+  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.nusseltRatio[i]?.toFixed(4)}\t${s.heatFluxRatio[i]?.toFixed(4)}`);
 }
-console.log(`   best k_o = ${s.bestLubricantConductivity.toPrecision(3)} (overall ${s.bestOverallConductanceRatio.toFixed(4)})`);
+console.log(`   best k_o = ${s.bestLubricantConductivity.toPrecision(3)} (overall ${s.bestHeatFluxRatio.toFixed(4)})`);
 
 console.log('\n2. Conduction cell b_t vs grid (adiabatic-groove extreme against Philip 1972; demo wall)');
 const extreme = { pitch: 20e-6, grooveWidth: 10e-6, grooveDepth: 5e-6, substrateThickness: 10e-6, workingConductivity: 0.6, lubricantConductivity: 1e-7, solidConductivity: 1e5 };

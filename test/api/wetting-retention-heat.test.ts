@@ -71,8 +71,8 @@ describe('POST /v1/heat', () => {
     const res = await app.inject({ method: 'POST', url: '/v1/heat', payload: { ...body, sensitivity: undefined } });
     expect(res.statusCode).toBe(200);
     const r = res.json().result;
-    expect(r.heatTransferRatio).toBeGreaterThan(1.1);
-    expect(r.heatTransferRatio).toBeLessThan(1.4);
+    expect(r.nusseltRatio).toBeGreaterThan(1.1);
+    expect(r.nusseltRatio).toBeLessThan(1.4);
     expect(r.thermalSlipLength).toBeLessThan(0);
   });
   it('smooth-wall reference of the example is Shah & London’s 140/17 = 8.235 for both walls under uniform flux', async () => {

@@ -23,6 +23,7 @@
  */
 import { DomainError, requirePositive } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
+import type { SourcedNumber } from '../../core/values.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import { solveHeatCrossSection, thermalSlipField, type LubricantMotion, type WallCell } from './conduction-field.js';
@@ -67,13 +68,13 @@ export interface HeatInput {
 export interface HeatSensitivity {
   /** Lubricant conductivities, W/(m·K), log-spaced. */
   lubricantConductivity: number[];
-  /** Nu/Nu_smooth at each (null where the apparent Nu is undefined). */
-  heatTransferRatio: (number | null)[];
-  /** Overall conductance ratio from the heated boundary at each (null where the estimate fails). */
-  overallConductanceRatio: (number | null)[];
-  /** Conductivity with the largest overall conductance ratio on the sweep, W/(m·K). */
+  /** Nu/Nu₀ at each (null where the apparent Nu is undefined). */
+  nusseltRatio: (number | null)[];
+  /** q/q₀, heat delivered at the same temperature difference, at each (null where the estimate fails). */
+  heatFluxRatio: (number | null)[];
+  /** Conductivity with the largest heat-flux ratio on the sweep, W/(m·K). */
   bestLubricantConductivity: number;
-  bestOverallConductanceRatio: number;
+  bestHeatFluxRatio: number;
   /** Which b_t model the sweep used. */
   thermalSlipMethod: 'closed-form' | 'field';
 }
@@ -89,12 +90,32 @@ export interface HeatResult {
   nusselt: number | null;
   /** Nu of the solid-filled, no-slip wall at the same flow rate and heating. */
   nusseltSmooth: number;
-  /** Nu / Nu_smooth; null if Nu is undefined (thermal slip so negative that the apparent resistance vanishes). */
-  heatTransferRatio: number | null;
-  /** Conductance from the heated substrate bottom to the bulk, over that of the solid-filled wall: includes the wall. */
-  overallConductanceRatio: number;
+  /**
+   * Nusselt-number ratio Nu/Nu₀ on the ridge-top plane: the fluid-side film alone, without the wall's own
+   * conduction; null if Nu is undefined (thermal slip so negative that the apparent resistance vanishes).
+   */
+  nusseltRatio: number | null;
+  /**
+   * The headline: q/q₀, the heat delivered per unit wall area at the same temperature difference between the
+   * heated substrate bottom and the bulk liquid, against the solid-filled wall (= U/U₀; wall conduction included).
+   */
+  heatFluxRatio: number;
+  /** Fluid-side heat-transfer coefficient h = Nu k_w/D_h, W/(m²·K); null where Nu is undefined. */
+  heatTransferCoefficient: number | null;
+  /** h₀ of the solid-filled, no-slip wall, W/(m²·K). */
+  heatTransferCoefficientSmooth: number;
+  /** Overall coefficient U from the substrate bottom to the bulk, W/(m²·K): q = U ΔT. */
+  overallHeatTransferCoefficient: number;
+  /** U₀ of the solid-filled wall, W/(m²·K). */
+  overallHeatTransferCoefficientSmooth: number;
+  /** Reynolds number on the hydraulic diameter (2H channel, D pipe). */
+  reynoldsNumber: number;
   /** Friction (pressure drop) ratio at the same flow rate. */
   frictionRatio: number;
+  /** Pressure drop per unit length at this flow rate, Pa/m (frictionRatio × the smooth value). */
+  pressureGradient: number;
+  /** Pressure drop per unit length of the smooth channel or pipe, Pa/m: 2τ_w/H (channel), 4τ_w/D (pipe). */
+  pressureGradientSmooth: number;
   /** Fanning f·Re on D_h (laminar), else null. */
   frictionFactorReynolds: number | null;
   /**
@@ -102,14 +123,26 @@ export interface HeatResult {
    * or eigenproblem Nu (pipe, uniform temperature, oblique grooves or turbulent flow); 'closed-form'.
    */
   method: 'closed-form' | 'field' | 'field-thermal-slip';
-  /** (Nu_closed − Nu_field)/Nu_field where both ran. */
-  closedFormError: number | null;
+  /** (Nu_closed − Nu_field)/Nu_field, measured where the cross-section field method ran; null otherwise. */
+  closedFormError: { nusselt: SourcedNumber<'measured'> } | null;
   regime: 'laminar' | 'turbulent';
   confidence: 'normal' | 'low';
   /** Groove Péclet number u_i w/α_o of the lubricant (u_i = slip velocity). */
   groovePecletNumber: number;
   sensitivity?: HeatSensitivity;
 }
+
+/** What each branch (turbulent, field cross-section, laminar closed forms) determines; the rest follows from it. */
+type HeatCore = Omit<
+  HeatResult,
+  | 'heatTransferCoefficient'
+  | 'heatTransferCoefficientSmooth'
+  | 'overallHeatTransferCoefficient'
+  | 'overallHeatTransferCoefficientSmooth'
+  | 'reynoldsNumber'
+  | 'pressureGradient'
+  | 'pressureGradientSmooth'
+>;
 
 function fluidProperty(value: number | undefined, field: string): number {
   if (value === undefined) throw new DomainError(`${field} is required for heat transfer`, { field, code: 'missing-property' });
@@ -257,7 +290,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     return own > 0 ? reference / own : Number.NaN;
   };
 
-  let result: HeatResult;
+  let result: HeatCore;
   // Filled in once the slip length in use is known (the field method computes its own).
   const groovePecletNumber = 0;
 
@@ -287,8 +320,8 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       slipLength: slip,
       nusselt: estimate.nusselt,
       nusseltSmooth: smooth,
-      heatTransferRatio: estimate.heatTransferRatio,
-      overallConductanceRatio: (wallResistance + Dh / (kW * smooth)) / ownResistance,
+      nusseltRatio: estimate.nusseltRatio,
+      heatFluxRatio: (wallResistance + Dh / (kW * smooth)) / ownResistance,
       frictionRatio: estimate.frictionRatio,
       frictionFactorReynolds: null,
       method: useFieldThermalSlip ? 'field-thermal-slip' : 'closed-form',
@@ -319,12 +352,15 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         slipLength: section.slipLength,
         nusselt: section.nusselt,
         nusseltSmooth: smooth,
-        heatTransferRatio: section.nusselt === null ? null : section.nusselt / smooth,
-        overallConductanceRatio: section.overallNusselt / smoothOverall,
+        nusseltRatio: section.nusselt === null ? null : section.nusselt / smooth,
+        heatFluxRatio: section.overallNusselt / smoothOverall,
         frictionRatio: 1 / section.flowRateRatio,
         frictionFactorReynolds: section.frictionFactorReynolds,
         method: 'field',
-        closedFormError: section.nusselt !== null && closedNusselt !== null ? (closedNusselt - section.nusselt) / section.nusselt : null,
+        closedFormError:
+          section.nusselt !== null && closedNusselt !== null
+            ? { nusselt: { value: (closedNusselt - section.nusselt) / section.nusselt, source: 'measured' } }
+            : null,
         regime: 'laminar',
         confidence: 'normal',
         groovePecletNumber,
@@ -340,8 +376,8 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         slipLength: slip,
         nusselt,
         nusseltSmooth: smooth,
-        heatTransferRatio: nusselt === null ? null : nusselt / smooth,
-        overallConductanceRatio: overallFrom(nusseltSlip, thermalSlip, smooth),
+        nusseltRatio: nusselt === null ? null : nusselt / smooth,
+        heatFluxRatio: overallFrom(nusseltSlip, thermalSlip, smooth),
         frictionRatio,
         frictionFactorReynolds: (config.pipe ? 16 : 24) * frictionRatio, // Fanning f·Re: 16 tube, 24 plates (Shah & London 1978)
         method: useFieldThermalSlip ? 'field-thermal-slip' : 'closed-form',
@@ -359,11 +395,11 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   if (result.nusselt === null) {
     notes.warn(
       'apparent-nusselt-undefined',
-      'The lubricant removes more conduction resistance than the fluid-side film adds: the apparent Nu on the reference wall plane is undefined; use overallConductanceRatio.',
+      'The lubricant removes more conduction resistance than the fluid-side film adds: the apparent Nu on the reference wall plane is undefined; use heatFluxRatio.',
       'warning',
     );
   }
-  if (!Number.isFinite(result.overallConductanceRatio)) {
+  if (!Number.isFinite(result.heatFluxRatio)) {
     throw new DomainError('thermal slip length makes the total thermal resistance non-positive', { field: 'solid.thermalConductivity' });
   }
 
@@ -421,7 +457,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
             deltaUPlus: input.slip.deltaUPlus,
             dragReduction: input.slip.dragReduction,
           });
-          ratios.push(e.heatTransferRatio);
+          ratios.push(e.nusseltRatio);
           overall.push((wallResistance + Dh / (kW * e.nusseltSmooth)) / (wallResistance + Dh / (kW * e.nusselt)));
         } catch {
           ratios.push(null);
@@ -437,10 +473,10 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     if (best < 0) throw new DomainError('no sweep point gives a positive thermal resistance', { field: 'sensitivity.points' });
     result.sensitivity = {
       lubricantConductivity: conductivities,
-      heatTransferRatio: ratios,
-      overallConductanceRatio: overall,
+      nusseltRatio: ratios,
+      heatFluxRatio: overall,
       bestLubricantConductivity: conductivities[best],
-      bestOverallConductanceRatio: overall[best] as number,
+      bestHeatFluxRatio: overall[best] as number,
       thermalSlipMethod: sweepField ? 'field' : 'closed-form',
     };
     if (best === points - 1) {
@@ -448,5 +484,21 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
     }
     if (!sweepField || !useCrossSection) notes.assume('The sensitivity sweep keeps the velocity slip fixed and varies only the thermal slip.');
   }
-  return outcome(result, notes);
+  // Coefficients, Reynolds number and pressure drop follow from the ratios and the smooth reference.
+  const smoothOverall = 1 / (wallResistance + Dh / (kW * result.nusseltSmooth));
+  const reynoldsNumber = (flow.bulkVelocity ?? 0) * Dh * (scenario.workingFluid.density / scenario.workingFluid.viscosity);
+  const pressureGradientSmooth = ((config.pipe ? 4 : 2) * flow.wallShearStress) / (config.pipe ? config.hydraulicDiameter : config.ratioLength);
+  return outcome(
+    {
+      ...result,
+      heatTransferCoefficient: result.nusselt === null ? null : (result.nusselt * kW) / Dh,
+      heatTransferCoefficientSmooth: (result.nusseltSmooth * kW) / Dh,
+      overallHeatTransferCoefficient: result.heatFluxRatio * smoothOverall,
+      overallHeatTransferCoefficientSmooth: smoothOverall,
+      reynoldsNumber,
+      pressureGradient: result.frictionRatio * pressureGradientSmooth,
+      pressureGradientSmooth,
+    },
+    notes,
+  );
 }

@@ -62,7 +62,8 @@ export function kaderThermalConstant(prandtl: number): number {
 export interface TurbulentHeatEstimate {
   nusseltSmooth: number;
   nusselt: number;
-  heatTransferRatio: number;
+  /** Nu/Nu₀. */
+  nusseltRatio: number;
   frictionRatio: number;
   dragReduction: number;
   /** ΔΘ⁺ = Pr b_t⁺ applied to the temperature law. */
@@ -119,7 +120,7 @@ export function turbulentHeatTransfer(args: {
   return {
     nusseltSmooth,
     nusselt: nusseltSmooth * ratio,
-    heatTransferRatio: ratio,
+    nusseltRatio: ratio,
     frictionRatio,
     dragReduction: dr,
     temperatureShift,

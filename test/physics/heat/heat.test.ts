@@ -66,14 +66,14 @@ describe('evaluateHeat', () => {
     const input = demoInput({ slip: { slipLengthLongitudinal: 0 } });
     const r = evaluateHeat({ ...input, solid: { thermalConductivity: 0.4, substrateThickness: 20e-6 } }).result;
     expect(r.thermalSlipLength).toBe(0);
-    expect(r.heatTransferRatio).toBe(1);
+    expect(r.nusseltRatio).toBe(1);
     expect(r.nusseltSmooth).toBeCloseTo(140 / 17, 12);
   });
   it('conductive lubricant in a low-conductivity solid raises heat transfer by about 20 % (common practice, no source)', () => {
     for (const method of ['closed-form', 'field'] as const) {
       const r = evaluateHeat(demoInput({ method })).result;
-      expect(r.heatTransferRatio!).toBeGreaterThan(1.1);
-      expect(r.heatTransferRatio!).toBeLessThan(1.35);
+      expect(r.nusseltRatio!).toBeGreaterThan(1.1);
+      expect(r.nusseltRatio!).toBeLessThan(1.35);
       expect(r.method).toBe(method);
     }
   });
@@ -81,8 +81,21 @@ describe('evaluateHeat', () => {
     const field = evaluateHeat(demoInput({ method: 'auto' })).result;
     expect(field.method).toBe('field');
     expect(field.closedFormError).not.toBeNull();
-    expect(Math.abs(field.closedFormError!)).toBeLessThan(0.05);
+    expect(field.closedFormError!.nusselt.source).toBe('measured');
+    expect(Math.abs(field.closedFormError!.nusselt.value)).toBeLessThan(0.05);
     expect(evaluateHeat(demoInput()).result.closedFormError).toBeNull();
+  });
+  it('headline q/q₀ = U/U₀, h = Nu k_w/D_h, Re on D_h = 2H, and the smooth pressure gradient 12μU/H² (exact plane Poiseuille)', () => {
+    const r = evaluateHeat(demoInput()).result;
+    const H = 200e-6;
+    expect(r.overallHeatTransferCoefficient / r.overallHeatTransferCoefficientSmooth).toBeCloseTo(r.heatFluxRatio, 12);
+    expect(r.heatTransferCoefficient!).toBeCloseTo((r.nusselt! * 0.6) / (2 * H), 8);
+    expect(r.heatTransferCoefficientSmooth).toBeCloseTo(((140 / 17) * 0.6) / (2 * H), 8); // Nu₀ = 140/17 (Shah & London 1978)
+    expect(r.reynoldsNumber).toBeCloseTo((0.05 * 2 * H * 998) / 1e-3, 8);
+    expect(r.pressureGradientSmooth).toBeCloseTo((12 * 1e-3 * 0.05) / H ** 2, 6);
+    expect(r.pressureGradient / r.pressureGradientSmooth).toBeCloseTo(r.frictionRatio, 12);
+    // With the wall's own resistance in series, the headline moves less than the Nusselt ratio (1/U = R_wall + 1/h).
+    expect(Math.abs(r.heatFluxRatio - 1)).toBeLessThan(Math.abs(r.nusseltRatio! - 1));
   });
   it('uniform wall temperature uses the eigenproblem: no slip, no thermal slip → 7.541 (Shah & London 1978)', () => {
     const input = demoInput({ heating: 'uniform-temperature', slip: { slipLengthLongitudinal: 0 } });
@@ -118,9 +131,9 @@ describe('evaluateHeat', () => {
     const r = evaluateHeat(demoInput({ sensitivity: { points: 7 } })).result;
     const s = r.sensitivity!;
     expect(s.lubricantConductivity.length).toBe(7);
-    for (let i = 1; i < 7; i++) expect(s.overallConductanceRatio[i]!).toBeGreaterThan(s.overallConductanceRatio[i - 1]!);
+    for (let i = 1; i < 7; i++) expect(s.heatFluxRatio[i]!).toBeGreaterThan(s.heatFluxRatio[i - 1]!);
     expect(s.bestLubricantConductivity).toBe(s.lubricantConductivity[6]);
-    for (const v of s.overallConductanceRatio) expect(Number.isFinite(v)).toBe(true);
+    for (const v of s.heatFluxRatio) expect(Number.isFinite(v)).toBe(true);
   });
   it('sweep: field thermal slip up to 25 points, closed form (with a notice) beyond', () => {
     const short = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 3 } }));

@@ -14,8 +14,8 @@ describe('turbulent correlations', () => {
   });
   it('a smooth wall gives ratio 1; a thermal resistance lowers Nu; drag reduction from ΔU+ ≈ 18 % at Re_m ≈ 1e4, ΔU+ from ℓ+ = 2 (the log-law relation checked against the scipy fixture fixtures/slip/turbulent_drag.json in test/physics/slip)', () => {
     const base = { reynolds: 2e4, prandtl: 7, viscousLength: 5e-6, thermalSlipLength: 0 };
-    expect(turbulentHeatTransfer(base).heatTransferRatio).toBe(1);
-    expect(turbulentHeatTransfer({ ...base, thermalSlipLength: 2e-6 }).heatTransferRatio).toBeLessThan(1);
+    expect(turbulentHeatTransfer(base).nusseltRatio).toBe(1);
+    expect(turbulentHeatTransfer({ ...base, thermalSlipLength: 2e-6 }).nusseltRatio).toBeLessThan(1);
     const dr = turbulentHeatTransfer({ ...base, deltaUPlus: 2 }).dragReduction;
     expect(dr).toBeGreaterThan(0.16);
     expect(dr).toBeLessThan(0.2);
