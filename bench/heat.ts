@@ -31,7 +31,7 @@ const si = (s: string): number => {
   return Number(value) * f;
 };
 const example = JSON.parse(readFileSync(new URL('../examples/heat-worked-example.json', import.meta.url), 'utf8'));
-const water = resolveFluid({ fluid: 'water', temperature: si(example.workingFluid.temperature) }, 'workingFluid');
+const water = resolveFluid({ id: 'water', temperature: si(example.workingFluid.temperature) }, 'workingFluid');
 const lubricant = resolveFluid(
   {
     density: si(example.lubricant.density),

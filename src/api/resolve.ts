@@ -30,21 +30,7 @@ export function resolveFluidInput(input: FluidInput, field: string, notes: Notes
 }
 
 function resolveFluidUncached(input: FluidInput, field: string): FluidState {
-  const { kinematicViscosity, ...spec } = input;
-  let state: FluidState;
-  if (kinematicViscosity !== undefined) {
-    if (spec.fluid === undefined) {
-      // Explicit density is required by the schema when no catalogue id is given.
-      state = resolveFluid({ ...spec, viscosity: kinematicViscosity * (spec.density as number) }, field);
-    } else {
-      const base = resolveFluid(spec, field);
-      state = resolveFluid({ ...spec, viscosity: kinematicViscosity * base.density }, field);
-    }
-    state.origins.viscosity = 'input (kinematic viscosity × density)';
-  } else {
-    state = resolveFluid(spec, field);
-  }
-  return state;
+  return resolveFluid(input, field);
 }
 
 /** The fluid as echoed in responses: values and their origins, without the notes already merged. */

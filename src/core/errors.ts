@@ -48,3 +48,17 @@ export function requireFraction(value: number, field: string): void {
     throw new DomainError(`${field} must lie strictly between 0 and 1`, { field });
   }
 }
+
+/**
+ * A part of the design that a question needs is missing: `field` is its path
+ * in the design document, `question` the calculation that needs it. The API
+ * answers 422 "missing required property".
+ */
+export class MissingInputError extends DomainError {
+  readonly question: string;
+  constructor(field: string, question: string, why: string) {
+    super(`${field} is required: ${question} needs ${why}`, { field, code: 'missing-property' });
+    this.name = 'MissingInputError';
+    this.question = question;
+  }
+}

@@ -12,7 +12,7 @@ afterAll(async () => {
 });
 
 const scenario = {
-  workingFluid: { fluid: 'water', temperature: '20 degC' },
+  workingFluid: { id: 'water', temperature: '20 degC' },
   flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
   texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
 };
@@ -82,16 +82,16 @@ describe('POST /v1/flow', () => {
   it('rejects hexadecane below its freezing point (18 °C) with 422 naming the temperature', async () => {
     const res = await request(app.server)
       .post('/v1/flow')
-      .send({ ...scenario, workingFluid: { fluid: 'n-hexadecane', temperature: '10 degC' } })
+      .send({ ...scenario, workingFluid: { id: 'n-hexadecane', temperature: '10 degC' } })
       .expect(422);
     expect(res.body.errors[0].path).toBe('workingFluid.temperature');
   });
 
-  it('rejects an unknown catalogue id with 422 naming workingFluid.fluid', async () => {
+  it('rejects an unknown catalogue id with 422 naming workingFluid.id', async () => {
     const res = await request(app.server)
       .post('/v1/flow')
-      .send({ ...scenario, workingFluid: { fluid: 'unobtainium' } })
+      .send({ ...scenario, workingFluid: { id: 'unobtainium' } })
       .expect(422);
-    expect(res.body.errors[0].path).toBe('workingFluid.fluid');
+    expect(res.body.errors[0].path).toBe('workingFluid.id');
   });
 });

@@ -32,7 +32,7 @@ describe('graceful shutdown', () => {
     const exited = new Promise<number | null>((resolve) => child.on('exit', (code) => resolve(code)));
     const port = await waitForListening(child);
 
-    const body = JSON.stringify({ workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
+    const body = JSON.stringify({ workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
     const half = Math.floor(body.length / 2);
     const response = new Promise<{ status: number; text: string }>((resolve, reject) => {
       const req = http.request(

@@ -17,8 +17,8 @@ afterAll(async () => {
 
 const design = {
   texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '50 um' },
-  lubricant: { fluid: 'n-hexadecane', temperature: '25 degC' },
-  workingFluid: { fluid: 'water', temperature: '25 degC' },
+  lubricant: { id: 'n-hexadecane', temperature: '25 degC' },
+  workingFluid: { id: 'water', temperature: '25 degC' },
   flow: { kind: 'wall-shear', wallShearStress: '1 Pa', regime: 'laminar' },
 };
 

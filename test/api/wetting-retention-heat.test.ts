@@ -18,7 +18,7 @@ describe('POST /v1/wetting', () => {
     const res = await app.inject({
       method: 'POST',
       url: '/v1/wetting',
-      payload: { texture: groove, lubricant: { fluid: 'n-decane' }, workingFluid: { fluid: 'water' }, contactAngles: { underWorkingFluid: { advancing: 40, receding: 15 } } },
+      payload: { texture: groove, lubricant: { id: 'n-decane' }, workingFluid: { id: 'water' }, contactAngles: { underWorkingFluid: { advancing: 40, receding: 15 } } },
     });
     expect(res.statusCode).toBe(200);
     expect(res.json().result.criticalAngle).toBeCloseTo((Math.acos(5 / 9) * 180) / Math.PI, 8);
@@ -27,7 +27,7 @@ describe('POST /v1/wetting', () => {
     const res = await app.inject({
       method: 'POST',
       url: '/v1/wetting',
-      payload: { texture: groove, lubricant: { fluid: 'n-decane' }, workingFluid: { fluid: 'water' }, contactAngles: { underWorkingFluid: { advancing: 130, receding: 110, equilibrium: 120 } } },
+      payload: { texture: groove, lubricant: { id: 'n-decane' }, workingFluid: { id: 'water' }, contactAngles: { underWorkingFluid: { advancing: 130, receding: 110, equilibrium: 120 } } },
     });
     expect(res.json().result.state).toBe('not-wetting');
     expect(res.json().verdict.passes).toBe(false);
@@ -36,7 +36,7 @@ describe('POST /v1/wetting', () => {
     const res = await app.inject({
       method: 'POST',
       url: '/v1/wetting',
-      payload: { texture: groove, lubricant: { fluid: 'n-decane' }, workingFluid: { fluid: 'water' }, contactAngles: { underWorkingFluid: { advancing: 10, receding: 30 } } },
+      payload: { texture: groove, lubricant: { id: 'n-decane' }, workingFluid: { id: 'water' }, contactAngles: { underWorkingFluid: { advancing: 10, receding: 30 } } },
     });
     expect(res.statusCode).toBe(422);
     expect(res.json().errors[0].path).toBe('contactAngles.underWorkingFluid.receding');
@@ -47,7 +47,7 @@ describe('POST /v1/retention', () => {
   it('at a given interfacial shear the retained length does not depend on the lubricant viscosity: L∞·τ_i is invariant (Wexler, Jacobi & Stone 2015: L∞ = Δp_max/G with G ∝ τ_i)', async () => {
     const base = {
       texture: groove,
-      workingFluid: { fluid: 'water' },
+      workingFluid: { id: 'water' },
       flow: { kind: 'wall-shear', wallShearStress: '1 Pa', regime: 'turbulent' },
       contactAngles: { underWorkingFluid: { advancing: 30, receding: 0 } },
       interfacialTension: '20 mN/m',

@@ -51,7 +51,7 @@ export const flowCalculation = defineCalculation({
   body: FlowRequest,
   response: envelopeSchema('FlowResponse', FlowInputsEcho, FlowResultSchema),
   heavy: false,
-  example: { workingFluid: { fluid: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' } },
+  example: { workingFluid: { id: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' } },
   compute(input) {
     const notes = new Notes();
     const fluid = resolveFluidInput(input.workingFluid, 'workingFluid', notes);

@@ -51,8 +51,8 @@ export const heatCalculation = defineCalculation({
   heavy: true,
   example: {
     texture: { grooveWidth: '10 um', pitch: '20 um', grooveDepth: '10 um' },
-    lubricant: { fluid: 'n-dodecane', temperature: '25 degC' },
-    workingFluid: { fluid: 'water', temperature: '25 degC' },
+    lubricant: { id: 'n-dodecane', temperature: '25 degC' },
+    workingFluid: { id: 'water', temperature: '25 degC' },
     flow: { kind: 'channel', height: '200 um', bulkVelocity: '0.05 m/s' },
     solid: { thermalConductivity: '0.2 W/(m*K)', substrateThickness: '20 um' },
     method: 'closed-form',

@@ -60,8 +60,8 @@ export const retentionCalculation = defineCalculation({
   heavy: true,
   example: {
     texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
-    lubricant: { fluid: 'n-decane', temperature: '20 degC' },
-    workingFluid: { fluid: 'water', temperature: '20 degC' },
+    lubricant: { id: 'n-decane', temperature: '20 degC' },
+    workingFluid: { id: 'water', temperature: '20 degC' },
     flow: { kind: 'channel', height: '5 mm', bulkVelocity: '2 m/s' },
     contactAngles: { underWorkingFluid: { advancing: 46, receding: 0 } },
     grooveLength: '20 mm',

@@ -42,8 +42,8 @@ export const slipCalculation = defineCalculation({
   heavy: (input) => input.method !== 'closed-form',
   example: {
     texture: { grooveWidth: '20 um', pitch: '40 um', grooveDepth: '20 um', flowAngle: 0 },
-    lubricant: { fluid: 'silicone-oil-5cst', temperature: '25 degC' },
-    workingFluid: { fluid: 'water', temperature: '25 degC' },
+    lubricant: { id: 'silicone-oil-5cst', temperature: '25 degC' },
+    workingFluid: { id: 'water', temperature: '25 degC' },
     flow: { kind: 'channel', height: '5 mm', bulkVelocity: '0.6 m/s' },
     method: 'auto',
   },

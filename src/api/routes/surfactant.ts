@@ -74,8 +74,8 @@ export const surfactantCalculation = defineCalculation({
   heavy: true,
   example: {
     texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '50 um', flowAngle: 90 },
-    lubricant: { fluid: 'silicone-oil-5cst', temperature: '25 degC' },
-    workingFluid: { fluid: 'water', temperature: '25 degC' },
+    lubricant: { id: 'silicone-oil-5cst', temperature: '25 degC' },
+    workingFluid: { id: 'water', temperature: '25 degC' },
     flow: { kind: 'channel', height: '5 mm', bulkVelocity: '0.1 m/s' },
     interfacialTension: '40 mN/m',
     surfactant: { id: 'sds' },

@@ -51,8 +51,8 @@ export const wavesCalculation = defineCalculation({
   heavy: true,
   example: {
     texture: { grooveWidth: '30 um', pitch: '60 um', grooveDepth: '15 um' },
-    lubricant: { fluid: 'n-dodecane', temperature: '20 degC' },
-    workingFluid: { fluid: 'water', temperature: '20 degC' },
+    lubricant: { id: 'n-dodecane', temperature: '20 degC' },
+    workingFluid: { id: 'water', temperature: '20 degC' },
     flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
   },
   compute(input) {

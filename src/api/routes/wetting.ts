@@ -47,8 +47,8 @@ export const wettingCalculation = defineCalculation({
   heavy: false,
   example: {
     texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
-    lubricant: { fluid: 'n-decane', temperature: '20 degC' },
-    workingFluid: { fluid: 'water', temperature: '20 degC' },
+    lubricant: { id: 'n-decane', temperature: '20 degC' },
+    workingFluid: { id: 'water', temperature: '20 degC' },
     contactAngles: { underWorkingFluid: { advancing: 40, receding: 15 } },
   },
   compute(input) {

@@ -43,7 +43,7 @@ export type TextureInput = z.output<typeof TextureSchema>;
 
 export const FluidSchema = z
   .strictObject({
-    fluid: z.string().min(1).max(64).optional().openapi({ description: 'Catalogue id (GET /v1/fluids)', example: 'water' }),
+    id: z.string().min(1).max(64).optional().openapi({ description: 'Catalogue id (GET /v1/fluids)', example: 'water' }),
     temperature: Temperature.optional().openapi({ description: 'Temperature (default: the catalogue reference temperature)' }),
     salinity: Salinity.optional(),
     density: Density.optional(),
@@ -56,11 +56,11 @@ export const FluidSchema = z
     specificHeat: SpecificHeat.optional(),
   })
   .superRefine((f, ctx) => {
-    if (f.fluid === undefined && f.density === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['density'], message: 'give a catalogue "fluid" id or an explicit density' });
+    if (f.id === undefined && f.density === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['density'], message: 'give a catalogue id or an explicit density' });
     }
-    if (f.fluid === undefined && f.viscosity === undefined && f.kinematicViscosity === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['viscosity'], message: 'give a catalogue "fluid" id or an explicit viscosity' });
+    if (f.id === undefined && f.viscosity === undefined && f.kinematicViscosity === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['viscosity'], message: 'give a catalogue id or an explicit viscosity' });
     }
     if (f.viscosity !== undefined && f.kinematicViscosity !== undefined) {
       ctx.addIssue({ code: 'custom', path: ['kinematicViscosity'], message: 'give viscosity or kinematicViscosity, not both' });
