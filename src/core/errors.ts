@@ -12,7 +12,8 @@
  * its path in the request where the caller knows it (dot-separated).
  */
 export class DomainError extends Error {
-  readonly field: string | undefined;
+  /** Path of the offending input; the design composition rewrites internal paths to document paths. */
+  field: string | undefined;
   readonly code: string;
   constructor(message: string, options: { field?: string; code?: string } = {}) {
     super(message);

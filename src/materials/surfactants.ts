@@ -211,10 +211,10 @@ export interface SurfactantSpec {
  * Missing required values (Γ_m, K, D, n) throw DomainError; a missing
  * surface diffusivity falls back to the bulk diffusivity (assumption, warned).
  */
-export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
+export function resolveSurfactant(spec: SurfactantSpec, field = 'surfactant'): ResolvedSurfactant {
   const entry = spec.id !== undefined ? getSurfactant(spec.id) : undefined;
   if (spec.id !== undefined && !entry) {
-    throw new DomainError(`unknown surfactant "${spec.id}"`, { field: 'surfactant.id', code: 'unknown-surfactant' });
+    throw new DomainError(`unknown surfactant "${spec.id}"`, { field: `${field}.id`, code: 'unknown-surfactant' });
   }
   const data = entry?.interfaces[spec.interfaceType];
   const p = spec.parameters ?? {};
@@ -225,7 +225,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
     const given = p[name];
     if (given !== undefined) {
       if (!Number.isFinite(given) || given <= 0) {
-        throw new DomainError(`${name} must be a positive finite number`, { field: `surfactant.${name}` });
+        throw new DomainError(`${name} must be a positive finite number`, { field: `${field}.${name}` });
       }
       origins[name] = 'input';
       return given;
@@ -246,7 +246,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
   };
   if (entry && !data && Object.keys(p).length === 0) {
     throw new DomainError(`no ${spec.interfaceType} adsorption data for ${entry.name}; give the parameters explicitly`, {
-      field: 'surfactant.parameters',
+      field,
       code: 'missing-interface-data',
     });
   }
@@ -271,7 +271,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
   for (const [name, value] of required) {
     if (value === undefined) {
       throw new DomainError(`${name} is not known for this surfactant and interface; give it explicitly`, {
-        field: `surfactant.${name}`,
+        field: `${field}.${name}`,
         code: 'missing-surfactant-parameter',
       });
     }
