@@ -155,8 +155,9 @@ export const GALLIUM: CatalogueFluid = {
   role: 'lubricant',
   description:
     'Liquid gallium, the conductive lubricant for heat transfer: its thermal conductivity, about 27 W/(m·K) near ' +
-    '30 °C, is some 200 times that of the oils in this catalogue, so gallium-filled grooves conduct heat better ' +
-    'than most solids a texture is made of and give a negative thermal slip length. It does not mix with ' +
+    '30 °C, is some 200 times that of the oils in this catalogue, so gallium-filled grooves in a polymer or ' +
+    'ceramic texture conduct heat better than the texture itself (common practice, no source) and give a ' +
+    'negative thermal slip length. It does not mix with ' +
     'water, has a very low vapour pressure and stays liquid from 29.76 °C up, so it suits warm surfaces such ' +
     'as heat-exchanger plates; below its melting point a request is refused (it supercools readily, but that ' +
     'is not relied on). No surface or interfacial tension is listed: in air or neutral water an oxide skin ' +
