@@ -110,32 +110,130 @@ export const PERRY_HEAT_CAPACITY: Reference = {
   citation: `${PERRY_2008}, Table 2-153: heat capacities of inorganic and organic liquids (DIPPR Eq. 100).`,
 };
 
+/**
+ * The open-source transcription through which several handbook tables below
+ * were read (the printed pages were not available); digits were compared
+ * with the catalogue's coefficients one by one.
+ */
+const VIA_CHEMICALS =
+  'as transcribed in the open-source chemicals library (C. Bell et al., Chemical Engineering Design Library), ' +
+  'not re-checked against the printed page';
+
 export const PDMS_FLUID_DATA: Reference = {
   key: 'pdms-fluid-datasheet',
   citation:
-    'Typical properties of linear polydimethylsiloxane fluids by nominal viscosity grade, as printed in ' +
-    "suppliers' product information for 200-series / PMX-200-class silicone fluids (values at 25 °C).",
+    'Typical properties of linear trimethylsiloxy-terminated polydimethylsiloxane fluids by nominal ' +
+    "viscosity grade, as printed in silicone suppliers' product information (values at 25 °C; recalled, " +
+    'not re-read).',
+};
+
+export const MELINDER_2010: Reference = {
+  key: 'melinder2010',
+  citation:
+    'Å. Melinder (2010), Properties of Secondary Working Fluids for Indirect Systems, IIF-IIR, Paris: ' +
+    'polydimethylsiloxane heat-transfer fluid no. 1 (about 3 mm²/s at 25 °C), density, heat capacity, ' +
+    'viscosity and thermal conductivity from −80 to 100 °C; fit coefficients as transcribed in the CoolProp ' +
+    'incompressible-liquid library (I. H. Bell, J. Wronski et al.), not re-checked against the printed page.',
+};
+
+export const DARHUBER_2003: Reference = {
+  key: 'darhuber2003',
+  citation:
+    'Surface tension of liquid polydimethylsiloxane, empirical fit γ = 21.5 − 0.06·t mN/m (t in °C, 0–100 °C) ' +
+    'of A. A. Darhuber et al. (2003, J. Microelectromech. Syst. 12, 873; journal details from memory), as ' +
+    'quoted in G. Karniadakis, A. Beskok, N. Aluru (2005), Microflows and Nanoflows: Fundamentals and ' +
+    'Simulation, Springer, Interdisciplinary Applied Mathematics 29, section on surface tension.',
 };
 
 export const PFPE_FLUID_DATA: Reference = {
   key: 'pfpe-fluid-datasheet',
   citation:
-    "Typical properties of a perfluoropolyether oil of the Krytox GPL-103 class (viscosity grade ≈ 80 cSt " +
-    "at 20 °C), as printed in the supplier's product information and used for slippery liquid-infused " +
-    'surfaces by T.-S. Wong et al. (2011), Nature 477, 443–447.',
+    'Typical properties of a poly(hexafluoropropylene oxide) perfluoropolyether oil of about 80 mm²/s at ' +
+    "20 °C, as printed in suppliers' product information (recalled, not re-read); the lubricant class used " +
+    'for slippery liquid-infused porous surfaces by T.-S. Wong et al. (2011), Nature 477, 443–447.',
   doi: '10.1038/nature10447',
 };
 
 export const PERFLUORODECALIN_DATA: Reference = {
   key: 'perfluorodecalin-data',
   citation:
-    "Perfluorodecalin (C10F18, mixture of cis and trans isomers): typical properties from the chemical " +
-    "suppliers' catalogue data and the CRC Handbook (95th ed., 2014) physical-constants table.",
+    "Perfluorodecalin (C10F18, mixture of cis and trans isomers): typical properties from chemical suppliers' " +
+    'catalogue data (recalled, not re-read).',
 };
 
 export const MINERAL_OIL_DATA: Reference = {
   key: 'mineral-oil-light-data',
   citation:
     "Light white mineral oil (paraffinum liquidum, light grade): typical properties from suppliers' " +
-    'product specifications (density at 25 °C; kinematic viscosity grade).',
+    'product specifications (density at 25 °C; kinematic viscosity grade; recalled, not re-read).',
+};
+
+const CRC_2014 = 'W. M. Haynes (ed.) (2014), CRC Handbook of Chemistry and Physics, 95th ed., CRC Press';
+
+export const CRC_ORGANIC_CONSTANTS: Reference = {
+  key: 'crc2014-organic-constants',
+  citation: `${CRC_2014}, Section 3, Physical Constants of Organic Compounds (melting and normal boiling points), ${VIA_CHEMICALS}.`,
+};
+
+export const CRC_INORGANIC_CONSTANTS: Reference = {
+  key: 'crc2014-inorganic-constants',
+  citation: `${CRC_2014}, Section 4, Physical Constants of Inorganic Compounds (melting point, boiling point, solid density), ${VIA_CHEMICALS}.`,
+};
+
+export const CRC_MOLTEN_DENSITY: Reference = {
+  key: 'crc2014-molten-density',
+  citation: `${CRC_2014}, Section 4, density of molten elements, ρ = ρ_m − k (T − T_m), ${VIA_CHEMICALS}.`,
+};
+
+export const JANAF_1998: Reference = {
+  key: 'janaf1998',
+  citation:
+    `M. W. Chase Jr. (1998), NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data Monograph 9: ` +
+    `gallium, liquid phase, heat capacity table, ${VIA_CHEMICALS}.`,
+};
+
+export const LANGE_CONDUCTIVITY: Reference = {
+  key: 'lange2005-conductivity',
+  citation:
+    "J. G. Speight (2005), Lange's Handbook of Chemistry, 16th ed., McGraw-Hill: electrical conductivity of " +
+    `pure liquids (gallium, 3.68 × 10⁶ S/m at 30 °C), ${VIA_CHEMICALS}; thermal conductivity derived from it by ` +
+    'the Wiedemann–Franz law with the Sommerfeld Lorenz number L₀ = (π²/3)(k_B/e)² (a derivation of ours).',
+};
+
+export const GALLIUM_VISCOSITY: Reference = {
+  key: 'gallium-viscosity-iida-guthrie',
+  citation:
+    'Viscosity of liquid gallium, η = A·exp(E/RT) with A = 0.4359 mPa·s and E = 4.000 kJ/mol, as tabulated ' +
+    "from T. Iida, R. I. L. Guthrie (1988), The Physical Properties of Liquid Metals, Clarendon, in the CRC " +
+    "Handbook's table of liquid-metal viscosities (from memory). The critically evaluated reference " +
+    'correlation to confirm it against is M. J. Assael et al. (2012), Reference data for the density and ' +
+    'viscosity of liquid cadmium, cobalt, gallium, indium, mercury, silicon, thallium, and zinc, J. Phys. ' +
+    'Chem. Ref. Data 41, 033101 (its stated uncertainty for gallium viscosity: 13.5 % at 95 % confidence).',
+  doi: '10.1063/1.4729873',
+};
+
+export const GALLIUM_OXIDE_SKIN: Reference = {
+  key: 'xu2012-gallium-oxide',
+  citation:
+    'Q. Xu, N. Oudalov, Q. Guo, H. M. Jaeger, E. Brown (2012), Effect of oxidation on the mechanical ' +
+    'properties of liquid gallium and eutectic gallium-indium, Phys. Fluids 24, 063101 (bibliographic ' +
+    'details from memory; abstract read): in air or neutral water an oxide skin gives a yield stress and a ' +
+    'surface stress that mimics surface tension, so apparent surface tensions and contact angles depend on ' +
+    'the oxidation state.',
+};
+
+export const IEC_60079_20_1: Reference = {
+  key: 'iec60079-20-1-2010',
+  citation:
+    'IEC 60079-20-1:2010, Explosive atmospheres – Part 20-1: Material characteristics for gas and vapour ' +
+    `classification – Test methods and data (flash points), ${VIA_CHEMICALS}.`,
+};
+
+export const SERAT_2017: Reference = {
+  key: 'serat2017',
+  citation:
+    'F. Z. Serat, A. M. Benkouider, A. Yahiaoui, F. Bagui (2017), Nonlinear group contribution model for ' +
+    'the prediction of flash points using normal boiling points, Fluid Phase Equilib. 449, 52–59: its ' +
+    `DIPPR-evaluated experimental flash points, ${VIA_CHEMICALS}.`,
+  doi: '10.1016/j.fluid.2017.06.008',
 };

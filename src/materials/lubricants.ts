@@ -1,0 +1,203 @@
+/**
+ * Lubricants other than the n-alkanes and silicone oils: fluorinated oils,
+ * light mineral oil, and liquid gallium, the catalogue's conductive
+ * lubricant for heat transfer.
+ */
+import {
+  CRC_INORGANIC_CONSTANTS,
+  CRC_MOLTEN_DENSITY,
+  CRC_ORGANIC_CONSTANTS,
+  FOWKES_1964,
+  GALLIUM_OXIDE_SKIN,
+  GALLIUM_VISCOSITY,
+  JANAF_1998,
+  LANGE_CONDUCTIVITY,
+  MINERAL_OIL_DATA,
+  PERFLUORODECALIN_DATA,
+  PFPE_FLUID_DATA,
+} from './references.js';
+import { CELSIUS_ZERO, FROM_MEMORY, around, constant, fromFunction, tabulated } from './records.js';
+import type { CatalogueFluid } from './types.js';
+
+// ---------------------------------------------------------------------------------------------
+// Fluorinated lubricants and mineral oil (single values near room temperature)
+// ---------------------------------------------------------------------------------------------
+
+export const PFPE_GENERIC: CatalogueFluid = {
+  id: 'pfpe-generic',
+  name: 'Perfluoropolyether oil, about 80 cSt at 20 °C (poly(hexafluoropropylene oxide))',
+  role: 'lubricant',
+  description:
+    'A generic poly(hexafluoropropylene oxide) perfluoropolyether oil of about 80 mm²/s at 20 °C, the class ' +
+    'used in the first slippery liquid-infused porous surfaces. Single values near room temperature, ' +
+    "typical of suppliers' product information.",
+  freezingPoint: CELSIUS_ZERO - 36,
+  boilingPoint: CELSIUS_ZERO + 300,
+  referenceTemperature: 293.15,
+  safety:
+    'Chemically inert and non-flammable, but above about 300 °C it decomposes to toxic fluorinated products ' +
+    "(hydrogen fluoride, carbonyl fluoride; from memory); do not heat in the open or smoke near it. Consult the supplier's SDS.",
+  properties: {
+    density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
+    viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
+    surfaceTension: constant(17e-3, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
+    surfaceTensionDispersive: constant(
+      17e-3,
+      around(20, 5),
+      PFPE_FLUID_DATA,
+      `taken equal to the total surface tension (apolar fluorinated oil); ${FROM_MEMORY}`,
+    ),
+    interfacialTensionWater: constant(49e-3, around(20, 5), PFPE_FLUID_DATA, FROM_MEMORY),
+    thermalConductivity: constant(0.087, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
+    specificHeat: constant(1000, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
+  },
+};
+
+export const PERFLUORODECALIN: CatalogueFluid = {
+  id: 'perfluorodecalin',
+  name: 'Perfluorodecalin',
+  role: 'lubricant',
+  description:
+    'Perfluorodecalin (C10F18, cis/trans mixture), a volatile low-viscosity perfluorocarbon lubricant. ' +
+    'Single values at 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
+    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}).`,
+  freezingPoint: 264.95,
+  boilingPoint: 416.15,
+  referenceTemperature: 298.15,
+  safety:
+    'Non-flammable and of low toxicity; vapour is heavier than air. Thermal decomposition releases hydrogen ' +
+    "fluoride (from memory). Consult the supplier's safety data sheet.",
+  properties: {
+    density: constant(1917, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    viscosity: constant(5.1e-3, around(25, 3), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    surfaceTension: constant(17.6e-3, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    surfaceTensionDispersive: constant(
+      17.6e-3,
+      around(25, 5),
+      PERFLUORODECALIN_DATA,
+      `taken equal to the total surface tension (apolar perfluorocarbon); ${FROM_MEMORY}`,
+    ),
+  },
+};
+
+export const MINERAL_OIL_LIGHT: CatalogueFluid = {
+  id: 'mineral-oil-light',
+  name: 'Light mineral oil (white oil)',
+  role: 'lubricant',
+  description:
+    'Light white mineral oil (a mixture of saturated hydrocarbons). Properties vary between suppliers and ' +
+    'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C.',
+  referenceTemperature: 298.15,
+  safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
+  properties: {
+    density: constant(838, around(25, 5), MINERAL_OIL_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    viscosity: constant(838 * 30e-6, around(25, 3), MINERAL_OIL_DATA, `≈ 30 cSt at 25 °C × density; ${FROM_MEMORY}`),
+    surfaceTension: constant(30e-3, around(25, 5), MINERAL_OIL_DATA, `typical value; ${FROM_MEMORY}`),
+    surfaceTensionDispersive: constant(
+      30e-3,
+      around(25, 5),
+      FOWKES_1964,
+      `equal to the total for saturated hydrocarbons (Fowkes 1964); total ${FROM_MEMORY}`,
+    ),
+  },
+};
+
+// ---------------------------------------------------------------------------------------------
+// Liquid gallium: the conductive lubricant
+// ---------------------------------------------------------------------------------------------
+
+/** Melting point of gallium, K (CRC Handbook; the gallium fixed point of ITS-90). */
+export const GALLIUM_MELTING_POINT = 302.9146;
+/** Normal boiling point of gallium, K (CRC Handbook). */
+const GALLIUM_BOILING_POINT = 2502.15;
+/** Standard atomic weight of gallium, kg/mol (IUPAC/CIAAW, 69.723 g/mol). */
+const GALLIUM_MOLAR_MASS = 0.069723;
+/** Liquid density at the melting point, kg/m³, and its temperature slope, kg/(m³·K) (CRC molten-element table). */
+const GALLIUM_DENSITY_AT_MELTING = 6080;
+const GALLIUM_DENSITY_SLOPE = 0.62;
+/** Solid density at 25 °C, kg/m³ (CRC physical constants): gallium expands on freezing. */
+export const GALLIUM_SOLID_DENSITY = 5910;
+
+/** Boltzmann constant and elementary charge, exact SI values. */
+const BOLTZMANN = 1.380649e-23;
+const ELEMENTARY_CHARGE = 1.602176634e-19;
+/** Sommerfeld value of the Lorenz number, (π²/3)(k_B/e)² = 2.443e-8 W·Ω/K². */
+export const LORENZ_NUMBER = ((Math.PI * Math.PI) / 3) * (BOLTZMANN / ELEMENTARY_CHARGE) ** 2;
+/** Electrical conductivity of liquid gallium at 30 °C, S/m (Lange's Handbook). */
+export const GALLIUM_ELECTRICAL_CONDUCTIVITY = 3.68e6;
+const GALLIUM_CONDUCTIVITY_TEMPERATURE = 303.15;
+
+/**
+ * Thermal conductivity of liquid gallium by the Wiedemann–Franz law,
+ * k = L₀ σ T, from the electrical conductivity at 30 °C: 27.3 W/(m·K). Our
+ * derivation; the law holds for liquid metals to roughly ±10 % (common
+ * practice, no source), and the result is used only near 30 °C.
+ */
+export const GALLIUM_THERMAL_CONDUCTIVITY =
+  LORENZ_NUMBER * GALLIUM_ELECTRICAL_CONDUCTIVITY * GALLIUM_CONDUCTIVITY_TEMPERATURE;
+
+/** NIST-JANAF liquid-gallium heat capacity, (K, J/(mol·K)), 302.92–600 K. */
+const GALLIUM_HEAT_CAPACITY_TABLE: readonly (readonly [number, number])[] = [
+  [302.92, 28.493],
+  [350, 27.719],
+  [400, 27.154],
+  [450, 26.961],
+  [500, 26.819],
+  [600, 26.694],
+];
+const galliumMolarHeatCapacity = tabulated(GALLIUM_HEAT_CAPACITY_TABLE);
+
+const GAS_CONSTANT = 8.314462618;
+
+export const GALLIUM: CatalogueFluid = {
+  id: 'gallium',
+  name: 'Gallium (liquid metal)',
+  role: 'lubricant',
+  description:
+    'Liquid gallium, the conductive lubricant for heat transfer: its thermal conductivity, about 27 W/(m·K) near ' +
+    '30 °C, is some 200 times that of the oils in this catalogue, so gallium-filled grooves in a polymer or ' +
+    'ceramic texture conduct heat better than the texture itself (common practice, no source) and give a ' +
+    'negative thermal slip length. It does not mix with ' +
+    'water, has a very low vapour pressure and stays liquid from 29.76 °C up, so it suits warm surfaces such ' +
+    'as heat-exchanger plates; below its melting point a request is refused (it supercools readily, but that ' +
+    'is not relied on). No surface or interfacial tension is listed: in air or neutral water an oxide skin ' +
+    `forms whose surface stress mimics surface tension (${GALLIUM_OXIDE_SKIN.key}); give values measured ` +
+    'under the conditions of use. Density (CRC molten-element table) and heat capacity (NIST-JANAF) are ' +
+    'sourced; thermal conductivity is derived from the electrical conductivity by the Wiedemann–Franz law; ' +
+    'the viscosity is recalled (from memory).',
+  freezingPoint: GALLIUM_MELTING_POINT,
+  boilingPoint: GALLIUM_BOILING_POINT,
+  referenceTemperature: 313.15,
+  safety:
+    'Not flammable; low toxicity, but avoid skin contact and ingestion. Liquid gallium attacks aluminium and ' +
+    'its alloys (liquid-metal embrittlement) and alloys with many other metals: keep it away from aluminium ' +
+    'parts and heat exchangers (common practice, no source). It expands by about 3 % on freezing (CRC ' +
+    'densities 5910 kg/m³ solid, 6080 kg/m³ liquid), which can burst a rigid container; it wets glass and ' +
+    "many oxides through its oxide skin and stains. Consult the supplier's safety data sheet.",
+  properties: {
+    density: fromFunction(
+      (t) => GALLIUM_DENSITY_AT_MELTING - GALLIUM_DENSITY_SLOPE * (t - 302.916),
+      { min: 302.916, max: 673.15 },
+      CRC_MOLTEN_DENSITY,
+      `ρ = 6080 − 0.62 (T − 302.916 K) kg/m³ (${CRC_INORGANIC_CONSTANTS.key} gives the melting and boiling points)`,
+    ),
+    viscosity: fromFunction(
+      (t) => 0.4359e-3 * Math.exp(4000 / (GAS_CONSTANT * t)),
+      { min: GALLIUM_MELTING_POINT, max: 473.15 },
+      GALLIUM_VISCOSITY,
+      `η = 0.4359 mPa·s · exp(4.000 kJ/mol / RT); ${FROM_MEMORY} (the reference correlation of Assael et al. 2012 could not be read); its stated uncertainty for gallium is 13.5 %`,
+    ),
+    thermalConductivity: constant(
+      GALLIUM_THERMAL_CONDUCTIVITY,
+      around(30, 10, GALLIUM_MELTING_POINT),
+      LANGE_CONDUCTIVITY,
+      'k = L₀ σ T at 30 °C (Wiedemann–Franz, our derivation; about ±10 %); held constant, valid near 30 °C only',
+    ),
+    specificHeat: fromFunction(
+      (t) => galliumMolarHeatCapacity(t) / GALLIUM_MOLAR_MASS,
+      { min: 302.92, max: 600 },
+      JANAF_1998,
+      'molar heat capacity of the JANAF table, interpolated linearly, divided by the atomic weight 69.723 g/mol',
+    ),
+  },
+};
