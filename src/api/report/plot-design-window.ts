@@ -97,6 +97,6 @@ export function designWindowSpec(input: DesignWindowPlotInput): TopLevelSpec {
 }
 
 /** Plot (e) as a standalone SVG document. */
-export function plotDesignWindow(input: DesignWindowPlotInput, options?: RenderOptions): Promise<string> {
+export async function plotDesignWindow(input: DesignWindowPlotInput, options?: RenderOptions): Promise<string> {
   return renderPlot(designWindowSpec(input), options);
 }

@@ -74,6 +74,6 @@ export function heatSpec(input: HeatPlotInput): TopLevelSpec {
 }
 
 /** Plot (d) as a standalone SVG document. */
-export function plotHeat(input: HeatPlotInput, options?: RenderOptions): Promise<string> {
+export async function plotHeat(input: HeatPlotInput, options?: RenderOptions): Promise<string> {
   return renderPlot(heatSpec(input), options);
 }

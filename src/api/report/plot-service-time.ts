@@ -78,6 +78,6 @@ export function serviceTimeSpec(input: ServiceTimePlotInput): TopLevelSpec {
 }
 
 /** Plot (a) as a standalone SVG document. */
-export function plotServiceTime(input: ServiceTimePlotInput, options?: RenderOptions): Promise<string> {
+export async function plotServiceTime(input: ServiceTimePlotInput, options?: RenderOptions): Promise<string> {
   return renderPlot(serviceTimeSpec(input), options);
 }

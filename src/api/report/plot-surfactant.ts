@@ -73,6 +73,6 @@ export function surfactantSpec(input: SurfactantPlotInput): TopLevelSpec {
 }
 
 /** Plot (c) as a standalone SVG document. */
-export function plotSurfactant(input: SurfactantPlotInput, options?: RenderOptions): Promise<string> {
+export async function plotSurfactant(input: SurfactantPlotInput, options?: RenderOptions): Promise<string> {
   return renderPlot(surfactantSpec(input), options);
 }

@@ -82,6 +82,6 @@ export function waveMapSpec(input: WaveMapPlotInput): TopLevelSpec {
 }
 
 /** Plot (b) as a standalone SVG document. */
-export function plotWaveMap(input: WaveMapPlotInput, options?: RenderOptions): Promise<string> {
+export async function plotWaveMap(input: WaveMapPlotInput, options?: RenderOptions): Promise<string> {
   return renderPlot(waveMapSpec(input), options);
 }
