@@ -6,8 +6,8 @@
  *
  * Why this library: see DEVELOPERS.md ("Plots and the HTML report").
  */
-import { logger, parse, View, Warn, type LoggerInterface } from 'vega';
-import { compile, type TopLevelSpec } from 'vega-lite';
+import type { LoggerInterface } from 'vega';
+import type { TopLevelSpec } from 'vega-lite';
 
 /**
  * Generic font families only: the SVG and the page then never ask for a font
@@ -54,8 +54,22 @@ export interface RenderOptions {
   warnings?: string[];
 }
 
-function collectingLogger(sink: string[] | undefined): LoggerInterface {
-  return logger(Warn, undefined, (_method, _level, args) => {
+type Libraries = [typeof import('vega'), typeof import('vega-lite')];
+let libraries: Promise<Libraries> | undefined;
+
+/**
+ * The libraries are imported on first use, not at start-up: a process that
+ * never draws does not pay for loading them, and a worker thread started with
+ * tsx (tests, `npm run dev`) can load them (their modules use top-level await,
+ * which tsx's CommonJS path in a worker cannot require).
+ */
+function loadLibraries(): Promise<Libraries> {
+  libraries ??= Promise.all([import('vega'), import('vega-lite')]);
+  return libraries;
+}
+
+function collectingLogger(vega: Libraries[0], sink: string[] | undefined): LoggerInterface {
+  return vega.logger(vega.Warn, undefined, (_method, _level, args) => {
     sink?.push(args.map(String).join(' '));
   });
 }
@@ -67,9 +81,10 @@ function collectingLogger(sink: string[] | undefined): LoggerInterface {
  */
 export async function renderPlot(spec: TopLevelSpec, options: RenderOptions = {}): Promise<string> {
   if (hasKey(spec, 'url')) throw new Error('plot specifications must carry their data inline, not by URL');
-  const log = collectingLogger(options.warnings);
-  const { spec: vegaSpec } = compile({ ...spec, config: { ...THEME, ...(spec.config ?? {}) } } as TopLevelSpec, { logger: log });
-  const view = new View(parse(vegaSpec), { renderer: 'none', logger: log });
+  const [vega, vegaLite] = await loadLibraries();
+  const log = collectingLogger(vega, options.warnings);
+  const { spec: vegaSpec } = vegaLite.compile({ ...spec, config: { ...THEME, ...(spec.config ?? {}) } } as TopLevelSpec, { logger: log });
+  const view = new vega.View(vega.parse(vegaSpec), { renderer: 'none', logger: log });
   try {
     return await view.toSVG();
   } finally {
