@@ -76,6 +76,7 @@ const SEVERITY_ORDER: Record<Warning['severity'], number> = { warning: 0, cautio
 export function formatMargin(margin: number | null): string {
   if (margin === null || !Number.isFinite(margin)) return '—';
   const percent = margin * 100;
+  if (percent === 0) return '0 %';
   const text = Math.abs(percent) >= 100 ? percent.toFixed(0) : percent.toPrecision(2);
   return `${percent > 0 ? '+' : ''}${text.replace('-', '−')} %`;
 }
