@@ -46,10 +46,12 @@ export function waveMapSpec(input: WaveMapPlotInput): TopLevelSpec {
   const boundary = (input.boundaryGrooveWidthPlus ?? []).flatMap((wPlus, j) =>
     j < columns.length && isDrawableOnLog(wPlus) ? [{ x: columns[j], y: wPlus }] : [],
   );
+  const regimeScale = { domain: REGIMES, range: [COLOURS.calm, COLOURS.marginal, COLOURS.wavy] };
   const layers: SpecPart[] = [
     {
       data: { values: cells },
-      mark: { type: 'rect', stroke: null, clip: true },
+      // Each cell outlined in its own colour: hides the hairline seams a viewer leaves between adjacent rectangles.
+      mark: { type: 'rect', strokeWidth: 0.6, clip: true },
       encoding: {
         x: { ...x, field: 'x0' },
         x2: { field: 'x1' },
@@ -59,8 +61,9 @@ export function waveMapSpec(input: WaveMapPlotInput): TopLevelSpec {
           field: 'regime',
           type: 'nominal',
           title: 'interface',
-          scale: { domain: REGIMES, range: [COLOURS.calm, COLOURS.marginal, COLOURS.wavy] },
+          scale: regimeScale,
         },
+        stroke: { field: 'regime', type: 'nominal', legend: null, scale: regimeScale },
       },
     },
   ];
