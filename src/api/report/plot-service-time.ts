@@ -26,6 +26,7 @@ export interface ServiceTimePlotInput {
 }
 
 const PANEL_HEIGHT = Math.round(PLOT_HEIGHT * 0.7);
+const MAX_POINTS_SHOWN = 40;
 
 /** Vega-Lite specification of plot (a); see {@link plotServiceTime}. */
 export function serviceTimeSpec(input: ServiceTimePlotInput): TopLevelSpec {
@@ -40,6 +41,8 @@ export function serviceTimeSpec(input: ServiceTimePlotInput): TopLevelSpec {
     });
   const x = { field: 't', type: 'quantitative', title: `service time (${unit.symbol})`, scale: { zero: true } };
   const req = input.requirements ?? {};
+  // Sample points are drawn while they can be told apart; a dense timeline reads better as a line.
+  const showPoints = input.time.length <= MAX_POINTS_SHOWN;
   const serviceLine = (): SpecPart[] =>
     isDrawable(req.serviceTime) ? referenceLineLayers('x', { value: req.serviceTime * unit.factor, label: 'service time' }) : [];
   const panel = (values: readonly (number | null)[], colour: string, y: SpecPart, extra: SpecPart[]): SpecPart => ({
@@ -50,7 +53,7 @@ export function serviceTimeSpec(input: ServiceTimePlotInput): TopLevelSpec {
       ...serviceLine(),
       {
         data: { values: rows(values) },
-        mark: { type: 'line', color: colour, strokeWidth: 2, point: { filled: true, size: 18, color: colour } },
+        mark: { type: 'line', color: colour, strokeWidth: 2, ...(showPoints ? { point: { filled: true, size: 18, color: colour } } : {}) },
         encoding: { x, y: { field: 'v', type: 'quantitative', ...y } },
       },
     ],

@@ -44,6 +44,9 @@ const THEME = {
   background: 'white',
   padding: 8,
   view: { stroke: '#bbbbbb' },
+  // No spoken description per data item (hundreds of map cells would each get one, tripling the SVG);
+  // axes and titles keep theirs, and the page describes each figure in its caption.
+  mark: { aria: false },
   axis: { labelFontSize: 11, titleFontSize: 12, titleFontWeight: 'normal', gridColor: '#e6e6e6', labelColor: '#222222', titleColor: '#222222' },
   legend: { labelFontSize: 11, titleFontSize: 12, titleFontWeight: 'normal', orient: 'bottom', direction: 'horizontal', labelLimit: 260 },
   title: { fontSize: 13, fontWeight: 'bold', anchor: 'start', subtitleFontSize: 11, subtitleColor: '#444444' },

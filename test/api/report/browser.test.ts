@@ -87,7 +87,8 @@ describe('HTML report in headless Chromium', () => {
           const svg = figure.querySelector('svg');
           const marks = svg ? Array.from(svg.querySelectorAll('g.role-mark > path, g.role-mark > text')) : [];
           const drawn = marks.filter((m) => {
-            const box = (m as SVGGraphicsElement).getBBox();
+            // The page's own SVG API (the test compiles without DOM types).
+            const box = (m as unknown as { getBBox(): { width: number; height: number } }).getBBox();
             return box.width > 0 || box.height > 0;
           });
           const box = svg?.getBoundingClientRect();
@@ -117,7 +118,10 @@ describe('HTML report in headless Chromium', () => {
       // Print layout on an A4 text width: nothing wider than the paper.
       await page.emulateMedia({ media: 'print' });
       await page.setViewportSize({ width: A4_TEXT_WIDTH_PX, height: 1000 });
-      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      const overflow = await page.evaluate(() => {
+        const root = (globalThis as unknown as { document: { documentElement: { scrollWidth: number; clientWidth: number } } }).document.documentElement;
+        return root.scrollWidth - root.clientWidth;
+      });
       expect(overflow).toBeLessThanOrEqual(0);
       const pdfPath = join(ARTEFACTS, 'report-print.pdf');
       await page.pdf({ path: pdfPath, format: 'A4', printBackground: true });
