@@ -179,6 +179,21 @@ describe('(e) design window', () => {
 });
 
 describe('renderer', () => {
+  it('makes no network request while drawing (fetch is replaced by a recorder for the duration)', async () => {
+    const calls: string[] = [];
+    const original = globalThis.fetch;
+    globalThis.fetch = (async (resource: unknown) => {
+      calls.push(String(resource));
+      throw new Error('network use while rendering');
+    }) as typeof fetch;
+    try {
+      await plotSurfactant({ bulkConcentration: [1e-6, 1e-4, 1e-2], slipRetained: [1, 0.6, 0.2], statedConcentration: 1e-3 });
+      await plotServiceTime({ time: [0, 60], retainedFraction: [1, 0.9], dragReduction: [0.1, 0.09] });
+    } finally {
+      globalThis.fetch = original;
+    }
+    expect(calls).toEqual([]);
+  });
   it('refuses a specification that would load data from a URL', async () => {
     await expect(renderPlot({ data: { url: 'https://example.org/data.json' }, mark: 'point' })).rejects.toThrow(/inline/);
   });
