@@ -6,20 +6,11 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildReportPage, formatMargin, plotWaveMap, STANDARD_SAFETY_CAUTION, type ReportPageInput } from '../../../src/api/report/index.js';
+import { SMALL_WAVE_MAP } from './sample.js';
 
 const HOSTILE = `<script>alert("x")</script><img src=x onerror=alert(1)> & 'quoted' \u0007`;
 
-const mapInput = {
-  frictionCapillaryNumbers: [1, 10, 100],
-  grooveWidthsPlus: [1, 10, 100],
-  regimes: [
-    ['calm', 'calm', 'marginal'],
-    ['calm', 'marginal', 'wavy'],
-    ['marginal', 'wavy', 'wavy'],
-  ] as ('calm' | 'marginal' | 'wavy')[][],
-  boundaryGrooveWidthPlus: [30, 3, null],
-  designPoint: { frictionCapillaryNumber: 10, grooveWidthPlus: 1 },
-};
+const mapInput = SMALL_WAVE_MAP;
 
 async function page(overrides: Partial<ReportPageInput> = {}): Promise<ReportPageInput> {
   const svg = await plotWaveMap(mapInput);

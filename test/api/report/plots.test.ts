@@ -18,6 +18,7 @@ import {
 } from '../../../src/api/report/index.js';
 import { cellEdges, interpolateOnLogAxis, logTickValues, timeUnit } from '../../../src/api/report/plot-data.js';
 import { COLOURS, PLOT_HEIGHT, PLOT_WIDTH } from '../../../src/api/report/render.js';
+import { SMALL_WAVE_MAP } from './sample.js';
 import { fill, markItems, translation } from './svg.js';
 
 /** Renders and insists the library reported no flaw in the specification. */
@@ -76,17 +77,7 @@ describe('(a) retained fraction and drag reduction over the service time', () =>
 });
 
 describe('(b) wave regime map', () => {
-  const input = {
-    frictionCapillaryNumbers: [1, 10, 100],
-    grooveWidthsPlus: [1, 10, 100],
-    regimes: [
-      ['calm', 'calm', 'marginal'],
-      ['calm', 'marginal', 'wavy'],
-      ['marginal', 'wavy', 'wavy'],
-    ] as ('calm' | 'marginal' | 'wavy')[][],
-    boundaryGrooveWidthPlus: [30, 3, null],
-    designPoint: { frictionCapillaryNumber: 10, grooveWidthPlus: 1 },
-  };
+  const input = SMALL_WAVE_MAP;
   it('one cell per grid point, coloured by its regime', async () => {
     const svg = await rendered(plotWaveMap, input);
     const [cells] = markItems(svg, 'rect');

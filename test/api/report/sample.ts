@@ -24,6 +24,22 @@ import {
   plotWaveMap,
 } from '../../../src/api/report/index.js';
 
+/**
+ * A 3 × 3 regime map on decades (centres 1, 10, 100 on both axes, so the cell edges run from 10^-0.5 to 10^2.5),
+ * three cells of each regime, the design at (We_τ, w⁺) = (10, 1): positions on it are known exactly.
+ */
+export const SMALL_WAVE_MAP: WaveMapPlotInput = {
+  frictionCapillaryNumbers: [1, 10, 100],
+  grooveWidthsPlus: [1, 10, 100],
+  regimes: [
+    ['calm', 'calm', 'marginal'],
+    ['calm', 'marginal', 'wavy'],
+    ['marginal', 'wavy', 'wavy'],
+  ],
+  boundaryGrooveWidthPlus: [30, 3, null],
+  designPoint: { frictionCapillaryNumber: 10, grooveWidthPlus: 1 },
+};
+
 /** Invented demo design: dodecane in 30 µm grooves under water in a 10 mm channel at 1 m/s. */
 export const DEMO_DESIGN = {
   texture: { grooveWidth: '30 um', pitch: '60 um', grooveDepth: '15 um' },
