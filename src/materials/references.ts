@@ -192,32 +192,45 @@ export const JANAF_1998: Reference = {
     `gallium, liquid phase, heat capacity table, ${VIA_CHEMICALS}.`,
 };
 
-export const LANGE_CONDUCTIVITY: Reference = {
-  key: 'lange2005-conductivity',
+/**
+ * The open-source transcription through which the liquid-metal reference correlations below were read:
+ * the thermolib package (liquid_metal module: density, viscosity and thermal-conductivity coefficient
+ * tables). Its mercury viscosity coefficients (a₁ = 0.2561, a₂ = 132.29 K) agree with an independent
+ * reading of Table 5 of Assael et al. (2012), which supports the transcription of that table.
+ */
+const VIA_THERMOLIB =
+  'coefficients and temperature ranges as transcribed in the open-source thermolib package (liquid_metal module), ' +
+  'not re-checked against the printed tables';
+
+export const ASSAEL_2012: Reference = {
+  key: 'assael2012-liquid-metals',
   citation:
-    "J. G. Speight (2005), Lange's Handbook of Chemistry, 16th ed., McGraw-Hill: electrical conductivity of " +
-    `pure liquids (gallium, 3.68 × 10⁶ S/m at 30 °C), ${VIA_CHEMICALS}; thermal conductivity derived from it by ` +
-    'the Wiedemann–Franz law with the Sommerfeld Lorenz number L₀ = (π²/3)(k_B/e)² (a derivation of ours).',
+    'M. J. Assael, I. J. Armyra, J. Brillo, S. V. Stankus, J. Wu, W. A. Wakeham (2012), Reference data for the ' +
+    'density and viscosity of liquid cadmium, cobalt, gallium, indium, mercury, silicon, thallium, and zinc, ' +
+    'J. Phys. Chem. Ref. Data 41, 033101: gallium density ρ = 6077 − 0.611 (T − 302.914 K) kg/m³ (303–1500 K, ' +
+    'uncertainty 0.4 %) and viscosity log₁₀(η/mPa·s) = −0.4465 + 204.03 K/T (Eq. 2, Table 5; 304–800 K, ' +
+    `uncertainty 13.5 %), ${VIA_THERMOLIB}. Title, authors, year, journal, DOI and the uncertainties were read in ` +
+    'the catalogue record of the paper; volume 41 and article number 033101 are from memory.',
+  doi: '10.1063/1.4729873',
 };
 
-export const GALLIUM_VISCOSITY: Reference = {
-  key: 'gallium-viscosity-iida-guthrie',
+export const ASSAEL_2017: Reference = {
+  key: 'assael2017-liquid-metal-conductivity',
   citation:
-    'Viscosity of liquid gallium, η = A·exp(E/RT) with A = 0.4359 mPa·s and E = 4.000 kJ/mol, as tabulated ' +
-    "from T. Iida, R. I. L. Guthrie (1988), The Physical Properties of Liquid Metals, Clarendon, in the CRC " +
-    "Handbook's table of liquid-metal viscosities (from memory). The critically evaluated reference " +
-    'correlation to confirm it against is M. J. Assael et al. (2012), Reference data for the density and ' +
-    'viscosity of liquid cadmium, cobalt, gallium, indium, mercury, silicon, thallium, and zinc, J. Phys. ' +
-    'Chem. Ref. Data 41, 033101 (its stated uncertainty for gallium viscosity: 13.5 % at 95 % confidence).',
-  doi: '10.1063/1.4729873',
+    'M. J. Assael, A. Chatzimichailidis, K. D. Antoniadis, W. A. Wakeham, M. L. Huber, H. Fukuyama (2017), ' +
+    'Reference correlations for the thermal conductivity of liquid copper, gallium, indium, iron, lead, nickel ' +
+    'and tin, High Temp. High Press. 46, 391–416 (NIST author manuscript, PubMed Central PMC5772911): gallium ' +
+    'λ = 28.403 + 0.071896 (T − 302.914 K) W/(m·K), 303–850 K, uncertainty 15.9 % at 95 % confidence, ' +
+    `${VIA_THERMOLIB}.`,
 };
 
 export const GALLIUM_OXIDE_SKIN: Reference = {
   key: 'xu2012-gallium-oxide',
   citation:
     'Q. Xu, N. Oudalov, Q. Guo, H. M. Jaeger, E. Brown (2012), Effect of oxidation on the mechanical ' +
-    'properties of liquid gallium and eutectic gallium-indium, Phys. Fluids 24, 063101 (bibliographic ' +
-    'details from memory; abstract read): in air or neutral water an oxide skin gives a yield stress and a ' +
+    'properties of liquid gallium and eutectic gallium-indium, arXiv:1201.4828 (title, authors and abstract ' +
+    'read); published in Phys. Fluids 24, 063101 (journal volume and article number from memory: not found ' +
+    'in the searched bibliographies): in air or neutral water an oxide skin gives a yield stress and a ' +
     'surface stress that mimics surface tension, so apparent surface tensions and contact angles depend on ' +
     'the oxidation state.',
 };
