@@ -8,6 +8,7 @@
  */
 import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101 } from './dippr.js';
 import {
+  ASTM_D7094_DODECANE,
   CRC_ORGANIC_CONSTANTS,
   FOWKES_1964,
   IEC_60079_20_1,
@@ -49,7 +50,7 @@ interface AlkaneData {
   /** N/m at 25 °C */
   interfacialTensionWater25: number;
   /** Closed-cup flash point, °C, and where it comes from. */
-  flashPoint: { celsius: number; source: Reference | 'from memory' };
+  flashPoint: { celsius: number; source: Reference };
 }
 
 const PERRY_NOTE =
@@ -62,8 +63,7 @@ const JASPER_NOTE =
   'correlations of Mulero et al. (2012) to 0.2 % at 20 °C for decane and dodecane (see the catalogue tests).';
 
 function flashPointText(flash: AlkaneData['flashPoint']): string {
-  const where = flash.source === 'from memory' ? 'from memory' : flash.source.key;
-  return `flash point about ${flash.celsius} °C (${where})`;
+  return `flash point about ${flash.celsius} °C (${flash.source.key})`;
 }
 
 function alkane(data: AlkaneData): CatalogueFluid {
@@ -167,8 +167,9 @@ export const N_DODECANE = alkane({
   jasper: [27.12, 0.0884],
   jasperRange: { min: 263.15, max: 489.15 },
   interfacialTensionWater25: 52.8e-3,
-  // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions searched.
-  flashPoint: { celsius: 71, source: 'from memory' },
+  // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions; the value read lies between the DIPPR flash
+  // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue said 71 °C from memory before.
+  flashPoint: { celsius: 77.5, source: ASTM_D7094_DODECANE },
 });
 
 export const N_HEXADECANE = alkane({

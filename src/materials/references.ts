@@ -250,3 +250,12 @@ export const SERAT_2017: Reference = {
     `DIPPR-evaluated experimental flash points, ${VIA_CHEMICALS}.`,
   doi: '10.1016/j.fluid.2017.06.008',
 };
+
+export const ASTM_D7094_DODECANE: Reference = {
+  key: 'astm-d7094-dodecane',
+  citation:
+    'ASTM D7094, Standard test method for flash point by modified continuously closed cup (MCCCFP) tester, ' +
+    'Table X1.1: n-dodecane 78.6 °C; as quoted in a flash-point study record of a REACH registration dossier ' +
+    '(European Chemicals Agency, registered dossier 30749, section 4.12), whose Pensky–Martens closed-cup check ' +
+    'of n-dodecane (ASTM D93) gave 77.5 °C. The standard itself was not read.',
+};
