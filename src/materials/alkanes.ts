@@ -18,6 +18,7 @@ import {
   PERRY_HEAT_CAPACITY,
   PERRY_VISCOSITY,
   SERAT_2017,
+  WU_HORNOF_1999,
   ZEPPIERI_2001,
 } from './references.js';
 import type { Reference } from '../physics/common.js';
@@ -47,8 +48,8 @@ interface AlkaneData {
   /** Jasper (1972) γ = a − b t, t in °C: a in mN/m, b in mN/(m·K); with the tabulated range in K. */
   jasper: readonly [number, number];
   jasperRange: Range;
-  /** N/m at 25 °C */
-  interfacialTensionWater25: number;
+  /** Interfacial tension against water near 25 °C, N/m, its source and what was read of it. */
+  interfacialTensionWater: { value: number; source: Reference; note: string };
   /** Closed-cup flash point, °C, and where it comes from. */
   flashPoint: { celsius: number; source: Reference };
 }
@@ -105,10 +106,10 @@ function alkane(data: AlkaneData): CatalogueFluid {
         note: 'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
       },
       interfacialTensionWater: constant(
-        data.interfacialTensionWater25,
+        data.interfacialTensionWater.value,
         around(25, 10, data.meltingPoint),
-        ZEPPIERI_2001,
-        `at 25 °C; ${FROM_MEMORY} (the paper's tables could not be read; searched by title and authors)`,
+        data.interfacialTensionWater.source,
+        data.interfacialTensionWater.note,
       ),
       thermalConductivity: {
         at: dipprPolynomial100(data.thermalConductivity),
@@ -143,7 +144,13 @@ export const N_DECANE = alkane({
   specificHeatRange: { min: 243.51, max: 460 },
   jasper: [25.67, 0.092],
   jasperRange: { min: 243.45, max: 447.25 },
-  interfacialTensionWater25: 52.0e-3,
+  interfacialTensionWater: {
+    value: 52.0e-3,
+    source: ZEPPIERI_2001,
+    note:
+      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
+      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
+  },
   // IEC 60079-20-1 lists 319.15 K.
   flashPoint: { celsius: 46, source: IEC_60079_20_1 },
 });
@@ -166,7 +173,13 @@ export const N_DODECANE = alkane({
   specificHeatRange: { min: 263.57, max: 330 },
   jasper: [27.12, 0.0884],
   jasperRange: { min: 263.15, max: 489.15 },
-  interfacialTensionWater25: 52.8e-3,
+  interfacialTensionWater: {
+    value: 52.8e-3,
+    source: ZEPPIERI_2001,
+    note:
+      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
+      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
+  },
   // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions; the value read lies between the DIPPR flash
   // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue said 71 °C from memory before.
   flashPoint: { celsius: 77.5, source: ASTM_D7094_DODECANE },
@@ -189,7 +202,15 @@ export const N_HEXADECANE = alkane({
   specificHeatRange: { min: 291.31, max: 560.01 },
   jasper: [29.18, 0.0854],
   jasperRange: { min: 291.35, max: 559.95 },
-  interfacialTensionWater25: 53.3e-3,
+  // Zeppieri et al. (2001) measured hexane to dodecane only; the catalogue cited them for 53.3 mN/m before.
+  interfacialTensionWater: {
+    value: 53.5e-3,
+    source: WU_HORNOF_1999,
+    note:
+      'the published value quoted, and reproduced by drop-volume tensiometry with hexadecane as the drop phase, ' +
+      'by Wu & Hornof (1999) (abstract read); the abstract states no temperature (room temperature), so the ' +
+      'range is ours: 25 °C ± 10 K, not below the melting point',
+  },
   // DIPPR value 399.75 K (Serat et al. 2017); the catalogue said 135 °C from memory before.
   flashPoint: { celsius: 127, source: SERAT_2017 },
 });

@@ -82,8 +82,18 @@ export const ZEPPIERI_2001: Reference = {
   key: 'zeppieri2001',
   citation:
     'S. Zeppieri, J. Rodríguez, A. L. López de Ramos (2001), Interfacial tension of alkane + water ' +
-    'systems, J. Chem. Eng. Data 46, 1086–1088.',
+    'systems, J. Chem. Eng. Data 46, 1086–1088: hexane to dodecane against water by the emergent-drop method, ' +
+    '10–60 °C, with a correlation in temperature and carbon number (first page read; tables not read).',
   doi: '10.1021/je000245r',
+};
+
+export const WU_HORNOF_1999: Reference = {
+  key: 'wu-hornof1999',
+  citation:
+    'D. Wu, V. Hornof (1999), Dynamic interfacial tension in hexadecane/water systems containing ready-made ' +
+    'and in-situ-formed surfactants, Chem. Eng. Commun. 172, 85–106: for pure hexadecane/water, with hexadecane ' +
+    'as the drop phase, the measured interfacial tension was very close to the published value, 53.5 mN/m ' +
+    '(abstract read).',
 };
 
 const PERRY_2008 =
