@@ -13,6 +13,7 @@ import {
   GALLIUM_OXIDE_SKIN,
   JANAF_1998,
   MINERAL_OIL_DATA,
+  PACANSKY_WALTMAN_1997,
   PERFLUORODECALIN_DATA,
   PFPE_FLUID_DATA,
 } from './references.js';
@@ -30,13 +31,18 @@ export const PFPE_GENERIC: CatalogueFluid = {
   description:
     'A generic poly(hexafluoropropylene oxide) perfluoropolyether oil of about 80 mm²/s at 20 °C, the class ' +
     'used in the first slippery liquid-infused porous surfaces. Single values near room temperature, ' +
-    "typical of suppliers' product information.",
+    "typical of suppliers' product information and recalled: no handbook or peer-reviewed table of this " +
+    'class could be read (searched: liquid-infused-surface papers that tabulate their lubricants, e.g. Smith ' +
+    'et al. 2013 Soft Matter 9, 1772, and perfluoropolyether property papers); measure and override.',
   freezingPoint: CELSIUS_ZERO - 36,
   boilingPoint: CELSIUS_ZERO + 300,
   referenceTemperature: 293.15,
   safety:
-    'Chemically inert and non-flammable, but above about 300 °C it decomposes to toxic fluorinated products ' +
-    "(hydrogen fluoride, carbonyl fluoride; from memory); do not heat in the open or smoke near it. Consult the supplier's SDS.",
+    'Chemically inert and non-flammable, but hot perfluorinated ethers decompose to toxic gases, carbonyl ' +
+    'fluoride among them, and Lewis-acidic surfaces such as aluminium fluoride catalyse the decomposition ' +
+    `(${PACANSKY_WALTMAN_1997.key}); carbonyl fluoride hydrolyses to hydrogen fluoride in moist air (common ` +
+    'practice, no source). The onset near 300 °C on clean surfaces is recalled (from memory) and can be much ' +
+    'lower on oxide or metal surfaces: do not heat it in the open or smoke near it. Consult the supplier\'s SDS.',
   properties: {
     density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
@@ -60,7 +66,9 @@ export const PERFLUORODECALIN: CatalogueFluid = {
   description:
     'Perfluorodecalin (C10F18, cis/trans mixture), a volatile low-viscosity perfluorocarbon lubricant. ' +
     'Single values at 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
-    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}).`,
+    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Density, viscosity and surface ` +
+    'tension are recalled: the J. Chem. Eng. Data and Liquids (2023) measurements found could be identified ' +
+    'but their tables not read.',
   freezingPoint: 264.95,
   boilingPoint: 416.15,
   referenceTemperature: 298.15,
@@ -86,7 +94,8 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
   role: 'lubricant',
   description:
     'Light white mineral oil (a mixture of saturated hydrocarbons). Properties vary between suppliers and ' +
-    'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C.',
+    'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C, ' +
+    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found.',
   referenceTemperature: 298.15,
   safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
   properties: {

@@ -164,6 +164,14 @@ export const PFPE_FLUID_DATA: Reference = {
   doi: '10.1038/nature10447',
 };
 
+export const PACANSKY_WALTMAN_1997: Reference = {
+  key: 'pacansky-waltman1997',
+  citation:
+    'J. Pacansky, R. J. Waltman (1997), The effect of Lewis-acid catalysis on the decomposition of CF3OCF3 to ' +
+    'COF2 and CF4, J. Fluorine Chem. 83, 41–45: the catalytically enhanced degradation of perfluorinated ether ' +
+    'lubricants on aluminium fluoride, products carbonyl fluoride and tetrafluoromethane (abstract read).',
+};
+
 export const PERFLUORODECALIN_DATA: Reference = {
   key: 'perfluorodecalin-data',
   citation:

@@ -184,3 +184,17 @@ describe('catalogue names', () => {
     }
   });
 });
+
+describe('fluorinated oils', () => {
+  it('lists perfluorodecalin within 1 % of the CRC Handbook density, 1930.5 kg/m³ (Physical Constants of Organic Compounds as transcribed in the chemicals library, which drops the temperature of the entry: 20 or 25 °C)', () => {
+    const density = getFluid('perfluorodecalin')!.properties.density!.at(298.15);
+    expect(relative(density, 1930.525)).toBeLessThan(0.01);
+  });
+
+  it('names carbonyl fluoride and Lewis-acid catalysis in the perfluoropolyether safety note (Pacansky & Waltman 1997, J. Fluorine Chem. 83, 41)', () => {
+    const safety = getFluid('pfpe-generic')!.safety ?? '';
+    expect(safety).toMatch(/carbonyl fluoride/);
+    expect(safety).toMatch(/Lewis-acidic/);
+    expect(safety).toMatch(/pacansky-waltman1997/);
+  });
+});
