@@ -149,10 +149,13 @@ export const MELINDER_2010: Reference = {
 export const DARHUBER_2003: Reference = {
   key: 'darhuber2003',
   citation:
-    'Surface tension of liquid polydimethylsiloxane, empirical fit γ = 21.5 − 0.06·t mN/m (t in °C, 0–100 °C) ' +
-    'of A. A. Darhuber et al. (2003, J. Microelectromech. Syst. 12, 873; journal details from memory), as ' +
-    'quoted in G. Karniadakis, A. Beskok, N. Aluru (2005), Microflows and Nanoflows: Fundamentals and ' +
-    'Simulation, Springer, Interdisciplinary Applied Mathematics 29, section on surface tension.',
+    'Surface tension of liquid polydimethylsiloxane, empirical fit to available data γ = 21.5 − 0.06·t mN/m ' +
+    '(t in °C, 0–100 °C) attributed to A. A. Darhuber et al. (2003) in G. Karniadakis, A. Beskok, N. Aluru ' +
+    '(2005), Microflows and Nanoflows: Fundamentals and Simulation, Springer, Interdisciplinary Applied ' +
+    'Mathematics 29, section on surface tension (that passage read). Which 2003 paper of Darhuber and ' +
+    'co-workers holds the fit is not confirmed: Darhuber, Davis, Troian & Reisner, Thermocapillary actuation ' +
+    'of liquid flow on chemically patterned surfaces, Phys. Fluids 15 (2003) (manuscript found; volume from ' +
+    'memory), or Darhuber, Valentino, Troian & Wagner, J. Microelectromech. Syst. 12, 873 (2003) (from memory).',
 };
 
 export const PFPE_FLUID_DATA: Reference = {
