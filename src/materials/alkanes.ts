@@ -127,6 +127,20 @@ function alkane(data: AlkaneData): CatalogueFluid {
   };
 }
 
+/**
+ * An alkane–water interfacial tension at 25 °C that Zeppieri et al. (2001) measured (10–60 °C, abstract read)
+ * but whose tables could not be read: the value itself is recalled.
+ */
+function recalledAgainstZeppieri(value: number): AlkaneData['interfacialTensionWater'] {
+  return {
+    value,
+    source: ZEPPIERI_2001,
+    note:
+      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
+      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
+  };
+}
+
 export const N_DECANE = alkane({
   id: 'n-decane',
   name: 'n-Decane',
@@ -144,13 +158,7 @@ export const N_DECANE = alkane({
   specificHeatRange: { min: 243.51, max: 460 },
   jasper: [25.67, 0.092],
   jasperRange: { min: 243.45, max: 447.25 },
-  interfacialTensionWater: {
-    value: 52.0e-3,
-    source: ZEPPIERI_2001,
-    note:
-      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
-      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
-  },
+  interfacialTensionWater: recalledAgainstZeppieri(52.0e-3),
   // IEC 60079-20-1 lists 319.15 K.
   flashPoint: { celsius: 46, source: IEC_60079_20_1 },
 });
@@ -173,13 +181,7 @@ export const N_DODECANE = alkane({
   specificHeatRange: { min: 263.57, max: 330 },
   jasper: [27.12, 0.0884],
   jasperRange: { min: 263.15, max: 489.15 },
-  interfacialTensionWater: {
-    value: 52.8e-3,
-    source: ZEPPIERI_2001,
-    note:
-      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
-      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
-  },
+  interfacialTensionWater: recalledAgainstZeppieri(52.8e-3),
   // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions; the value read lies between the DIPPR flash
   // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue said 71 °C from memory before.
   flashPoint: { celsius: 77.5, source: ASTM_D7094_DODECANE },
