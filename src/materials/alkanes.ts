@@ -183,7 +183,7 @@ export const N_DODECANE = alkane({
   jasperRange: { min: 263.15, max: 489.15 },
   interfacialTensionWater: recalledAgainstZeppieri(52.8e-3),
   // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions; the value read lies between the DIPPR flash
-  // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue said 71 °C from memory before.
+  // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue listed a recalled 71 °C before.
   flashPoint: { celsius: 77.5, source: ASTM_D7094_DODECANE },
 });
 
@@ -213,7 +213,7 @@ export const N_HEXADECANE = alkane({
       'by Wu & Hornof (1999) (abstract read); the abstract states no temperature (room temperature), so the ' +
       'range is ours: 25 °C ± 10 K, not below the melting point',
   },
-  // DIPPR value 399.75 K (Serat et al. 2017); the catalogue said 135 °C from memory before.
+  // DIPPR value 399.75 K (Serat et al. 2017); the catalogue listed a recalled 135 °C before.
   flashPoint: { celsius: 127, source: SERAT_2017 },
 });
 
