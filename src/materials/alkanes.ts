@@ -8,6 +8,7 @@
  */
 import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101 } from './dippr.js';
 import {
+  ASTM_D7094_DODECANE,
   CRC_ORGANIC_CONSTANTS,
   FOWKES_1964,
   IEC_60079_20_1,
@@ -17,6 +18,7 @@ import {
   PERRY_HEAT_CAPACITY,
   PERRY_VISCOSITY,
   SERAT_2017,
+  WU_HORNOF_1999,
   ZEPPIERI_2001,
 } from './references.js';
 import type { Reference } from '../physics/common.js';
@@ -46,10 +48,10 @@ interface AlkaneData {
   /** Jasper (1972) γ = a − b t, t in °C: a in mN/m, b in mN/(m·K); with the tabulated range in K. */
   jasper: readonly [number, number];
   jasperRange: Range;
-  /** N/m at 25 °C */
-  interfacialTensionWater25: number;
+  /** Interfacial tension against water near 25 °C, N/m, its source and what was read of it. */
+  interfacialTensionWater: { value: number; source: Reference; note: string };
   /** Closed-cup flash point, °C, and where it comes from. */
-  flashPoint: { celsius: number; source: Reference | 'from memory' };
+  flashPoint: { celsius: number; source: Reference };
 }
 
 const PERRY_NOTE =
@@ -62,8 +64,7 @@ const JASPER_NOTE =
   'correlations of Mulero et al. (2012) to 0.2 % at 20 °C for decane and dodecane (see the catalogue tests).';
 
 function flashPointText(flash: AlkaneData['flashPoint']): string {
-  const where = flash.source === 'from memory' ? 'from memory' : flash.source.key;
-  return `flash point about ${flash.celsius} °C (${where})`;
+  return `flash point about ${flash.celsius} °C (${flash.source.key})`;
 }
 
 function alkane(data: AlkaneData): CatalogueFluid {
@@ -105,10 +106,10 @@ function alkane(data: AlkaneData): CatalogueFluid {
         note: 'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
       },
       interfacialTensionWater: constant(
-        data.interfacialTensionWater25,
+        data.interfacialTensionWater.value,
         around(25, 10, data.meltingPoint),
-        ZEPPIERI_2001,
-        `at 25 °C; ${FROM_MEMORY} (the paper's tables could not be read; searched by title and authors)`,
+        data.interfacialTensionWater.source,
+        data.interfacialTensionWater.note,
       ),
       thermalConductivity: {
         at: dipprPolynomial100(data.thermalConductivity),
@@ -123,6 +124,20 @@ function alkane(data: AlkaneData): CatalogueFluid {
         note: PERRY_NOTE,
       },
     },
+  };
+}
+
+/**
+ * An alkane–water interfacial tension at 25 °C that Zeppieri et al. (2001) measured (10–60 °C, abstract read)
+ * but whose tables could not be read: the value itself is recalled.
+ */
+function recalledAgainstZeppieri(value: number): AlkaneData['interfacialTensionWater'] {
+  return {
+    value,
+    source: ZEPPIERI_2001,
+    note:
+      'at 25 °C. Zeppieri et al. (2001) measured this alkane against water from 10 to 60 °C (abstract read), but ' +
+      `their tables could not be read (searched by title, authors and DOI): the value is recalled, ${FROM_MEMORY}`,
   };
 }
 
@@ -143,7 +158,7 @@ export const N_DECANE = alkane({
   specificHeatRange: { min: 243.51, max: 460 },
   jasper: [25.67, 0.092],
   jasperRange: { min: 243.45, max: 447.25 },
-  interfacialTensionWater25: 52.0e-3,
+  interfacialTensionWater: recalledAgainstZeppieri(52.0e-3),
   // IEC 60079-20-1 lists 319.15 K.
   flashPoint: { celsius: 46, source: IEC_60079_20_1 },
 });
@@ -166,9 +181,10 @@ export const N_DODECANE = alkane({
   specificHeatRange: { min: 263.57, max: 330 },
   jasper: [27.12, 0.0884],
   jasperRange: { min: 263.15, max: 489.15 },
-  interfacialTensionWater25: 52.8e-3,
-  // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions searched.
-  flashPoint: { celsius: 71, source: 'from memory' },
+  interfacialTensionWater: recalledAgainstZeppieri(52.8e-3),
+  // Not in the IEC 60079-20-1 or DIPPR (Serat 2017) transcriptions; the value read lies between the DIPPR flash
+  // points of n-undecane (65.9 °C) and n-tridecane (90.0 °C). The catalogue listed a recalled 71 °C before.
+  flashPoint: { celsius: 77.5, source: ASTM_D7094_DODECANE },
 });
 
 export const N_HEXADECANE = alkane({
@@ -188,8 +204,16 @@ export const N_HEXADECANE = alkane({
   specificHeatRange: { min: 291.31, max: 560.01 },
   jasper: [29.18, 0.0854],
   jasperRange: { min: 291.35, max: 559.95 },
-  interfacialTensionWater25: 53.3e-3,
-  // DIPPR value 399.75 K (Serat et al. 2017); the catalogue said 135 °C from memory before.
+  // Zeppieri et al. (2001) measured hexane to dodecane only; the catalogue cited them for 53.3 mN/m before.
+  interfacialTensionWater: {
+    value: 53.5e-3,
+    source: WU_HORNOF_1999,
+    note:
+      'the published value quoted, and reproduced by drop-volume tensiometry with hexadecane as the drop phase, ' +
+      'by Wu & Hornof (1999) (abstract read); the abstract states no temperature (room temperature), so the ' +
+      'range is ours: 25 °C ± 10 K, not below the melting point',
+  },
+  // DIPPR value 399.75 K (Serat et al. 2017); the catalogue listed a recalled 135 °C before.
   flashPoint: { celsius: 127, source: SERAT_2017 },
 });
 

@@ -4,15 +4,16 @@
  * lubricant for heat transfer.
  */
 import {
+  ASSAEL_2012,
+  ASSAEL_2017,
   CRC_INORGANIC_CONSTANTS,
   CRC_MOLTEN_DENSITY,
   CRC_ORGANIC_CONSTANTS,
   FOWKES_1964,
   GALLIUM_OXIDE_SKIN,
-  GALLIUM_VISCOSITY,
   JANAF_1998,
-  LANGE_CONDUCTIVITY,
   MINERAL_OIL_DATA,
+  PACANSKY_WALTMAN_1997,
   PERFLUORODECALIN_DATA,
   PFPE_FLUID_DATA,
 } from './references.js';
@@ -30,13 +31,18 @@ export const PFPE_GENERIC: CatalogueFluid = {
   description:
     'A generic poly(hexafluoropropylene oxide) perfluoropolyether oil of about 80 mm²/s at 20 °C, the class ' +
     'used in the first slippery liquid-infused porous surfaces. Single values near room temperature, ' +
-    "typical of suppliers' product information.",
+    "typical of suppliers' product information and recalled: no handbook or peer-reviewed table of this " +
+    'class could be read (searched: liquid-infused-surface papers that tabulate their lubricants, e.g. Smith ' +
+    'et al. 2013 Soft Matter 9, 1772, and perfluoropolyether property papers); measure and override.',
   freezingPoint: CELSIUS_ZERO - 36,
   boilingPoint: CELSIUS_ZERO + 300,
   referenceTemperature: 293.15,
   safety:
-    'Chemically inert and non-flammable, but above about 300 °C it decomposes to toxic fluorinated products ' +
-    "(hydrogen fluoride, carbonyl fluoride; from memory); do not heat in the open or smoke near it. Consult the supplier's SDS.",
+    'Chemically inert and non-flammable, but hot perfluorinated ethers decompose to toxic gases, carbonyl ' +
+    'fluoride among them, and Lewis-acidic surfaces such as aluminium fluoride catalyse the decomposition ' +
+    `(${PACANSKY_WALTMAN_1997.key}); carbonyl fluoride hydrolyses to hydrogen fluoride in moist air (common ` +
+    'practice, no source). The onset near 300 °C on clean surfaces is recalled (from memory) and can be much ' +
+    'lower on oxide or metal surfaces: do not heat it in the open or smoke near it. Consult the supplier\'s SDS.',
   properties: {
     density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
@@ -60,7 +66,9 @@ export const PERFLUORODECALIN: CatalogueFluid = {
   description:
     'Perfluorodecalin (C10F18, cis/trans mixture), a volatile low-viscosity perfluorocarbon lubricant. ' +
     'Single values at 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
-    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}).`,
+    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Density, viscosity and surface ` +
+    'tension are recalled: the J. Chem. Eng. Data and Liquids (2023) measurements found could be identified ' +
+    'but their tables not read.',
   freezingPoint: 264.95,
   boilingPoint: 416.15,
   referenceTemperature: 298.15,
@@ -86,7 +94,8 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
   role: 'lubricant',
   description:
     'Light white mineral oil (a mixture of saturated hydrocarbons). Properties vary between suppliers and ' +
-    'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C.',
+    'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C, ' +
+    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found.',
   referenceTemperature: 298.15,
   safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
   properties: {
@@ -106,35 +115,38 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
 // Liquid gallium: the conductive lubricant
 // ---------------------------------------------------------------------------------------------
 
-/** Melting point of gallium, K (CRC Handbook; the gallium fixed point of ITS-90). */
+/** Melting point of gallium, K (CRC Handbook, crc2014-inorganic-constants; the gallium fixed point of ITS-90). */
 export const GALLIUM_MELTING_POINT = 302.9146;
 /** Normal boiling point of gallium, K (CRC Handbook). */
 const GALLIUM_BOILING_POINT = 2502.15;
 /** Standard atomic weight of gallium, kg/mol (IUPAC/CIAAW, 69.723 g/mol). */
 const GALLIUM_MOLAR_MASS = 0.069723;
-/** Liquid density at the melting point, kg/m³, and its temperature slope, kg/(m³·K) (CRC molten-element table). */
-const GALLIUM_DENSITY_AT_MELTING = 6080;
-const GALLIUM_DENSITY_SLOPE = 0.62;
+/**
+ * Liquid density, kg/m³, by the reference correlation of Assael et al. (2012),
+ * ρ = c₀ − c₁ (T − T_m), T_m = 302.914 K, 303–1500 K; uncertainty 0.4 % (95 % confidence).
+ */
+const GALLIUM_DENSITY = { atMelting: 6077, slope: 0.611, meltingPoint: 302.914, range: { min: 303, max: 1500 } } as const;
 /** Solid density at 25 °C, kg/m³ (CRC physical constants): gallium expands on freezing. */
 export const GALLIUM_SOLID_DENSITY = 5910;
 
-/** Boltzmann constant and elementary charge, exact SI values. */
-const BOLTZMANN = 1.380649e-23;
-const ELEMENTARY_CHARGE = 1.602176634e-19;
-/** Sommerfeld value of the Lorenz number, (π²/3)(k_B/e)² = 2.443e-8 W·Ω/K². */
-export const LORENZ_NUMBER = ((Math.PI * Math.PI) / 3) * (BOLTZMANN / ELEMENTARY_CHARGE) ** 2;
-/** Electrical conductivity of liquid gallium at 30 °C, S/m (Lange's Handbook). */
-export const GALLIUM_ELECTRICAL_CONDUCTIVITY = 3.68e6;
-const GALLIUM_CONDUCTIVITY_TEMPERATURE = 303.15;
+/**
+ * Viscosity of liquid gallium, Pa·s, by the reference correlation of Assael et al. (2012), Eq. 2 and
+ * Table 5:
+ * log₁₀(η / mPa·s) = −a₁ + a₂/T with a₁ = 0.4465, a₂ = 204.03 K, 304–800 K; uncertainty 13.5 %
+ * (95 % confidence). 1.643 mPa·s at 35 °C, 1.260 mPa·s at 100 °C.
+ */
+function galliumViscosity(temperature: number): number {
+  return 1e-3 * 10 ** (-0.4465 + 204.03 / temperature);
+}
 
 /**
- * Thermal conductivity of liquid gallium by the Wiedemann–Franz law,
- * k = L₀ σ T, from the electrical conductivity at 30 °C: 27.3 W/(m·K). Our
- * derivation; the law holds for liquid metals to roughly ±10 % (common
- * practice, no source), and the result is used only near 30 °C.
+ * Thermal conductivity of liquid gallium, W/(m·K), by the reference correlation of Assael et al.
+ * (2017): λ = 28.403 + 0.071896 (T − 302.914 K), 303–850 K; uncertainty 15.9 % (95 % confidence).
+ * 28.42 W/(m·K) at 30 °C.
  */
-export const GALLIUM_THERMAL_CONDUCTIVITY =
-  LORENZ_NUMBER * GALLIUM_ELECTRICAL_CONDUCTIVITY * GALLIUM_CONDUCTIVITY_TEMPERATURE;
+function galliumThermalConductivity(temperature: number): number {
+  return 28.403 + 0.071896 * (temperature - 302.914);
+}
 
 /** NIST-JANAF liquid-gallium heat capacity, (K, J/(mol·K)), 302.92–600 K. */
 const GALLIUM_HEAT_CAPACITY_TABLE: readonly (readonly [number, number])[] = [
@@ -147,14 +159,12 @@ const GALLIUM_HEAT_CAPACITY_TABLE: readonly (readonly [number, number])[] = [
 ];
 const galliumMolarHeatCapacity = tabulated(GALLIUM_HEAT_CAPACITY_TABLE);
 
-const GAS_CONSTANT = 8.314462618;
-
 export const GALLIUM: CatalogueFluid = {
   id: 'gallium',
   name: 'Gallium (liquid metal)',
   role: 'lubricant',
   description:
-    'Liquid gallium, the conductive lubricant for heat transfer: its thermal conductivity, about 27 W/(m·K) near ' +
+    'Liquid gallium, the conductive lubricant for heat transfer: its thermal conductivity, about 28 W/(m·K) near ' +
     '30 °C, is some 200 times that of the oils in this catalogue, so gallium-filled grooves in a polymer or ' +
     'ceramic texture conduct heat better than the texture itself (common practice, no source) and give a ' +
     'negative thermal slip length. It does not mix with ' +
@@ -162,9 +172,11 @@ export const GALLIUM: CatalogueFluid = {
     'as heat-exchanger plates; below its melting point a request is refused (it supercools readily, but that ' +
     'is not relied on). No surface or interfacial tension is listed: in air or neutral water an oxide skin ' +
     `forms whose surface stress mimics surface tension (${GALLIUM_OXIDE_SKIN.key}); give values measured ` +
-    'under the conditions of use. Density (CRC molten-element table) and heat capacity (NIST-JANAF) are ' +
-    'sourced; thermal conductivity is derived from the electrical conductivity by the Wiedemann–Franz law; ' +
-    'the viscosity is recalled (from memory).',
+    `under the conditions of use. Melting and boiling points from the CRC Handbook (${CRC_INORGANIC_CONSTANTS.key}); ` +
+    'density and viscosity from the reference correlations of Assael et al. ' +
+    '(2012), thermal conductivity from those of Assael et al. (2017), heat capacity from NIST-JANAF. A ' +
+    'gallium–indium eutectic (liquid from about 15.5 °C) would serve cooler surfaces, but no readable source ' +
+    'for its density, viscosity and conductivity was found, so it is not listed: give its values explicitly.',
   freezingPoint: GALLIUM_MELTING_POINT,
   boilingPoint: GALLIUM_BOILING_POINT,
   referenceTemperature: 313.15,
@@ -176,22 +188,24 @@ export const GALLIUM: CatalogueFluid = {
     "many oxides through its oxide skin and stains. Consult the supplier's safety data sheet.",
   properties: {
     density: fromFunction(
-      (t) => GALLIUM_DENSITY_AT_MELTING - GALLIUM_DENSITY_SLOPE * (t - 302.916),
-      { min: 302.916, max: 673.15 },
-      CRC_MOLTEN_DENSITY,
-      `ρ = 6080 − 0.62 (T − 302.916 K) kg/m³ (${CRC_INORGANIC_CONSTANTS.key} gives the melting and boiling points)`,
+      (t) => GALLIUM_DENSITY.atMelting - GALLIUM_DENSITY.slope * (t - GALLIUM_DENSITY.meltingPoint),
+      GALLIUM_DENSITY.range,
+      ASSAEL_2012,
+      'ρ = 6077 − 0.611 (T − 302.914 K) kg/m³, the reference correlation (uncertainty 0.4 %); the CRC ' +
+        `molten-element line (${CRC_MOLTEN_DENSITY.key}) agrees within 0.1 % (see the tests)`,
     ),
     viscosity: fromFunction(
-      (t) => 0.4359e-3 * Math.exp(4000 / (GAS_CONSTANT * t)),
-      { min: GALLIUM_MELTING_POINT, max: 473.15 },
-      GALLIUM_VISCOSITY,
-      `η = 0.4359 mPa·s · exp(4.000 kJ/mol / RT); ${FROM_MEMORY} (the reference correlation of Assael et al. 2012 could not be read); its stated uncertainty for gallium is 13.5 %`,
+      galliumViscosity,
+      { min: 304, max: 800 },
+      ASSAEL_2012,
+      'log₁₀(η/mPa·s) = −0.4465 + 204.03 K/T, the reference correlation (uncertainty 13.5 %)',
     ),
-    thermalConductivity: constant(
-      GALLIUM_THERMAL_CONDUCTIVITY,
-      around(30, 10, GALLIUM_MELTING_POINT),
-      LANGE_CONDUCTIVITY,
-      'k = L₀ σ T at 30 °C (Wiedemann–Franz, our derivation; about ±10 %); held constant, valid near 30 °C only',
+    thermalConductivity: fromFunction(
+      galliumThermalConductivity,
+      { min: 303, max: 850 },
+      ASSAEL_2017,
+      'λ = 28.403 + 0.071896 (T − 302.914 K) W/(m·K), the reference correlation (uncertainty 15.9 %); the ' +
+        'Wiedemann–Franz law applied to the electrical conductivity agrees within 5 % at 30 °C (see the tests)',
     ),
     specificHeat: fromFunction(
       (t) => galliumMolarHeatCapacity(t) / GALLIUM_MOLAR_MASS,

@@ -42,6 +42,20 @@ export const MELINDER_PDMS = {
 /** Darhuber et al. (2003) surface tension of PDMS: 21.5 − 0.06 t mN/m, t in °C, 0–100 °C. */
 const PDMS_SURFACE_TENSION = { intercept: 21.5e-3, slope: 0.06e-3, validRange: { min: 273.15, max: 373.15 } };
 
+/**
+ * What was searched, without a readable table, for the grade values below (25 °C density and thermal
+ * conductivity, pour and flash points) and for an interfacial tension against water: the polymer data
+ * handbook entry for polydimethylsiloxane (A. C. M. Kuo 1999, Polymer Data Handbook, Oxford University
+ * Press: opening pages only), the thermal-conductivity measurements on poly(methylsiloxane) liquids of
+ * V. G. Nemzer et al. (1997, J. Chem. Eng. Data 42, 328: abstract only), the lubricant tables of
+ * liquid-infused-surface papers (Smith et al. 2013, Soft Matter 9, 1772, and others: abstracts only), and
+ * PDMS–water interfacial-tension measurements (none found). DIPPR flash points exist for the linear
+ * oligomers only (Serat et al. 2017, up to C26H78O11Si12 at 182 °C), not for polydisperse grades.
+ */
+const GRADE_VALUES_SEARCHED =
+  'searched without a readable table: the PDMS entry of the Polymer Data Handbook (Kuo 1999), Nemzer et al. ' +
+  '(1997, J. Chem. Eng. Data 42, 328), lubricant tables of liquid-infused-surface papers';
+
 interface SiliconeGrade {
   /** Nominal kinematic viscosity at 25 °C, cSt (mm²/s): the grade's definition. */
   grade: number;
@@ -96,8 +110,9 @@ function siliconeOil(data: SiliconeGrade): CatalogueFluid {
       `Linear trimethylsiloxy-terminated polydimethylsiloxane, nominal kinematic viscosity ${data.grade} mm²/s ` +
       'at 25 °C. Values at 25 °C for the grade, scaled with temperature by the handbook relations of Melinder ' +
       '(2010) for a polydimethylsiloxane fluid (−80 to 100 °C); surface tension from the fit of Darhuber et al. ' +
-      '(2003). No interfacial tension against water is listed: no source for it could be read; give a measured ' +
-      'value, or the Fowkes estimate stands in with its warning.',
+      '(2003). No interfacial tension against water is listed: no source for it could be read (searched: ' +
+      'liquid-infused-surface papers that tabulate their lubricants, PDMS–water tensiometry papers); give a ' +
+      'measured value, or the Fowkes estimate stands in with its warning.',
     freezingPoint: CELSIUS_ZERO + data.pourPointCelsius,
     referenceTemperature: REFERENCE_TEMPERATURE,
     safety:
@@ -108,7 +123,8 @@ function siliconeOil(data: SiliconeGrade): CatalogueFluid {
         (t) => data.density * DENSITY_RATIO(t),
         range,
         MELINDER_2010,
-        `${data.density} kg/m³ at 25 °C (${PDMS_FLUID_DATA.key}, typical for the grade; ${FROM_MEMORY}); ${SCALED_NOTE}`,
+        `${data.density} kg/m³ at 25 °C (${PDMS_FLUID_DATA.key}, typical for the grade; ${FROM_MEMORY}; ` +
+          `${GRADE_VALUES_SEARCHED}); ${SCALED_NOTE}`,
       ),
       viscosity: fromFunction(
         (t) => kinematic * data.density * VISCOSITY_RATIO(t),
@@ -125,7 +141,8 @@ function siliconeOil(data: SiliconeGrade): CatalogueFluid {
         (t) => data.thermalConductivity * CONDUCTIVITY_RATIO(t),
         range,
         MELINDER_2010,
-        `${data.thermalConductivity} W/(m·K) at 25 °C (${PDMS_FLUID_DATA.key}, typical for the grade; ${FROM_MEMORY}); ${SCALED_NOTE}`,
+        `${data.thermalConductivity} W/(m·K) at 25 °C (${PDMS_FLUID_DATA.key}, typical for the grade; ` +
+          `${FROM_MEMORY}; ${GRADE_VALUES_SEARCHED}); ${SCALED_NOTE}`,
       ),
       specificHeat: fromFunction(
         MELINDER_PDMS.specificHeat,

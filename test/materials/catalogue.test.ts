@@ -157,6 +157,15 @@ describe('catalogue contents', () => {
     }
   });
 
+  it('states n-alkane flash points that rise with chain length and bracket n-dodecane between the DIPPR values of n-undecane (339.05 K) and n-tridecane (363.15 K) (Serat et al. 2017, Fluid Phase Equilib. 449, 52, DIPPR data as transcribed in the chemicals library)', () => {
+    const flash = (id: string) => Number(/flash point about ([\d.]+) °C/.exec(getFluid(id)!.safety ?? '')![1]) + 273.15;
+    expect(flash('n-dodecane')).toBeGreaterThan(339.05);
+    expect(flash('n-dodecane')).toBeLessThan(363.15);
+    expect(flash('n-decane')).toBeLessThan(flash('n-dodecane'));
+    expect(flash('n-dodecane')).toBeLessThan(flash('n-hexadecane'));
+    expect(getFluid('n-dodecane')!.safety).not.toMatch(/from memory/);
+  });
+
   it('makes alkane viscosity fall and density fall with temperature (physical monotonicity)', () => {
     for (const id of ['n-decane', 'n-dodecane', 'n-hexadecane']) {
       const fluid = getFluid(id)!;
