@@ -161,13 +161,17 @@ export function getFluid(id: string): CatalogueFluid | undefined {
   return BY_ID.get(id);
 }
 
-/** One property of one fluid as listed by `GET /v1/fluids`. */
+/**
+ * One property of one fluid as listed by `GET /v1/fluids`: the catalogue's
+ * sourced-value shape, shared with the surfactant listing.
+ */
 export interface PropertyListing {
   /** Value at the fluid's reference temperature, SI. */
   value: number;
   unit: string;
+  /** Key of the source in the listing's `references`. */
+  source: string;
   validRange: { min: number; max: number };
-  source: { key: string; citation: string; doi?: string };
   note?: string;
 }
 
@@ -186,17 +190,18 @@ export interface FluidListing {
   properties: Partial<Record<FluidPropertyName, PropertyListing>>;
 }
 
-/** JSON-ready description of every catalogue fluid, for `GET /v1/fluids`. */
-export function catalogueListing(): FluidListing[] {
-  return FLUIDS.map((fluid) => {
+/** JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references its values cite. */
+export function catalogueListing(): { fluids: FluidListing[]; references: Reference[] } {
+  const references = new Map<string, Reference>();
+  const fluids = FLUIDS.map((fluid) => {
     const properties: Partial<Record<FluidPropertyName, PropertyListing>> = {};
     for (const [name, record] of Object.entries(fluid.properties) as [FluidPropertyName, PropertyRecord][]) {
-      const { key, citation, doi } = record.source;
+      references.set(record.source.key, record.source);
       properties[name] = {
         value: record.at(fluid.referenceTemperature),
         unit: PROPERTY_UNITS[name],
+        source: record.source.key,
         validRange: { min: record.validRange.min, max: record.validRange.max },
-        source: doi === undefined ? { key, citation } : { key, citation, doi },
         ...(record.note === undefined ? {} : { note: record.note }),
       };
     }
@@ -212,6 +217,7 @@ export function catalogueListing(): FluidListing[] {
       properties,
     };
   });
+  return { fluids, references: [...references.values()] };
 }
 
 /** References every seawater evaluation also rests on (salinity scale). */

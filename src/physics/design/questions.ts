@@ -116,6 +116,7 @@ function wettingOf(ctx: DesignContext, question: Question, notes: Notes, require
   });
   notes.merge(out);
   ctx.echo('contactAngles', angles);
+  ctx.echo('interfacialTension', out.result.interfacialTension);
   return out.result;
 }
 

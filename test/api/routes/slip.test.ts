@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
-import { makeApp } from './helpers.js';
-import { wavesCalculation } from '../../src/api/routes/waves.js';
+import { makeApp } from '../helpers.js';
 
 let app: FastifyInstance;
 let pooled: FastifyInstance;
@@ -27,48 +26,34 @@ describe('POST /v1/slip', () => {
     const res = await app.inject({
       method: 'POST',
       url: '/v1/slip',
-      payload: { ...design, lubricant: { density: 1.2, viscosity: 1e-9, surfaceTension: 0.02 }, interfacialTension: 0.07, method: 'closed-form' },
+      payload: { ...design, lubricant: { density: 1.2, viscosity: 1e-9, surfaceTension: 0.02 }, interfacialTension: 0.07, options: { method: 'closed-form' } },
     });
     expect(res.statusCode).toBe(200);
     const philip = (100e-6 / Math.PI) * Math.log(1 / Math.cos(Math.PI / 4));
     expect(res.json().result.slipLengthLongitudinal / philip).toBeCloseTo(1, 3);
+    expect(res.json().inputs.options.method).toBe('closed-form');
   });
   it('field solver through the worker pool agrees with itself inline and reports its stats', async () => {
-    const body = { ...design, method: 'field' };
+    const body = { ...design, options: { method: 'field' } };
     const inline = (await app.inject({ method: 'POST', url: '/v1/slip', payload: body })).json();
     const viaPool = (await pooled.inject({ method: 'POST', url: '/v1/slip', payload: body })).json();
     expect(viaPool.result.method).toBe('field');
     expect(viaPool.result.slipLengthLongitudinal).toBe(inline.result.slipLengthLongitudinal);
+    expect(viaPool.result.closedFormError.slipLengthLongitudinal.source).toBe('measured');
   });
   it('a wide groove under strong shear carries the wavy-interface warning on the drag result', async () => {
     const res = await app.inject({
       method: 'POST',
       url: '/v1/slip',
-      payload: { ...design, texture: { grooveWidth: '2 mm', pitch: '3 mm', grooveDepth: '0.2 mm' }, flow: { kind: 'wall-shear', wallShearStress: '50 Pa' }, interfacialTension: '5 mN/m', method: 'closed-form' },
+      payload: { ...design, texture: { grooveWidth: '2 mm', pitch: '3 mm', grooveDepth: '0.2 mm' }, flow: { kind: 'wall-shear', wallShearStress: '50 Pa' }, interfacialTension: '5 mN/m', options: { method: 'closed-form' } },
     });
     expect(res.statusCode).toBe(200);
     expect(res.json().warnings.map((w: { code: string }) => w.code)).toContain('wavy-interface-drag-unreliable');
   });
-});
-
-describe('POST /v1/waves', () => {
-  it('the documented example is calm with a positive margin, and its verdict is lifted to the envelope', async () => {
-    const res = await pooled.inject({ method: 'POST', url: '/v1/waves', payload: wavesCalculation.example as object });
-    expect(res.statusCode).toBe(200);
-    const body = res.json();
-    expect(body.verdict.passes).toBe(body.result.regime === 'calm');
-    expect(body.result.verdict).toBeUndefined();
-    // Λ = w⁺ We_τ^(1/3) by definition (common practice, no source)
-    const wu = body.result.wallUnits;
-    expect(wu.inertialCapillaryNumber).toBeCloseTo(wu.grooveWidthPlus * Math.cbrt(wu.frictionCapillaryNumber), 10);
-  });
-  it('no interfacial tension and no way to estimate it → 422 naming interfacialTension', async () => {
-    const res = await app.inject({
-      method: 'POST',
-      url: '/v1/waves',
-      payload: { ...design, lubricant: { density: 900, viscosity: 0.01 } },
-    });
+  it('without a lubricant → 422 missing required property naming lubricant', async () => {
+    const { lubricant: _l, ...rest } = design;
+    const res = await app.inject({ method: 'POST', url: '/v1/slip', payload: rest });
     expect(res.statusCode).toBe(422);
-    expect(res.json().errors[0].path).toBe('interfacialTension');
+    expect(res.json().errors[0].path).toBe('lubricant');
   });
 });

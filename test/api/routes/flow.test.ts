@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import request from 'supertest';
-import { makeApp } from './helpers.js';
+import { makeApp } from '../helpers.js';
 
 let app: FastifyInstance;
 beforeAll(async () => {
@@ -58,7 +58,7 @@ describe('POST /v1/flow', () => {
       .expect(200);
     // Re = U D / ν = 2 · 0.025 / 1e-6 = 50 000 (exact arithmetic)
     expect(res.body.result.reynoldsNumber).toBeCloseTo(50000, 6);
-    expect(res.body.inputs.workingFluid.viscosity).toBeCloseTo(1e-3, 12);
+    expect(res.body.inputs.workingFluid.viscosity).toEqual({ value: expect.closeTo(1e-3, 12), source: 'input (kinematic viscosity × density)' });
   });
 
   it('rejects a length given as a velocity with 422 naming the field', async () => {
