@@ -21,7 +21,8 @@ import { evaluateRetention, type RetentionResult } from '../retention/retention.
 import { dragChange, type DragChange } from '../slip/drag.js';
 import type { SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
-import { evaluateWaves, waveRoughnessWarning, type WavesResult } from '../waves/waves.js';
+import type { WavesResult } from '../waves/result.js';
+import { evaluateWaves, waveRoughnessWarning } from '../waves/waves.js';
 import { evaluateWetting, type WettingResult } from '../wetting/wetting.js';
 import type { DesignContext } from './context.js';
 import type { Question } from './document.js';

@@ -39,14 +39,13 @@ import {
   PHYSICAL_WAVY_LIMIT,
   PRESSURE_FLUCTUATION_LOW,
   regimeOf,
-  solveOnLogScale,
   type DesignPoint,
   type FixedConditions,
-  type WaveCriterion,
   type WaveRegime,
   wavesCriterion,
 } from './criteria.js';
-import type { Verdict } from '../../core/values.js';
+import { designLimits, regimeMap } from './limits.js';
+import type { GrowthRatePoint, WavesResult } from './result.js';
 import {
   confinedCriticalVelocityDifference,
   fastestGrowingMode,
@@ -74,129 +73,6 @@ export interface WavesInput {
   slipLengthLongitudinal?: number;
   /** Cells per axis of the regime map (default 24, clamped to 2–200). */
   mapResolution?: number;
-}
-
-export interface GrowthRatePoint {
-  /** k, rad/m. */
-  wavenumber: number;
-  /** σ, 1/s. */
-  growthRate: number;
-  /** ΔU at which this k turns unstable, m/s (the neutral curve; 0 where the interface is statically unstable). */
-  neutralVelocityDifference: number;
-}
-
-export interface WavesResult {
-  /** The wall-unit scaling of the design: sizes in viscous lengths and the dimensionless groups. */
-  scaling: {
-    /** ℓ_ν = ν/u_τ, m. */
-    viscousLength: number;
-    /** w⁺ = w/ℓ_ν. */
-    grooveWidthPlus: number;
-    /** d⁺ = d/ℓ_ν. */
-    grooveDepthPlus: number;
-    /** We_τ = μ_w u_τ/γ (friction capillary number). */
-    frictionCapillaryNumber: number;
-    /** We_f = ρ_w u_τ² w/γ = w⁺ We_τ. */
-    frictionWeberNumber: number;
-    /** We_b = ρ_w U_b² w/γ; null without a bulk velocity. */
-    bulkWeberNumber: number | null;
-    /** Λ = w⁺ We_τ^(1/3). */
-    inertialCapillaryNumber: number;
-    /** The trade's calm/wavy boundary Λ = 1 (common practice, no source). */
-    inertialCapillaryBoundary: number;
-    /** u_s = u_τ² b_∥/ν, m/s. */
-    interfaceSlipVelocity: number;
-  };
-  kelvinHelmholtz: {
-    growthRateCurve: GrowthRatePoint[];
-    /** λ at the largest growth rate, m; null when every mode is stable. */
-    mostUnstableWavelength: number | null;
-    /** σ_max, 1/s (0 when stable). */
-    maxGrowthRate: number;
-    /** σ_max ν/u_τ². */
-    maxGrowthRatePlus: number;
-    /** ΔU_c, m/s, from the full dispersion relation; 0 when the interface is statically unstable. */
-    criticalVelocityDifference: number;
-    /** 2π/k at ΔU_c, m (the first wave to grow). */
-    criticalWavelength: number;
-    /** Deep-layer, no-gravity closed form ΔU_c = √(((ρ₁+ρ₂)/(ρ₁ρ₂))(3√3π/2)γ/w), m/s. */
-    deepLayerCriticalVelocityDifference: number;
-    /** ΔU across the interface at the wave's scale, m/s. */
-    velocityDifferenceImposed: number;
-    /** Height above the interface where ΔU is read, y_e = 1/K* = w/(√3π), m. */
-    velocityDifferenceHeight: number;
-    /** c_min, m/s: slowest confined wave, relative to the (resting) layers. */
-    slowestWaveSpeed: number;
-    /** c_min⁺ = c_min/u_τ. */
-    slowestWaveSpeedPlus: number;
-    /** λ of the slowest wave, m. */
-    slowestWaveWavelength: number;
-    /** Layer depths used: h₁ (groove depth) and h₂ (null = deep). */
-    lubricantDepth: number;
-    outerDepth: number | null;
-    /** g_⊥ used, m/s². */
-    normalGravity: number;
-  };
-  criticalLayer: {
-    /** u_s + c_min, m/s: speed of the slowest confined wave relative to the wall. */
-    waveSpeedRelativeToWall: number;
-    /** y_c⁺ where u⁺(y⁺) − u_s⁺ = c_min⁺; null when the wave outruns the fastest mean flow (no such height). */
-    criticalHeightPlus: number | null;
-    /** y_c, m; null as above. */
-    criticalHeight: number | null;
-    /** Sublayer edge used, y⁺ = 5 (common practice, no source). */
-    sublayerEdgePlus: number;
-    /** Largest mean velocity of the flow (centreline or free stream), m/s; null if unknown (wall-shear input). */
-    largestMeanVelocity: number | null;
-    /** True when y_c⁺ lies above the sublayer and inside the flow: waves can be fed there. */
-    exists: boolean;
-  };
-  staticChecks: {
-    /** 2γ/w, Pa. */
-    depinningPressure: number;
-    /** p′_rms range, Pa: 2.5 and 3.4 ρu_τ² (Farabee & Casarella 1991, from memory); 0 in laminar flow. */
-    wallPressureFluctuationLow: number;
-    wallPressureFluctuationHigh: number;
-    /** p′_rms(high)/(2γ/w). */
-    depinningRatio: number;
-    rayleighTaylor: {
-      /** Bo = |Δρ g_⊥| w²/γ. */
-      bondNumber: number;
-      /** π²: the pinned fundamental mode's limit (k → 0). */
-      criticalBondNumber: number;
-      /** True when gravity pulls the denser liquid towards the lighter one. */
-      destabilising: boolean;
-      stable: boolean;
-      /** Widest groove the interface holds against gravity, π√(γ/(|Δρ| g_⊥)), m; null when gravity stabilises. */
-      maxGrooveWidth: number | null;
-    };
-  };
-  /** Load ratio of each criterion (see the module comment). */
-  loadRatios: Record<WaveCriterion, number>;
-  governingCriterion: WaveCriterion;
-  regime: WaveRegime;
-  /** Passes when calm (./criteria.ts); lifted out of the result by the composition. */
-  verdict: Verdict;
-  designLimits: {
-    /** Widest groove keeping the regime calm at this flow and tension, m; null if none found. */
-    maxGrooveWidth: number | null;
-    maxGrooveWidthPlus: number | null;
-    /** Lowest interfacial tension keeping it calm, N/m. */
-    minInterfacialTension: number | null;
-    /** Highest friction velocity this design tolerates calm, m/s. */
-    maxFrictionVelocity: number | null;
-  };
-  map: {
-    /** Column abscissae, We_τ (log-spaced). */
-    frictionCapillaryNumbers: number[];
-    /** Row ordinates, w⁺ (log-spaced). */
-    grooveWidthsPlus: number[];
-    /** regimes[row][column] at (w⁺_row, We_τ,column) with this flow and fluids. */
-    regimes: WaveRegime[][];
-    /** For each column, the w⁺ where max Π = 1 (calm/wavy boundary), null outside the search range. */
-    boundaryGrooveWidthPlus: (number | null)[];
-    designPoint: { frictionCapillaryNumber: number; grooveWidthPlus: number };
-  };
 }
 
 const DEFAULT_MAP_RESOLUTION = 24;
@@ -474,40 +350,12 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const roughness = waveRoughnessWarning(regime);
   if (roughness) notes.warn(roughness.code, roughness.message, roughness.severity);
 
-  const maxGrooveWidth = solveOnLogScale((width) => marginOf(evaluateCriteria(fixed, { ...design, grooveWidth: width }).ratios), w);
-  const minInterfacialTension = solveOnLogScale(
-    (tension) => marginOf(evaluateCriteria(fixed, { ...design, interfacialTension: tension }).ratios),
-    gamma,
-  );
-  const maxFrictionVelocity = solveOnLogScale(
-    (velocity) => marginOf(evaluateCriteria(fixed, { ...design, frictionVelocity: velocity }).ratios),
-    uTau,
-  );
-  if (maxGrooveWidth === null || minInterfacialTension === null || maxFrictionVelocity === null) {
+  const limits = designLimits(fixed, design);
+  if (limits.maxGrooveWidth === null || limits.minInterfacialTension === null || limits.maxFrictionVelocity === null) {
     notes.warn('design-limit-not-found', 'A design limit lies outside the searched range (30 e-folds either side of the design) and is reported as null.', 'info');
   }
-
-  // --- map ----------------------------------------------------------------------------
-  const designWeT = at.frictionCapillaryNumber;
-  const designWPlus = at.grooveWidthPlus;
-  const boundaryAtDesign = Math.cbrt(1 / designWeT);
-  const wPlusLow = Math.min(designWPlus, boundaryAtDesign) / 10;
-  const wPlusHigh = Math.max(designWPlus, boundaryAtDesign) * 10;
-  const logSpace = (lo: number, hi: number, i: number) => lo * (hi / lo) ** (i / (resolution - 1));
-  const frictionCapillaryNumbers = Array.from({ length: resolution }, (_, i) => logSpace(designWeT / 100, designWeT * 100, i));
-  const grooveWidthsPlus = Array.from({ length: resolution }, (_, i) => logSpace(wPlusLow, wPlusHigh, i));
   const viscousLength = at.viscousLength;
-  const pointFor = (weT: number, wPlus: number): DesignPoint => ({
-    grooveWidth: wPlus * viscousLength,
-    interfacialTension: (workingViscosity * uTau) / weT,
-    frictionVelocity: uTau,
-  });
-  const regimes = grooveWidthsPlus.map((wPlus) =>
-    frictionCapillaryNumbers.map((weT) => regimeOf(evaluateCriteria(fixed, pointFor(weT, wPlus)).ratios)),
-  );
-  const boundaryGrooveWidthPlus = frictionCapillaryNumbers.map((weT) =>
-    solveOnLogScale((wPlus) => 1 - Math.max(...Object.values(evaluateCriteria(fixed, pointFor(weT, wPlus)).ratios)), Math.cbrt(1 / weT)),
-  );
+  const map = regimeMap(fixed, at, workingViscosity, uTau, resolution);
 
   const bulk = flow.bulkVelocity;
   const result: WavesResult = {
@@ -565,18 +413,12 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     regime,
     verdict: { passes: regime === 'calm', margin, criterion: wavesCriterion(at.ratios) },
     designLimits: {
-      maxGrooveWidth,
-      maxGrooveWidthPlus: maxGrooveWidth === null ? null : maxGrooveWidth / viscousLength,
-      minInterfacialTension,
-      maxFrictionVelocity,
+      maxGrooveWidth: limits.maxGrooveWidth,
+      maxGrooveWidthPlus: limits.maxGrooveWidth === null ? null : limits.maxGrooveWidth / viscousLength,
+      minInterfacialTension: limits.minInterfacialTension,
+      maxFrictionVelocity: limits.maxFrictionVelocity,
     },
-    map: {
-      frictionCapillaryNumbers,
-      grooveWidthsPlus,
-      regimes,
-      boundaryGrooveWidthPlus,
-      designPoint: { frictionCapillaryNumber: designWeT, grooveWidthPlus: designWPlus },
-    },
+    map,
   };
   return outcome(result, notes);
 }
