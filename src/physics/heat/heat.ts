@@ -27,13 +27,8 @@ import type { SourcedNumber } from '../../core/values.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import { solveHeatCrossSection, thermalSlipField, type LubricantMotion, type WallCell } from './conduction-field.js';
-import {
-  nusseltUniformFluxOneWall,
-  nusseltUniformFluxPlates,
-  nusseltUniformFluxTube,
-  nusseltUniformTemperature,
-  type LaminarGeometry,
-} from './laminar.js';
+import { laminarFrictionRatio, laminarNusselt, type LaminarConfiguration } from './laminar.js';
+import { conductivitySweep, type HeatSensitivity } from './sensitivity.js';
 import { thermalSlipLubricantGrooves, type ThermalSlipClosedForm } from './thermal-slip.js';
 import type { ModelId } from '../../core/models.js';
 import { turbulentHeatTransfer } from './turbulent.js';
@@ -63,20 +58,6 @@ export interface HeatInput {
   slip: { slipLengthLongitudinal: number; deltaUPlus?: number; dragReduction?: number };
   /** Sweep of the lubricant conductivity (points ≥ 2, at most 101). */
   sensitivity?: { points: number };
-}
-
-export interface HeatSensitivity {
-  /** Lubricant conductivities, W/(m·K), log-spaced. */
-  lubricantConductivity: number[];
-  /** Nu/Nu₀ at each (null where the apparent Nu is undefined). */
-  nusseltRatio: (number | null)[];
-  /** q/q₀, heat delivered at the same temperature difference, at each (null where the estimate fails). */
-  heatFluxRatio: (number | null)[];
-  /** Conductivity with the largest heat-flux ratio on the sweep, W/(m·K). */
-  bestLubricantConductivity: number;
-  bestHeatFluxRatio: number;
-  /** Which b_t model the sweep used. */
-  thermalSlipMethod: 'closed-form' | 'field';
 }
 
 export interface HeatResult {
@@ -150,35 +131,6 @@ function fluidProperty(value: number | undefined, field: string): number {
   return value;
 }
 
-interface Configuration {
-  geometry: LaminarGeometry;
-  /** Length the closed-form ratios are taken on: H (plates) or R (tube). */
-  ratioLength: number;
-  hydraulicDiameter: number;
-  pipe: boolean;
-}
-
-function laminarNusselt(config: Configuration, heating: HeatingCondition, slip: number, thermalSlip: number): number | null {
-  const x = slip / config.ratioLength;
-  const y = thermalSlip / config.ratioLength;
-  const uniformFlux =
-    config.geometry === 'plates-both'
-      ? nusseltUniformFluxPlates(x, y)
-      : config.geometry === 'one-wall'
-        ? nusseltUniformFluxOneWall(x, y)
-        : nusseltUniformFluxTube(x, y);
-  if (heating === 'uniform-flux' || uniformFlux === null) return uniformFlux;
-  return nusseltUniformTemperature(config.geometry, x, y).nusselt;
-}
-
-/** Laminar friction ratio at fixed flow rate: the exact Navier-slip results of ../slip/drag.ts. */
-function laminarFrictionRatio(config: Configuration, slip: number): number {
-  const L = config.ratioLength;
-  if (config.geometry === 'plates-both') return L / (L + 6 * slip);
-  if (config.geometry === 'one-wall') return (L + slip) / (L + 4 * slip);
-  return L / (L + 4 * slip);
-}
-
 /**
  * Heat-transfer change of the liquid-infused wall against the same wall with
  * its grooves filled by the solid, at the same flow rate.
@@ -223,7 +175,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   if (!(Number.isFinite(slip) && slip >= 0)) {
     throw new DomainError('slip length must be a non-negative finite length', { field: 'slip.slipLengthLongitudinal' });
   }
-  let config: Configuration;
+  let config: LaminarConfiguration;
   if (flow.kind === 'channel') {
     const H = flow.height;
     if (H === undefined) throw new DomainError('channel height is required', { field: 'scenario.flow.height' });
@@ -422,64 +374,41 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   }
 
   if (input.sensitivity !== undefined) {
-    const points = input.sensitivity.points;
-    if (!(Number.isInteger(points) && points >= 2 && points <= 101)) {
-      throw new DomainError('sensitivity points must be an integer between 2 and 101', { field: 'sensitivity.points' });
-    }
-    const low = 0.1 * Math.min(kW, kO, kS);
-    const high = 10 * Math.max(kW, kO, kS);
     // Each field point is one conduction-cell solve (~0.1 s); long sweeps fall back to the closed form.
-    const sweepField = useFieldThermalSlip && points <= FIELD_SWEEP_LIMIT;
+    const sweepField = useFieldThermalSlip && input.sensitivity.points <= FIELD_SWEEP_LIMIT;
     if (useFieldThermalSlip && !sweepField) {
       notes.warn('sensitivity-closed-form', `More than ${FIELD_SWEEP_LIMIT} sweep points: the sweep uses the closed-form thermal slip.`, 'info');
     }
-    const conductivities: number[] = [];
-    const ratios: (number | null)[] = [];
-    const overall: (number | null)[] = [];
-    const baseConfig = turbulent ? null : config;
-    for (let p = 0; p < points; p++) {
-      const k = low * (high / low) ** (p / (points - 1));
-      const bt = sweepField ? fieldThermalSlip(k) : closedForm(k).thermalSlipLength;
-      conductivities.push(k);
-      if (baseConfig !== null) {
-        const smooth = result.nusseltSmooth;
-        const nu = laminarNusselt(baseConfig, input.heating, result.slipLength, bt);
-        ratios.push(nu === null ? null : nu / smooth);
-        const o = overallFrom(laminarNusselt(baseConfig, input.heating, result.slipLength, 0), bt, smooth);
-        overall.push(Number.isFinite(o) ? o : null);
-      } else {
-        try {
-          const e = turbulentHeatTransfer({
-            reynolds: config.pipe ? (flow.reynoldsNumber as number) : 2 * (flow.reynoldsNumber as number),
-            prandtl: (scenario.workingFluid.viscosity * cW) / kW,
-            viscousLength: flow.viscousLength,
-            thermalSlipLength: bt,
-            deltaUPlus: input.slip.deltaUPlus,
-            dragReduction: input.slip.dragReduction,
-          });
-          ratios.push(e.nusseltRatio);
-          overall.push((wallResistance + Dh / (kW * e.nusseltSmooth)) / (wallResistance + Dh / (kW * e.nusselt)));
-        } catch {
-          ratios.push(null);
-          overall.push(null);
-        }
+    const laminarConfig = turbulent ? null : config;
+    const ratiosAt = (bt: number): { nusseltRatio: number | null; heatFluxRatio: number | null } => {
+      if (laminarConfig !== null) {
+        const nu = laminarNusselt(laminarConfig, input.heating, result.slipLength, bt);
+        const o = overallFrom(laminarNusselt(laminarConfig, input.heating, result.slipLength, 0), bt, result.nusseltSmooth);
+        return { nusseltRatio: nu === null ? null : nu / result.nusseltSmooth, heatFluxRatio: Number.isFinite(o) ? o : null };
       }
-    }
-    let best = -1;
-    for (let p = 0; p < points; p++) {
-      const v = overall[p];
-      if (v !== null && (best < 0 || v > (overall[best] as number))) best = p;
-    }
-    if (best < 0) throw new DomainError('no sweep point gives a positive thermal resistance', { field: 'sensitivity.points' });
-    result.sensitivity = {
-      lubricantConductivity: conductivities,
-      nusseltRatio: ratios,
-      heatFluxRatio: overall,
-      bestLubricantConductivity: conductivities[best],
-      bestHeatFluxRatio: overall[best] as number,
-      thermalSlipMethod: sweepField ? 'field' : 'closed-form',
+      try {
+        const e = turbulentHeatTransfer({
+          reynolds: config.pipe ? (flow.reynoldsNumber as number) : 2 * (flow.reynoldsNumber as number),
+          prandtl: (scenario.workingFluid.viscosity * cW) / kW,
+          viscousLength: flow.viscousLength,
+          thermalSlipLength: bt,
+          deltaUPlus: input.slip.deltaUPlus,
+          dragReduction: input.slip.dragReduction,
+        });
+        return { nusseltRatio: e.nusseltRatio, heatFluxRatio: (wallResistance + Dh / (kW * e.nusseltSmooth)) / (wallResistance + Dh / (kW * e.nusselt)) };
+      } catch {
+        return { nusseltRatio: null, heatFluxRatio: null };
+      }
     };
-    if (best === points - 1) {
+    result.sensitivity = conductivitySweep({
+      points: input.sensitivity.points,
+      low: 0.1 * Math.min(kW, kO, kS),
+      high: 10 * Math.max(kW, kO, kS),
+      thermalSlip: (k) => (sweepField ? fieldThermalSlip(k) : closedForm(k).thermalSlipLength),
+      ratiosAt,
+      thermalSlipMethod: sweepField ? 'field' : 'closed-form',
+    });
+    if (result.sensitivity.bestLubricantConductivity === result.sensitivity.lubricantConductivity[input.sensitivity.points - 1]) {
       notes.warn('sensitivity-at-range-edge', 'Heat transfer keeps rising with lubricant conductivity across the sweep: the best value is its upper end.', 'info');
     }
     if (!sweepField || !useCrossSection) notes.assume('The sensitivity sweep keeps the velocity slip fixed and varies only the thermal slip.');

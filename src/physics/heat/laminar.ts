@@ -166,3 +166,34 @@ export function nusseltUniformTemperature(geometry: LaminarGeometry, slipRatio: 
   }
   throw new ConvergenceError('uniform-wall-temperature eigenvalue: no sign change found', 200, Math.abs(flo));
 }
+
+/** A laminar duct as the closed forms see it. */
+export interface LaminarConfiguration {
+  geometry: LaminarGeometry;
+  /** Length the closed-form ratios are taken on: H (plates) or R (tube). */
+  ratioLength: number;
+  hydraulicDiameter: number;
+  pipe: boolean;
+}
+
+/** Laminar Nu of the configuration: closed forms at uniform flux, the eigenproblem at uniform wall temperature. */
+export function laminarNusselt(config: LaminarConfiguration, heating: 'uniform-flux' | 'uniform-temperature', slip: number, thermalSlip: number): number | null {
+  const x = slip / config.ratioLength;
+  const y = thermalSlip / config.ratioLength;
+  const uniformFlux =
+    config.geometry === 'plates-both'
+      ? nusseltUniformFluxPlates(x, y)
+      : config.geometry === 'one-wall'
+        ? nusseltUniformFluxOneWall(x, y)
+        : nusseltUniformFluxTube(x, y);
+  if (heating === 'uniform-flux' || uniformFlux === null) return uniformFlux;
+  return nusseltUniformTemperature(config.geometry, x, y).nusselt;
+}
+
+/** Laminar friction ratio at fixed flow rate: the exact Navier-slip results of ../slip/drag.ts. */
+export function laminarFrictionRatio(config: LaminarConfiguration, slip: number): number {
+  const L = config.ratioLength;
+  if (config.geometry === 'plates-both') return L / (L + 6 * slip);
+  if (config.geometry === 'one-wall') return (L + slip) / (L + 4 * slip);
+  return L / (L + 4 * slip);
+}
