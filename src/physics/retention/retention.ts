@@ -56,17 +56,17 @@
  * [1] wexler2015, [2] shahLondon1978, [3] furmidge1962, [4] elsherbini2006,
  * [8] colosqui2016; the dissolution sources in ./dissolution.ts.
  */
-import { ConvergenceError, DomainError } from '../../core/errors.js';
+import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
 import { STANDARD_GRAVITY } from '../../core/constants.js';
 import { REFERENCES } from '../../core/references.js';
-import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
 import type { Scenario } from '../scenario.js';
 import type { Verdict } from '../../core/values.js';
 import type { ContactAngles, WettingState } from '../wetting/wetting.js';
 import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
 import { holdLengths, type CurvatureLimit } from './holding.js';
-import { lumpedRetainedLength, lumpedDrainageTime, solveDrainage, steadyColumn, type TimelinePoint } from './drainage.js';
+import { steadyColumn, type TimelinePoint } from './drainage.js';
+import { drainageTimeline, explainTimelineEnd } from './timeline.js';
 
 const DEG = Math.PI / 180;
 
@@ -309,72 +309,27 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   }
 
   // Timeline.
-  let timeline: TimelinePoint[] = [];
-  let timelineModel: 'finite-volume' | 'lumped-plug' = 'lumped-plug';
-  let finalRetainedFraction = 0;
-  let timeTo90: number | null = null;
-  let conservationError: number | null = null;
   const useFiniteVolume = (binding === 'capillary-back-pressure' || binding === 'dissolution') && curvature.curvature > 0 && holds.capillary >= holds.pinning;
-  const lumpedTimeline = (): void => {
-    timelineModel = 'lumped-plug';
-    const speed = Math.abs((tau * shearDrivenGrooveFlux(w, d) + body * pressureDrivenGrooveFlux(w, d)) / (mu * w * d));
-    const initialLength = initialFill * segmentLength;
-    const stopLength = Math.min(retainedLength, initialLength);
-    const points = 150;
-    timeline = [];
-    for (let k = 0; k < points; k++) {
-      const t = input.duration * (k / (points - 1)) ** 2;
-      const length = speed > 0 ? lumpedRetainedLength(t, initialLength, stopLength, speed) : initialLength;
-      timeline.push({ time: t, retainedFraction: length / segmentLength, retainedLength: length });
-    }
-    finalRetainedFraction = timeline[timeline.length - 1].retainedFraction;
-    const finalLength = finalRetainedFraction * segmentLength;
-    const change = initialLength - finalLength;
-    timeTo90 = change > 1e-12 * initialLength && speed > 0 ? lumpedDrainageTime(initialLength, initialLength - 0.9 * change, stopLength, speed) : null;
-    conservationError = null;
-    notes.model('retention.drainage-lumped-plug');
-  };
-  if (useFiniteVolume) {
-    timelineModel = 'finite-volume';
-    const solvedSegments = Math.min(segments, 4);
-    if (segments > solvedSegments) {
-      notes.assume(`timeline solved for the first ${solvedSegments} of ${segments} segments (interior segments behave alike)`);
-    }
-    try {
-      const drainage = solveDrainage({
-        grooveWidth: w,
-        grooveDepth: d,
-        segmentLength,
-        segments: solvedSegments,
-        grooveEnds: input.grooveEnds,
-        interfacialTension: gamma,
-        interfacialShearStress: tau,
-        lubricantViscosity: mu,
-        bodyForceGradient: body,
-        recedingCurvature: curvature.curvature,
-        spillCurvature,
-        initialFill,
-        duration: input.duration,
-        // A stalled integration must fail fast (the request has a time budget); the lumped model then answers.
-        maxSteps: 8_000,
-      });
-      timeline = drainage.timeline;
-      finalRetainedFraction = drainage.finalRetainedFraction;
-      timeTo90 = drainage.timeTo90PercentChange;
-      conservationError = drainage.conservationError;
-      notes.model('retention.drainage-finite-volume');
-    } catch (error) {
-      if (!(error instanceof ConvergenceError)) throw error;
-      notes.warn(
-        'drainage-solver-fallback',
-        `the finite-volume drainage solver did not finish (${error.message}); the timeline comes from the lumped plug model, which neglects the meniscus sag (about 1 % of the length in the verified cases)`,
-        'caution',
-      );
-      lumpedTimeline();
-    }
-  } else {
-    lumpedTimeline();
-  }
+  const { timeline, timelineModel, finalRetainedFraction, timeTo90, conservationError } = drainageTimeline(
+    {
+      grooveWidth: w,
+      grooveDepth: d,
+      segmentLength,
+      segments,
+      grooveEnds: input.grooveEnds,
+      interfacialTension: gamma,
+      interfacialShearStress: tau,
+      lubricantViscosity: mu,
+      bodyForceGradient: body,
+      recedingCurvature: curvature.curvature,
+      spillCurvature,
+      initialFill,
+      duration: input.duration,
+      retainedLength,
+      finiteVolume: useFiniteVolume,
+    },
+    notes,
+  );
 
   explainTimelineEnd(notes, { retainedFraction, finalRetainedFraction, timeline, timelineModel, binding, duration: input.duration });
 
@@ -475,52 +430,5 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       },
     },
     notes,
-  );
-}
-
-/** Share of the groove volume within which the timeline's end and the steady share count as the same (our choice). */
-const TIMELINE_AGREEMENT = 0.02;
-
-/**
- * The steady retained share (the verdict's basis) and the timeline's last point
- * come from different pieces of the model: the steady column of the capillary
- * model (meniscus sag, end meniscus) or the critical plug length, against the
- * finite-volume or lumped drainage over the requested duration. Where they
- * differ by more than {@link TIMELINE_AGREEMENT} of the groove volume, say
- * which difference it is, so the two numbers never contradict each other
- * silently.
- */
-function explainTimelineEnd(
-  notes: Notes,
-  run: {
-    retainedFraction: number;
-    finalRetainedFraction: number;
-    timeline: TimelinePoint[];
-    timelineModel: 'finite-volume' | 'lumped-plug';
-    binding: RetentionMechanism;
-    duration: number;
-  },
-): void {
-  const { retainedFraction: steady, finalRetainedFraction: end, timeline } = run;
-  if (Math.abs(end - steady) <= TIMELINE_AGREEMENT) return;
-  const share = (x: number) => `${(100 * x).toFixed(1)} %`;
-  const last = timeline[timeline.length - 1];
-  const before = timeline[Math.max(0, timeline.length - 11)];
-  // Still moving towards the steady share over the last tenth of the samples: the duration was too short.
-  const settling = last !== undefined && before !== undefined && (last.retainedFraction - before.retainedFraction) * (steady - end) > 0;
-  let why: string;
-  if (settling) {
-    why = `the timeline is still changing at the end of the ${run.duration.toPrecision(3)} s duration (drainage near the retained length is slow); a longer duration approaches the steady state`;
-  } else if (run.timelineModel === 'lumped-plug' && run.binding === 'capillary-back-pressure') {
-    why = 'the timeline comes from the lumped plug model, which has neither the meniscus sag nor the end meniscus of the steady capillary column';
-  } else if (run.timelineModel === 'lumped-plug') {
-    why = 'the timeline follows one plug sliding out to the critical length; break-up into several pinned plugs, which the steady share counts, is not modelled in time';
-  } else {
-    why = 'the finite-volume timeline settles on its own discrete steady state, which differs from the steady column of the closed form';
-  }
-  notes.warn(
-    'timeline-differs-from-steady-state',
-    `the drainage timeline ends at ${share(end)} of the groove volume while the steady retained share is ${share(steady)}: ${why}. The verdict uses the steady share.`,
-    'caution',
   );
 }
