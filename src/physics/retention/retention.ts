@@ -65,7 +65,8 @@ import type { Verdict } from '../../core/values.js';
 import type { ContactAngles, WettingState } from '../wetting/wetting.js';
 import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
 import { holdLengths, type CurvatureLimit } from './holding.js';
-import { steadyColumn, type TimelinePoint } from './drainage.js';
+import type { TimelinePoint } from './drainage.js';
+import { steadyColumn } from './meniscus.js';
 import { drainageTimeline, explainTimelineEnd } from './timeline.js';
 
 const DEG = Math.PI / 180;

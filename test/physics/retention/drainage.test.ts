@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, capillaryPressureCurve, steadyColumn, type DrainageInput } from '../../../src/physics/retention/drainage.js';
+import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, type DrainageInput } from '../../../src/physics/retention/drainage.js';
+import { capillaryPressureCurve, steadyColumn } from '../../../src/physics/retention/meniscus.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../../../src/physics/groove/groove-duct.js';
 import { DomainError } from '../../../src/core/errors.js';
 
