@@ -184,6 +184,18 @@ def psi_depths():
     return (1 - np.cos(math.pi * k / (PSI_SAMPLES - 1))) / 2
 
 
+def run_freefem(script, params):
+    """Runs a FreeFEM script in a fresh folder holding params.txt; returns the lines of the out.txt it writes."""
+    work = tempfile.mkdtemp(prefix='oilskin-freefem-')
+    with open(os.path.join(work, 'params.txt'), 'w') as fh:
+        fh.write(params)
+    run = subprocess.run(['FreeFem++', '-nw', '-v', '0', script], capture_output=True, text=True, cwd=work)
+    if run.returncode != 0:
+        raise RuntimeError(run.stdout[-3000:] + run.stderr[-3000:])
+    with open(os.path.join(work, 'out.txt')) as fh:
+        return fh.read().split('\n')
+
+
 def cavity_node(basis, depth_over_width):
     D = 2 * depth_over_width
     os.makedirs(CACHE, exist_ok=True)
@@ -194,19 +206,11 @@ def cavity_node(basis, depth_over_width):
     pts = cavity_boundary(basis, D)
     sample = min(D, 3.0)
     ys = -sample * psi_depths()[::-1]  # ascending from the deepest sample to the lid
-    work = tempfile.mkdtemp(prefix='oilskin-cavity-')
-    with open(os.path.join(work, 'params.txt'), 'w') as fh:
-        fh.write(f'{len(pts)} {D!r}\n')
-        fh.writelines(f'{float(x)!r} {float(y)!r} {lab}\n' for x, y, lab in pts)
-        fh.write(f'{len(basis.nodes) - 1}\n' + ' '.join(repr(float(v)) for v in basis.nodes) + '\n')
-        fh.write(f'{basis.n}\n' + '\n'.join(f'{a} {b} {c}' for a, b, c in basis.functions) + '\n')
-        fh.write(f'{len(ys)}\n' + ' '.join(repr(float(v)) for v in ys) + '\n')
-    run = subprocess.run(['FreeFem++', '-nw', '-v', '0', os.path.join(HERE, 'transverse_cavity.edp')],
-                         capture_output=True, text=True, cwd=work)
-    if run.returncode != 0:
-        raise RuntimeError(run.stdout[-3000:] + run.stderr[-3000:])
-    with open(os.path.join(work, 'out.txt')) as fh:
-        lines = fh.read().split('\n')
+    params = f'{len(pts)} {D!r}\n' + ''.join(f'{float(x)!r} {float(y)!r} {lab}\n' for x, y, lab in pts)
+    params += f'{len(basis.nodes) - 1}\n' + ' '.join(repr(float(v)) for v in basis.nodes) + '\n'
+    params += f'{basis.n}\n' + '\n'.join(f'{a} {b} {c}' for a, b, c in basis.functions) + '\n'
+    params += f'{len(ys)}\n' + ' '.join(repr(float(v)) for v in ys) + '\n'
+    lines = run_freefem(os.path.join(HERE, 'transverse_cavity.edp'), params)
     n = basis.n
     vertices, triangles, dofs = map(int, lines[0].split())
     row = lambda i: [float(v) for v in lines[i].split()]
