@@ -15,6 +15,7 @@
 import os from 'node:os';
 import { solveTransverseCell } from '../src/numerics/groove-cell.js';
 import { transverseGrooveSlip } from '../src/physics/groove-cell-transverse.js';
+import { belyaevVinogradovaSlipLengthTransverse, grooveLocalSlipLengths } from '../src/physics/stripe-slip.js';
 import reference from '../fixtures/slip/transverse_field_reference.json' with { type: 'json' };
 import freefem from '../fixtures/slip/transverse_cell_freefem.json' with { type: 'json' };
 
@@ -84,6 +85,19 @@ console.log(`time per evaluation: fast ${(fastTotal / reference.cases.length).to
   }
   const seconds = (performance.now() - t0) / 1000;
   console.log(`throughput: ${(calls / seconds).toFixed(0)} transverse evaluations per second on one core (${calls} calls in ${seconds.toFixed(1)} s)`);
+  // Baseline in the same run: the textbook closed form (cavity local slip + Belyaev–Vinogradova/Asmolov–Vinogradova).
+  const closedForm = (c: (typeof cases)[number]): number =>
+    belyaevVinogradovaSlipLengthTransverse(1, c.interfaceFraction, grooveLocalSlipLengths(c.interfaceFraction, c.depthOverWidth * c.interfaceFraction, c.viscosityRatio).transverseMean);
+  let baseline = 0;
+  const t1 = performance.now();
+  while (performance.now() - t1 < 1000) {
+    for (const c of cases) closedForm(c);
+    baseline += cases.length;
+  }
+  const baselineRate = baseline / ((performance.now() - t1) / 1000);
+  console.log(`baseline, textbook closed form in the same run: ${baselineRate.toFixed(0)} per second; fast core costs ${(baselineRate / (calls / seconds)).toFixed(1)} closed-form evaluations`);
+  const worstClosedForm = Math.max(...cases.map((c) => Math.abs(closedForm(c) / (c.extrapolated.slipLength as number) - 1)));
+  console.log(`textbook closed form against the field solver on the same cases: largest error ${(worstClosedForm * 100).toFixed(1)} %`);
 }
 
 // Secondary quantities against the FreeFEM whole-cell reference.

@@ -151,6 +151,8 @@ def cavity_boundary(basis, D):
         a, b = basis.nodes[e], basis.nodes[e + 1]
         length = b - a
         h = min(length / (2 + 3 * basis.degrees[e]), D / 6) / MESH_REFINEMENT
+        # FreeFEM rejects boundary points closer than 1e-7 of the domain size (deep cavities)
+        h = max(h, 1.5e-7 * max(D, 2.2))
         count = max(2, int(math.ceil(length / h))) * (2 if e == 0 else 1)
         for q in range(count):
             lid.append(a + length * (q / count) ** 2 if e == 0 else a + length * q / count)
@@ -280,7 +282,7 @@ def main():
         'method': 'Galerkin on the groove mouth; water side exact by conformal map and discrete sine transform; '
                   'cavity side FreeFEM Taylor-Hood P2/P1 on graded meshes',
         'versions': {'numpy': np.__version__, 'scipy': scipy.__version__,
-                     'freefem': subprocess.run(['FreeFem++', '-nw', '-v', '0', '-h'], capture_output=True, text=True).stdout.split('\n')[0].strip()},
+                     'freefem': next((line.strip('- ').strip() for line in subprocess.run(['FreeFem++', '-h'], capture_output=True, text=True).stdout.split('\n') if 'FreeFem++ v' in line), 'unknown')},
         'basis': {'sigma': SIGMA, 'layers': LAYERS, 'degrees': basis.degrees, 'nodes': basis.nodes.tolist(),
                   'functions': basis.functions, 'size': basis.n},
         'rhs': rounded(r),
