@@ -24,7 +24,7 @@ const pad = (s: string | number, n: number): string => String(s).padStart(n);
 const fast = (phi: number, aspect: number, N: number) => transverseGrooveSlip({ pitch: 1, grooveWidth: phi, grooveDepth: aspect * phi, viscosityRatio: N });
 
 /** Median time per call in ms over `rounds` rounds of `count` calls (after a warm-up). */
-function timePerCall(run: () => void, count: number, rounds = 7): number {
+function timePerCall(run: () => void, count: number, rounds = 5): number {
   for (let k = 0; k < count; k++) run();
   const times: number[] = [];
   for (let r = 0; r < rounds; r++) {
@@ -38,7 +38,7 @@ function timePerCall(run: () => void, count: number, rounds = 7): number {
 
 console.log('oilskin transverse slip core benchmark');
 console.log(`node ${process.version}, ${os.cpus().length} logical cores (${os.cpus()[0]?.model ?? 'unknown'}), load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')}`);
-console.log(`field values: ${live ? 'computed now' : `committed reference (${reference.solver}; times as measured by its generator, node ${reference.node})`}; fast method timed here, median of 7 rounds, single thread\n`);
+console.log(`field values: ${live ? 'computed now' : `committed reference (${reference.solver}; times as measured by its generator, node ${reference.node})`}; fast method timed here, median of 5 rounds of 50 calls, single thread\n`);
 console.log(`${pad('w/P', 6)}${pad('d/w', 6)}${pad('N', 8)}${pad('b fast', 13)}${pad('b field', 13)}${pad('rel.diff', 10)}${pad('field err', 10)}${pad('ms fast', 9)}${pad('ms field', 10)}`);
 
 const differences: number[] = [];
@@ -47,7 +47,7 @@ let fastTotal = 0;
 for (const c of reference.cases) {
   const { interfaceFraction: phi, depthOverWidth: aspect, viscosityRatio: N } = c;
   const value = fast(phi, aspect, N).slipLength;
-  const msFast = timePerCall(() => fast(phi, aspect, N), 200);
+  const msFast = timePerCall(() => fast(phi, aspect, N), 50);
   let field = c.extrapolated.slipLength as number;
   let fieldError = c.errorEstimate.slipLength as number;
   let msField = c.seconds * 1000;

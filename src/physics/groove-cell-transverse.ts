@@ -31,11 +31,14 @@
  *     recirculating flux = (τ w²/(8 μ_w)) max_y |Σ a_j ψ_j(0, y)| on the groove centre line.
  * N = 0 is Philip's shear-free result, b_⊥ = (P/2π) ln sec(πφ/2) [1, 2], returned in closed form.
  *
- * Accuracy (measured, docs/slip-core-transverse.md): basis truncation ≤ 4e-6 relative in b_⊥ (32 vs
- * 45 functions), table interpolation ≤ 1e-5 on held-out nodes, FreeFEM mesh ≤ 1e-5; against Philip at
- * N → 0 ≤ 5e-6; against the field solver (second order, Richardson-extrapolated) within its own
- * error over the committed grid of cases (fixtures/slip/transverse_field_reference.json).
- * Cost: about 0.03 ms per evaluation (bench/slip-core-transverse.ts).
+ * Accuracy (measured, docs/slip-core-transverse.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
+ * 45 functions); cavity-table mesh ≤ 1.1e-5 (spacing halved); table interpolation ≤ 2e-5 across w/P and
+ * ≤ 3e-4 across d/w (held-out nodes, worst near d/w ≈ 1); N → 0 against Philip ≤ 5e-6; against the field
+ * solver over 49 cases (fixtures/slip/transverse_field_reference.json) within that solver's own error, and
+ * against FreeFEM on the whole cell (fixtures/slip/transverse_cell_freefem.json) for every returned quantity.
+ * Cost: a 32 × 32 LU and about 3 000 table entries interpolated, some 3e4 floating-point operations; about
+ * 2 000 evaluations per second per core measured under a load average of 15 on 2 cores
+ * (bench/slip-core-transverse.ts, where the ratio to the textbook closed form is printed).
  *
  * Range: w/P 0.02–0.98, d/w 0.01–10, N = 0 and 1e-4–1e4 (validated). Outside it a result is still
  * returned with a warning: d/w > 3.3 is the deep-groove limit (the cavity flow decays like Moffatt's
