@@ -73,9 +73,13 @@ describe('transverse slip core: cavity limits (independent scipy reference fixtu
 });
 
 describe('transverse slip core against independent solvers', () => {
-  it(`field solver (MAC finite volumes, Richardson 32/64 or 64/128 cells per pitch), ${fieldReference.cases.length} cases over the range: b_⊥ within 0.5 percent`, () => {
-    expect(fieldReference.cases.length).toBeGreaterThanOrEqual(40);
-    for (const c of fieldReference.cases) {
+  it(`field solver (MAC finite volumes, Richardson 32/64 cells per pitch, 64/128 at tolerance 1e-12 for b_⊥ < 1e-7 P), ${fieldReference.cases.length} cases over the range: b_⊥ within 0.5 percent`, () => {
+    // b_⊥ below 1e-8 P is the difference of two numbers of order H = 4P in the field solver and is not resolved
+    // by it (w/P = 0.02, d/w = 0.2, N = 1e4 gives 1.81, 1.75 and 1.61 × 1e-9 P on 32, 64 and 128 cells per pitch);
+    // that corner is witnessed by the large-N cavity limit above.
+    const resolved = fieldReference.cases.filter((c) => (c.extrapolated.slipLength as number) > 1e-8);
+    expect(resolved.length).toBeGreaterThanOrEqual(40);
+    for (const c of resolved) {
       const r = cell(c.interfaceFraction, c.depthOverWidth, c.viscosityRatio);
       const reference = c.extrapolated.slipLength as number;
       expect(relative(r.slipLength, reference), JSON.stringify(c)).toBeLessThan(5e-3);
