@@ -61,17 +61,21 @@ for (const c of reference.cases) {
     fieldError = Math.abs(field - fine);
   }
   const difference = value / field - 1;
-  differences.push(difference);
+  // Below 1e-8 P the field solver does not resolve b_⊥ (a difference of two numbers of order H = 4P); the
+  // witness there is the large-N cavity limit (test/physics/groove-cell-transverse.test.ts).
+  const resolved = field > 1e-8;
+  if (resolved) differences.push(difference);
   fieldTotal += msField;
   fastTotal += msFast;
   console.log(
     `${pad(phi, 6)}${pad(aspect, 6)}${pad(N.toExponential(0), 8)}${pad(value.toExponential(5), 13)}${pad(field.toExponential(5), 13)}` +
-      `${pad((difference * 100).toFixed(3) + '%', 10)}${pad(((fieldError / field) * 100).toFixed(3) + '%', 10)}${pad(msFast.toFixed(4), 9)}${pad(msField.toFixed(0), 10)}`,
+      `${pad((difference * 100).toFixed(3) + '%', 10)}${pad(((fieldError / field) * 100).toFixed(3) + '%', 10)}${pad(msFast.toFixed(4), 9)}${pad(msField.toFixed(0), 10)}` +
+      (resolved ? '' : '  (b below 1e-8 P: not resolved by the field solver, left out of the summary)'),
   );
 }
 const worst = Math.max(...differences.map(Math.abs));
 const mean = differences.reduce((s, d) => s + Math.abs(d), 0) / differences.length;
-console.log(`\n${reference.cases.length} cases: largest |fast/field − 1| = ${(worst * 100).toFixed(3)} %, mean ${(mean * 100).toFixed(3)} %`);
+console.log(`\n${differences.length} of ${reference.cases.length} cases resolved by the field solver: largest |fast/field − 1| = ${(worst * 100).toFixed(3)} %, mean ${(mean * 100).toFixed(3)} %`);
 console.log(`time per evaluation: fast ${(fastTotal / reference.cases.length).toFixed(4)} ms (mean over cases), field ${(fieldTotal / reference.cases.length / 1000).toFixed(1)} s; ratio ${(fieldTotal / fastTotal).toExponential(2)}`);
 
 // Throughput: every case in turn, one core, as a sweep would call it.
@@ -95,7 +99,7 @@ console.log(`time per evaluation: fast ${(fastTotal / reference.cases.length).to
     baseline += cases.length;
   }
   const baselineRate = baseline / ((performance.now() - t1) / 1000);
-  console.log(`baseline, textbook closed form in the same run: ${baselineRate.toFixed(0)} per second; fast core costs ${(baselineRate / (calls / seconds)).toFixed(1)} closed-form evaluations`);
+  console.log(`baseline, textbook closed form in the same run: ${baselineRate.toFixed(0)} per second; the fast core takes ${(baselineRate / (calls / seconds)).toFixed(2)} times its time`);
   const worstClosedForm = Math.max(...cases.map((c) => Math.abs(closedForm(c) / (c.extrapolated.slipLength as number) - 1)));
   console.log(`textbook closed form against the field solver on the same cases: largest error ${(worstClosedForm * 100).toFixed(1)} %`);
 }
