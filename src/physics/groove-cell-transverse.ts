@@ -34,10 +34,11 @@
  * Accuracy (measured, docs/slip-core-transverse.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
  * 45 functions); cavity-table mesh ≤ 1.1e-5 (spacing halved); table interpolation ≤ 2e-5 across w/P and
  * ≤ 3e-4 across d/w (held-out nodes, worst near d/w ≈ 1); N → 0 against Philip ≤ 5e-6; against the field
- * solver over 49 cases (fixtures/slip/transverse_field_reference.json) within that solver's own error, and
- * against FreeFEM on the whole cell (fixtures/slip/transverse_cell_freefem.json) for every returned quantity.
+ * solver on the 48 of 49 cases it resolves (fixtures/slip/transverse_field_reference.json): ≤ 0.19 %, and
+ * against FreeFEM on the whole cell (fixtures/slip/transverse_cell_freefem.json, 8 cases) ≤ 0.07 % in b_⊥ and
+ * ≤ 0.3 % in the other returned quantities.
  * Cost: a 32 × 32 LU and about 3 000 table entries interpolated, some 3e4 floating-point operations; about
- * 2 000 evaluations per second per core measured under a load average of 15 on 2 cores
+ * 2 000–4 300 evaluations per second per core measured under a load average of 11–15 on 2 cores
  * (bench/slip-core-transverse.ts, where the ratio to the textbook closed form is printed).
  *
  * Range: w/P 0.02–0.98, d/w 0.01–10, N = 0 and 1e-4–1e4 (validated). Outside it a result is still
