@@ -38,7 +38,7 @@
  * against FreeFEM on the whole cell (fixtures/slip/transverse_cell_freefem.json, 8 cases) ≤ 0.07 % in b_⊥ and
  * ≤ 0.3 % in the other returned quantities.
  * Cost: a 32 × 32 LU and about 3 000 table entries interpolated, some 3e4 floating-point operations; about
- * 2 000–4 300 evaluations per second per core measured under a load average of 11–15 on 2 cores
+ * 2 000–7 300 evaluations per second per core measured under a load average of 11–15 on 2 cores
  * (bench/slip-core-transverse.ts, where the ratio to the textbook closed form is printed).
  *
  * Range: w/P 0.02–0.98, d/w 0.01–10, N = 0 and 1e-4–1e4 (validated). Outside it a result is still
