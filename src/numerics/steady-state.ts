@@ -33,8 +33,12 @@ export interface SteadyStateProblem {
   accumulationDerivative(x: Float64Array, out: Float64Array): void;
   /** Solve (J(x) + diag(shift)) δ = rhs (shift null = plain Jacobian); null if singular. */
   solveLinearised(x: Float64Array, shift: Float64Array | null, rhs: Float64Array): Float64Array | null;
-  /** Largest fraction t ∈ (0, 1] of a step that keeps x + t·step physically admissible (default 1). */
-  stepLimit?(x: Float64Array, step: Float64Array): number;
+  /**
+   * Move a trial point back into the physically admissible set, component by
+   * component, given the current point x (a projected step); return true if
+   * anything changed. Default: every point is admissible.
+   */
+  project?(x: Float64Array, trial: Float64Array): boolean;
 }
 
 export interface SteadyStateOptions {
@@ -118,12 +122,13 @@ function newton(problem: SteadyStateProblem, x0: Float64Array, o: Required<Stead
     for (let i = 0; i < n; i++) minusR[i] = -e.r[i];
     const step = problem.solveLinearised(x, null, minusR);
     if (!step) return { x, converged: false, iterations: iter, residualNorm: e.normInf };
-    const limit = problem.stepLimit ? problem.stepLimit(x, step) : 1;
-    let t = limit;
+    let t = 1;
+    let projected = false;
     let accepted: Float64Array | null = null;
     for (let k = 0; k < 12; k++) {
       const trial = new Float64Array(n);
       for (let i = 0; i < n; i++) trial[i] = x[i] + t * step[i];
+      projected = problem.project ? problem.project(x, trial) : false;
       const et = evaluate(problem, trial, e.scale);
       if (Number.isFinite(et.norm2) && et.norm2 <= (1 - 1e-4 * t) * e.norm2) {
         accepted = trial;
@@ -131,7 +136,7 @@ function newton(problem: SteadyStateProblem, x0: Float64Array, o: Required<Stead
       }
       t *= 0.5;
     }
-    const full = t === 1 && limit === 1;
+    const full = t === 1 && !projected;
     if (!accepted) {
       // No decrease along the Newton direction: at the rounding floor this is convergence.
       const done = e.normInf <= o.floorTolerance && stepIsSmall(x, step, o.typicalSize, 1e3 * o.stepTolerance);
@@ -202,9 +207,9 @@ export function solveSteadyState(problem: SteadyStateProblem, x0: ArrayLike<numb
     let trial: Float64Array | null = null;
     let et: Evaluated | null = null;
     if (step) {
-      const limit = problem.stepLimit ? problem.stepLimit(x, step) : 1;
       trial = new Float64Array(n);
-      for (let i = 0; i < n; i++) trial[i] = x[i] + limit * step[i];
+      for (let i = 0; i < n; i++) trial[i] = x[i] + step[i];
+      if (problem.project) problem.project(x, trial);
       et = evaluate(problem, trial);
     }
     // Reject a step that leaves the domain or blows the residual up; retry with a shorter pseudo step.

@@ -34,6 +34,7 @@ import {
   type ExchangeState,
   type InterfaceProfile,
   type SurfactantSolveConditions,
+  keepSurfaceExcessPositive,
 } from './surfactant-transport.js';
 
 export interface LongWaveInput extends SurfactantSolveConditions {
@@ -145,6 +146,7 @@ function grooveProblem(
     accumulationDerivative(v, out) {
       for (let i = 0; i < N; i++) out[i] = volume[i] * surfaceExcessRatioSlope(v[i], ex);
     },
+    project: keepSurfaceExcessPositive,
     solveLinearised(v, shift, rhs) {
       const { q, f } = faces(v);
       const lower = new Float64Array(N);

@@ -44,7 +44,7 @@
  * Non-convergence throws ConvergenceError with the iteration count.
  */
 import { factorDense, solveDense, solveDenseInPlace, solveFactored } from '../numerics/linalg.js';
-import { solveSteadyState, type SteadyStateProblem } from '../numerics/steady-state.js';
+import { solveSteadyState, type SteadyStateProblem, type SteadyStateResult } from '../numerics/steady-state.js';
 import { ConvergenceError, DomainError, GAS_CONSTANT } from './common.js';
 import {
   diffusiveLayerThickness,
@@ -56,6 +56,7 @@ import {
   type ExchangeState,
   type InterfaceProfile,
   type SurfactantSolveConditions,
+  keepSurfaceExcessPositive,
 } from './surfactant-transport.js';
 
 export { diffusiveLayerThickness, type InterfaceProfile, type SurfactantSolveConditions } from './surfactant-transport.js';
@@ -220,13 +221,6 @@ function solveLinearised(op: GapOperator, Ma: number, eps: number, ex: ExchangeS
   return solveDense(A, b, Ng);
 }
 
-/** Step fraction that keeps every Γ ≥ 0 (v ≥ 0): no unknown may fall below a tenth of its value in one step. */
-export function keepSurfaceExcessPositive(v: Float64Array, step: Float64Array): number {
-  let t = 1;
-  for (let i = 0; i < v.length; i++) if (step[i] < 0 && v[i] > 0) t = Math.min(t, (0.9 * v[i]) / -step[i]);
-  return t;
-}
-
 /** The transport equations in v with the velocity eliminated (module comment). */
 function transverseProblem(op: GapOperator, marangoni: number, eps: number, ex: ExchangeState, timeScale: number): SteadyStateProblem & { velocity(v: Float64Array): Float64Array } {
   const { Ng, h, clean, green, faceGreen } = op;
@@ -275,7 +269,7 @@ function transverseProblem(op: GapOperator, marangoni: number, eps: number, ex: 
     accumulationDerivative(v, out) {
       for (let i = 0; i < Ng; i++) out[i] = h * surfaceExcessRatioSlope(v[i], ex);
     },
-    stepLimit: keepSurfaceExcessPositive,
+    project: keepSurfaceExcessPositive,
     solveLinearised(v, shift, rhs) {
       const { q, f } = faces(v);
       J.fill(0);
@@ -383,31 +377,32 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
     linearSlipRetained = sum / cleanSum;
   }
 
-  // Start: a warm start on the same grid, else the linearised profile mapped to v (coverage kept admissible).
-  const start = new Float64Array(Ng).fill(1);
-  if (input.warmStart && input.warmStart.cells === N && input.warmStart.gapCells === Ng) {
-    start.set(input.warmStart.tension);
-  } else if (linearQ) {
+  // Starts, cheapest first: a warm start on the same grid (Newton), the linearised profile mapped to v with
+  // the coverage kept admissible (Newton), then the pseudo-time march from the undisturbed interface, which
+  // is the physical start-up of the flow over a freshly equilibrated interface.
+  const starts: Float64Array[] = [];
+  if (input.warmStart && input.warmStart.cells === N && input.warmStart.gapCells === Ng) starts.push(Float64Array.from(input.warmStart.tension));
+  if (linearQ) {
+    const mapped = new Float64Array(Ng);
     for (let i = 0; i < Ng; i++) {
       const coverage = Math.min(Math.max(ex.equilibriumCoverage * linearQ[i], 1e-6 * ex.equilibriumCoverage), 1 - 1e-3 * (1 - ex.equilibriumCoverage));
-      start[i] = -Math.log1p(-coverage) / ex.equilibriumTension;
+      mapped[i] = -Math.log1p(-coverage) / ex.equilibriumTension;
     }
+    starts.push(mapped);
   }
   const problem = transverseProblem(op, marangoni, eps, ex, timeScale);
   let maxClean = 0;
   for (let i = 0; i < Ng; i++) maxClean = Math.max(maxClean, clean[i]);
-  const solveOptions = {
-    tolerance: tol,
-    maxNewtonIterations: Math.min(30, budget),
-    maxPseudoSteps: budget,
-    initialPseudoStep: (0.1 * h) / Math.max(maxClean, eps / h),
-  };
-  // Newton from the start; failing that, the pseudo-time march from the undisturbed interface, which is
-  // the physical start-up of the flow over a freshly equilibrated interface.
-  let sol = solveSteadyState(problem, start, { ...solveOptions, maxPseudoSteps: 0 });
-  let iterations = sol.iterations;
-  if (!sol.converged) {
-    sol = solveSteadyState(problem, new Float64Array(Ng).fill(1), { ...solveOptions, maxNewtonIterations: 0 });
+  const solveOptions = { tolerance: tol, maxNewtonIterations: Math.min(20, budget), maxPseudoSteps: 0, initialPseudoStep: h / Math.max(maxClean, eps / h) };
+  let iterations = 0;
+  let sol: SteadyStateResult | undefined;
+  for (const start of starts) {
+    sol = solveSteadyState(problem, start, solveOptions);
+    iterations += sol.iterations;
+    if (sol.converged || iterations >= budget) break;
+  }
+  if (!sol || !sol.converged) {
+    sol = solveSteadyState(problem, new Float64Array(Ng).fill(1), { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: Math.max(1, budget - iterations) });
     iterations += sol.iterations;
   }
   if (!sol.converged) {

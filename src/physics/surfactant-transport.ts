@@ -142,3 +142,19 @@ export function fittedFlux(qa: number, qb: number, velocity: number, spacing: nu
     magnitude: g * (Math.abs(bm * qa) + Math.abs(bp * qb)),
   };
 }
+
+/**
+ * Projection of a trial iterate that keeps every Γ ≥ 0 (v ≥ 0): no unknown
+ * may fall below a tenth of its current value in one step (component-wise, so
+ * one cell heading for a negative surface excess does not stall the others).
+ */
+export function keepSurfaceExcessPositive(v: Float64Array, trial: Float64Array): boolean {
+  let changed = false;
+  for (let i = 0; i < v.length; i++) {
+    if (v[i] > 0 && trial[i] < 0.1 * v[i]) {
+      trial[i] = 0.1 * v[i];
+      changed = true;
+    }
+  }
+  return changed;
+}
