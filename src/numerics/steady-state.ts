@@ -97,6 +97,11 @@ function evaluate(problem: SteadyStateProblem, x: Float64Array, scaleAt?: Float6
   return { r, scale, normInf, norm2: Math.sqrt(sum) };
 }
 
+/** max_i |R_i(x)|/scale_i(x): the convergence measure, e.g. to rank candidate starting points. */
+export function relativeResidual(problem: SteadyStateProblem, x: Float64Array): number {
+  return evaluate(problem, x).normInf;
+}
+
 function stepIsSmall(x: Float64Array, step: Float64Array, typical: number, tolerance: number): boolean {
   for (let i = 0; i < x.length; i++) if (Math.abs(step[i]) > tolerance * Math.max(Math.abs(x[i]), typical)) return false;
   return true;

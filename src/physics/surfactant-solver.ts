@@ -43,8 +43,9 @@
  *
  * Non-convergence throws ConvergenceError with the iteration count.
  */
-import { factorDense, solveDense, solveDenseInPlace, solveFactored } from '../numerics/linalg.js';
-import { solveSteadyState, type SteadyStateProblem, type SteadyStateResult } from '../numerics/steady-state.js';
+import { solveDense, solveDenseInPlace } from '../numerics/linalg.js';
+import { invertSymmetricToeplitz } from '../numerics/toeplitz.js';
+import { relativeResidual, solveSteadyState, type SteadyStateProblem, type SteadyStateResult } from '../numerics/steady-state.js';
 import { ConvergenceError, DomainError, GAS_CONSTANT } from './common.js';
 import {
   diffusiveLayerThickness,
@@ -77,6 +78,8 @@ export interface TransverseSolverInput extends SurfactantSolveConditions {
   cells?: number;
   /** State of an earlier solve on the same grid (e.g. a neighbouring concentration) to start from. */
   warmStart?: InterfaceState;
+  /** Solve and report the linearised problem (default true); false skips it unless Newton needs it as a start. */
+  reportLinearised?: boolean;
 }
 
 /** Tension-variable profile v on the gap cells (see surfactant-transport.ts); opaque to callers. */
@@ -84,12 +87,14 @@ export interface InterfaceState {
   cells: number;
   gapCells: number;
   tension: Float64Array;
+  /** s_eq = ln(1 + K c0) of that solve. */
+  equilibriumTension: number;
 }
 
 export interface InterfaceSolution {
   /** b_surfactant/b_clean on the same grid. */
   slipRetained: number;
-  /** Same from the linearised problem. */
+  /** Same from the linearised problem (NaN only when `reportLinearised: false` and it was not needed). */
   linearSlipRetained: number;
   /** Clean slip length of the discrete problem, m (compare with Philip). */
   cleanSlipLength: number;
@@ -170,24 +175,28 @@ function gapOperator(N: number, Ng: number, drag: number): GapOperator {
   }
   const h = 1 / N;
   const stencil = absoluteDerivativeStencil(N);
-  const M = new Float64Array(Ng * Ng);
-  for (let i = 0; i < Ng; i++) for (let j = 0; j < Ng; j++) M[i * Ng + j] = 2 * stencil[Math.abs(i - j)] + (i === j ? drag : 0);
-  const factors = factorDense(M, Ng);
-  if (!factors) throw new ConvergenceError('clean interface system is singular', 0, Infinity);
-  const clean = solveFactored(factors, new Float64Array(Ng).fill(1));
+  // M = 2|∂| + drag on the gap is symmetric Toeplitz and positive definite: its inverse in O(Ng²).
+  const firstRow = new Float64Array(Ng);
+  for (let k = 0; k < Ng; k++) firstRow[k] = 2 * stencil[k] + (k === 0 ? drag : 0);
+  const inverse = invertSymmetricToeplitz(firstRow);
+  if (!inverse) throw new ConvergenceError('clean interface system is singular', 0, Infinity);
+  const clean = new Float64Array(Ng);
   let cleanSum = 0;
-  for (let i = 0; i < Ng; i++) cleanSum += clean[i];
+  for (let i = 0; i < Ng; i++) {
+    let acc = 0;
+    for (let j = 0; j < Ng; j++) acc += inverse[i * Ng + j];
+    clean[i] = acc;
+    cleanSum += acc;
+  }
+  // G = M⁻¹D with D the sparse gradient stencil: column by column from the columns of M⁻¹.
   const green = new Float64Array(Ng * Ng);
-  const column = new Float64Array(Ng);
-  for (let j = 0; j < Ng; j++) {
-    column.fill(0);
+  for (let k = 0; k < Ng; k++) {
+    const [l, r, wgt] = gradientStencil(k, Ng, h);
     for (let i = 0; i < Ng; i++) {
-      const [l, r, wgt] = gradientStencil(i, Ng, h);
-      if (r === j) column[i] += wgt;
-      if (l === j) column[i] -= wgt;
+      const m = inverse[i * Ng + k] * wgt;
+      green[i * Ng + r] += m;
+      green[i * Ng + l] -= m;
     }
-    const g = solveFactored(factors, column);
-    for (let i = 0; i < Ng; i++) green[i * Ng + j] = g[i];
   }
   const faceGreen = new Float64Array((Ng - 1) * Ng);
   for (let a = 0; a < Ng - 1; a++) for (let j = 0; j < Ng; j++) faceGreen[a * Ng + j] = 0.5 * (green[a * Ng + j] + green[(a + 1) * Ng + j]);
@@ -361,43 +370,62 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
       residual: 0,
       stagnantCap: false,
       continuationSteps: 0,
-      state: { cells: N, gapCells: Ng, tension: v },
+      state: { cells: N, gapCells: Ng, tension: v, equilibriumTension: ex.equilibriumTension },
     };
   }
 
-  const linearQ = solveLinearised(op, Ma, eps, ex, timeScale);
-  let linearSlipRetained = NaN;
-  if (linearQ) {
-    let sum = 0;
-    for (let i = 0; i < Ng; i++) {
-      let acc = 0;
-      for (let j = 0; j < Ng; j++) acc += op.green[i * Ng + j] * linearQ[j];
-      sum += clean[i] - Ma * ex.k * acc;
-    }
-    linearSlipRetained = sum / cleanSum;
-  }
-
-  // Starts, cheapest first: a warm start on the same grid (Newton), the linearised profile mapped to v with
-  // the coverage kept admissible (Newton), then the pseudo-time march from the undisturbed interface, which
-  // is the physical start-up of the flow over a freshly equilibrated interface.
-  const starts: Float64Array[] = [];
-  if (input.warmStart && input.warmStart.cells === N && input.warmStart.gapCells === Ng) starts.push(Float64Array.from(input.warmStart.tension));
-  if (linearQ) {
-    const mapped = new Float64Array(Ng);
-    for (let i = 0; i < Ng; i++) {
-      const coverage = Math.min(Math.max(ex.equilibriumCoverage * linearQ[i], 1e-6 * ex.equilibriumCoverage), 1 - 1e-3 * (1 - ex.equilibriumCoverage));
-      mapped[i] = -Math.log1p(-coverage) / ex.equilibriumTension;
-    }
-    starts.push(mapped);
-  }
   const problem = transverseProblem(op, marangoni, eps, ex, timeScale);
   let maxClean = 0;
   for (let i = 0; i < Ng; i++) maxClean = Math.max(maxClean, clean[i]);
   const solveOptions = { tolerance: tol, maxNewtonIterations: Math.min(20, budget), maxPseudoSteps: 0, initialPseudoStep: h / Math.max(maxClean, eps / h) };
+
+  // The linearised problem (about the uniform equilibrium): reported, and a start for Newton.
+  let linearQ: Float64Array | null | undefined;
+  let linearSlipRetained = NaN;
+  const linearised = (): Float64Array | null => {
+    if (linearQ !== undefined) return linearQ;
+    linearQ = solveLinearised(op, Ma, eps, ex, timeScale);
+    if (linearQ) {
+      let sum = 0;
+      for (let i = 0; i < Ng; i++) {
+        let acc = 0;
+        for (let j = 0; j < Ng; j++) acc += op.green[i * Ng + j] * linearQ[j];
+        sum += clean[i] - Ma * ex.k * acc;
+      }
+      linearSlipRetained = sum / cleanSum;
+    }
+    return linearQ;
+  };
+  if (input.reportLinearised !== false) linearised();
+  const linearStart = (): Float64Array | null => {
+    const q = linearised();
+    if (!q) return null;
+    const mapped = new Float64Array(Ng);
+    for (let i = 0; i < Ng; i++) {
+      const coverage = Math.min(Math.max(ex.equilibriumCoverage * q[i], 1e-6 * ex.equilibriumCoverage), 1 - 1e-3 * (1 - ex.equilibriumCoverage));
+      mapped[i] = -Math.log1p(-coverage) / ex.equilibriumTension;
+    }
+    return mapped;
+  };
+
+  // Starts: a warm start on the same grid, taken either as the same profile of v or as the same tension
+  // profile s = v·s_eq (whichever has the smaller residual), then the linearised profile mapped to v with
+  // the coverage kept admissible; Newton from each. Last, the pseudo-time march from the undisturbed
+  // interface, which is the physical start-up of the flow over a freshly equilibrated interface.
+  const starts: Array<() => Float64Array | null> = [];
+  const warm = input.warmStart;
+  if (warm && warm.cells === N && warm.gapCells === Ng) {
+    const same = Float64Array.from(warm.tension);
+    const rescaled = same.map((x) => (x * warm.equilibriumTension) / ex.equilibriumTension);
+    starts.push(() => (relativeResidual(problem, rescaled) < relativeResidual(problem, same) ? rescaled : same));
+  }
+  starts.push(linearStart);
   let iterations = 0;
   let sol: SteadyStateResult | undefined;
   for (const start of starts) {
-    sol = solveSteadyState(problem, start, solveOptions);
+    const x0 = start();
+    if (!x0) continue;
+    sol = solveSteadyState(problem, x0, solveOptions);
     iterations += sol.iterations;
     if (sol.converged || iterations >= budget) break;
   }
@@ -433,6 +461,6 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
     residual: sol.residualNorm,
     stagnantCap: restCells >= 0.1 * Ng && restCells < Ng && maxRatio > 0.3,
     continuationSteps: sol.pseudoSteps,
-    state: { cells: N, gapCells: Ng, tension: Float64Array.from(v) },
+    state: { cells: N, gapCells: Ng, tension: Float64Array.from(v), equilibriumTension: ex.equilibriumTension },
   };
 }

@@ -264,10 +264,26 @@ function uniformProfile(pr: Prepared, reduction: number, tauW: number): Interfac
   return { position, velocity, cleanVelocity, surfaceExcess: [], marangoniStress, tensionChange };
 }
 
-/** Solver states of the last solve, so a neighbouring concentration starts close to its answer. */
+/** Solver states of earlier solves, so a neighbouring concentration starts close to its answer. */
 interface WarmStarts {
-  transverse?: InterfaceState;
-  groove?: GrooveState;
+  solved: Array<{ logConcentration: number; transverse?: InterfaceState; groove?: GrooveState }>;
+}
+
+/** The stored state of the nearest concentration (in log c) that has the wanted kind. */
+function nearestState<K extends 'transverse' | 'groove'>(warm: WarmStarts, c: number, kind: K): WarmStarts['solved'][number][K] | undefined {
+  const target = Math.log(c);
+  let best: WarmStarts['solved'][number][K] | undefined;
+  let distance = Infinity;
+  for (const entry of warm.solved) {
+    const state = entry[kind];
+    if (state === undefined) continue;
+    const d = Math.abs(entry.logConcentration - target);
+    if (d < distance) {
+      distance = d;
+      best = state;
+    }
+  }
+  return best;
 }
 
 interface PointRun {
@@ -333,6 +349,10 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
   let drop: number;
   let solverInfo: SurfactantPoint['solver'];
   if (method === 'solver') {
+    const warmTransverse = c > 0 ? nearestState(run.warm, c, 'transverse') : undefined;
+    const warmGroove = c > 0 ? nearestState(run.warm, c, 'groove') : undefined;
+    const solved: WarmStarts['solved'][number] = { logConcentration: Math.log(c) };
+    if (c > 0) run.warm.solved.push(solved);
     try {
       const tol = input.solver?.tolerance ?? 1e-10;
       let iterations = 0;
@@ -358,9 +378,10 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
           temperature: T,
           cells: run.cells ?? input.solver?.cells ?? 256,
           tolerance: tol,
-          ...(run.warm.transverse ? { warmStart: run.warm.transverse } : {}),
+          ...(warmTransverse ? { warmStart: warmTransverse } : {}),
+          ...(run.slipOnly ? { reportLinearised: false } : {}),
         });
-        run.warm.transverse = sol.state;
+        solved.transverse = sol.state;
         bPerp = sol.slipRetained * clean.slipLengthTransverse;
         interfaceProfile = sol.profile;
         stagnant = sol.stagnantCap;
@@ -381,9 +402,9 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
           temperature: T,
           cells: input.solver?.grooveCells ?? 200,
           tolerance: tol,
-          ...(run.warm.groove ? { warmStart: run.warm.groove } : {}),
+          ...(warmGroove ? { warmStart: warmGroove } : {}),
         });
-        run.warm.groove = lw.state;
+        solved.groove = lw.state;
         bPar = lw.slipRetained * clean.slipLengthLongitudinal;
         grooveProfile = lw.profile;
         stagnant = stagnant || lw.stagnantCap;
@@ -474,7 +495,7 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   if (input.grooveLength !== undefined && input.grooveLength < 10 * pr.pitch) {
     notes.warn('long-wave-short-groove', 'groove length below 10 pitches: the long-wave groove model is outside its range', 'caution');
   }
-  const warm: WarmStarts = {};
+  const warm: WarmStarts = { solved: [] };
   const points = list.map((c) => evaluatePoint(input, pr, c, notes, { warm }));
   for (const p of points) {
     if (!p.validity.dilute) notes.warn('not-dilute', `K c = ${p.equilibrium.dimensionlessConcentration.toPrecision(3)} > 1: outside the dilute range of the scaling theory`, 'caution');
@@ -491,7 +512,7 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   const nCurve = Math.max(3, Math.min(101, Math.round(input.curve?.points ?? 21)));
   const quiet = new Notes();
   const curveMethod: 'scaling' | 'solver' | undefined = input.method === 'auto' ? undefined : input.method;
-  const curveRun: PointRun = { cells: Math.min(input.solver?.cells ?? 256, 128), warm: {}, slipOnly: true, ...(curveMethod ? { forceMethod: curveMethod } : {}) };
+  const curveRun: PointRun = { cells: Math.min(input.solver?.cells ?? 256, 128), warm: { solved: [] }, slipOnly: true, ...(curveMethod ? { forceMethod: curveMethod } : {}) };
   const retainedAt = (c: number): number => evaluatePoint(input, pr, c, quiet, curveRun).slipRetained;
   const cs: number[] = [];
   const rs: number[] = [];
