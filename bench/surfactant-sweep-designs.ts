@@ -39,6 +39,15 @@ export function loadSweepDesigns(): SweepDesign[] {
   return (JSON.parse(text) as { designs: SweepDesign[] }).designs;
 }
 
+/**
+ * One design in every `stride`, the offset cycling from block to block so the
+ * subset alternates surfactants and flow angles (ids alternate both).
+ */
+export function sweepSubset(designs: SweepDesign[], stride: number): SweepDesign[] {
+  if (stride <= 1) return designs;
+  return designs.filter((_, i) => i % stride === Math.floor(i / stride) % stride);
+}
+
 /** Water at 25 °C (demo values: density, viscosity and surface tension rounded from the catalogue). */
 const WATER_VISCOSITY = 0.00089;
 const TEMPERATURE = 298.15;

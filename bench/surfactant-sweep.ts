@@ -10,7 +10,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
-import { loadSweepDesigns, runSweepDesign, type SweepOutcome } from './surfactant-sweep-designs.js';
+import { loadSweepDesigns, runSweepDesign, sweepSubset, type SweepOutcome } from './surfactant-sweep-designs.js';
 
 const args = process.argv.slice(2);
 const every = Number(args[args.indexOf('--every') + 1]) || 1;
@@ -23,7 +23,7 @@ const quantile = (xs: number[], q: number): number => {
 };
 const fmt = (x: number): string => (Number.isFinite(x) ? x.toFixed(0).padStart(6) : '     -');
 
-const designs = loadSweepDesigns().filter((_, i) => i % every === 0);
+const designs = sweepSubset(loadSweepDesigns(), every);
 console.log(`Surfactant sweep: ${designs.length} designs (every ${every}), Node ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown'})`);
 // Warm-up (JIT) on one design, not counted.
 runSweepDesign(designs[0]);

@@ -76,8 +76,12 @@ export interface TransverseSolverInput extends SurfactantSolveConditions {
   localSlipLength?: number;
   /** Requested cells per period (default 256; the solver picks N ≥ this so the gap is whole cells). */
   cells?: number;
-  /** State of an earlier solve on the same grid (e.g. a neighbouring concentration) to start from. */
-  warmStart?: InterfaceState;
+  /**
+   * States of earlier solves on the same grid (e.g. neighbouring concentrations, or a prediction from
+   * them) to start from; each is tried as the same profile of v and as the same tension profile, and
+   * Newton starts from the candidate with the smallest residual.
+   */
+  warmStart?: InterfaceState | InterfaceState[];
   /** Solve and report the linearised problem (default true); false skips it unless Newton needs it as a start. */
   reportLinearised?: boolean;
 }
@@ -413,26 +417,44 @@ export function solveTransverseInterface(input: TransverseSolverInput): Interfac
   // the coverage kept admissible; Newton from each. Last, the pseudo-time march from the undisturbed
   // interface, which is the physical start-up of the flow over a freshly equilibrated interface.
   const starts: Array<() => Float64Array | null> = [];
-  const warm = input.warmStart;
-  if (warm && warm.cells === N && warm.gapCells === Ng) {
-    const same = Float64Array.from(warm.tension);
-    const rescaled = same.map((x) => (x * warm.equilibriumTension) / ex.equilibriumTension);
-    starts.push(() => (relativeResidual(problem, rescaled) < relativeResidual(problem, same) ? rescaled : same));
+  const warm = (Array.isArray(input.warmStart) ? input.warmStart : input.warmStart ? [input.warmStart] : []).filter((w) => w.cells === N && w.gapCells === Ng);
+  if (warm.length > 0) {
+    starts.push(() => {
+      let best: Float64Array | null = null;
+      let bestNorm = Infinity;
+      for (const w of warm) {
+        for (const candidate of [Float64Array.from(w.tension), w.tension.map((x) => (x * w.equilibriumTension) / ex.equilibriumTension)]) {
+          const norm = relativeResidual(problem, candidate);
+          if (norm < bestNorm) {
+            bestNorm = norm;
+            best = candidate;
+          }
+        }
+      }
+      return best;
+    });
   }
   starts.push(linearStart);
   let iterations = 0;
   let sol: SteadyStateResult | undefined;
+  const tried: Float64Array[] = [];
   for (const start of starts) {
     const x0 = start();
     if (!x0) continue;
+    tried.push(x0);
     sol = solveSteadyState(problem, x0, solveOptions);
     iterations += sol.iterations;
     if (sol.converged || iterations >= budget) break;
   }
-  if (!sol || !sol.converged) {
-    sol = solveSteadyState(problem, new Float64Array(Ng).fill(1), { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: Math.max(1, budget - iterations) });
+  // Pseudo-time march: from the warm start if there is one (the interface equilibrated at a neighbouring
+  // concentration is as physical a start as the undisturbed one, and closer), then from the undisturbed one.
+  const marchStarts = [...(warm.length > 0 && tried.length > 0 ? [tried[0]] : []), new Float64Array(Ng).fill(1)];
+  for (const x0 of marchStarts) {
+    if (sol?.converged || iterations >= budget) break;
+    sol = solveSteadyState(problem, x0, { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: Math.max(1, budget - iterations) });
     iterations += sol.iterations;
   }
+  if (!sol) sol = solveSteadyState(problem, new Float64Array(Ng).fill(1), { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: budget });
   if (!sol.converged) {
     throw new ConvergenceError('surfactant interface solver (Newton, then pseudo-transient continuation) did not converge', iterations, sol.residualNorm);
   }

@@ -271,19 +271,32 @@ interface WarmStarts {
 
 /** The stored state of the nearest concentration (in log c) that has the wanted kind. */
 function nearestState<K extends 'transverse' | 'groove'>(warm: WarmStarts, c: number, kind: K): WarmStarts['solved'][number][K] | undefined {
+  return nearestEntries(warm, c, kind)[0]?.[kind];
+}
+
+function nearestEntries(warm: WarmStarts, c: number, kind: 'transverse' | 'groove'): WarmStarts['solved'] {
   const target = Math.log(c);
-  let best: WarmStarts['solved'][number][K] | undefined;
-  let distance = Infinity;
-  for (const entry of warm.solved) {
-    const state = entry[kind];
-    if (state === undefined) continue;
-    const d = Math.abs(entry.logConcentration - target);
-    if (d < distance) {
-      distance = d;
-      best = state;
-    }
+  return warm.solved.filter((e) => e[kind] !== undefined).sort((a, b) => Math.abs(a.logConcentration - target) - Math.abs(b.logConcentration - target));
+}
+
+/**
+ * Transverse starts for concentration c: the nearest solved state and the secant prediction in log c
+ * from the two nearest (tension profile s = v·s_eq extrapolated linearly; ours).
+ */
+function transverseStarts(warm: WarmStarts, c: number): InterfaceState[] {
+  const near = nearestEntries(warm, c, 'transverse');
+  const out: InterfaceState[] = [];
+  const a = near[0];
+  const b = near[1];
+  if (a?.transverse) out.push(a.transverse);
+  if (a?.transverse && b?.transverse && a.transverse.gapCells === b.transverse.gapCells && a.logConcentration !== b.logConcentration) {
+    const t = (Math.log(c) - a.logConcentration) / (a.logConcentration - b.logConcentration);
+    const sa = a.transverse;
+    const sb = b.transverse;
+    const tension = sa.tension.map((v, i) => Math.max(0, v * sa.equilibriumTension + t * (v * sa.equilibriumTension - sb.tension[i] * sb.equilibriumTension)));
+    out.push({ cells: sa.cells, gapCells: sa.gapCells, tension, equilibriumTension: 1 });
   }
-  return best;
+  return out;
 }
 
 interface PointRun {
@@ -349,7 +362,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
   let drop: number;
   let solverInfo: SurfactantPoint['solver'];
   if (method === 'solver') {
-    const warmTransverse = c > 0 ? nearestState(run.warm, c, 'transverse') : undefined;
+    const warmTransverse = c > 0 ? transverseStarts(run.warm, c) : [];
     const warmGroove = c > 0 ? nearestState(run.warm, c, 'groove') : undefined;
     const solved: WarmStarts['solved'][number] = { logConcentration: Math.log(c) };
     if (c > 0) run.warm.solved.push(solved);
@@ -378,7 +391,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
           temperature: T,
           cells: run.cells ?? input.solver?.cells ?? 256,
           tolerance: tol,
-          ...(warmTransverse ? { warmStart: warmTransverse } : {}),
+          ...(warmTransverse.length > 0 ? { warmStart: warmTransverse } : {}),
           ...(run.slipOnly ? { reportLinearised: false } : {}),
         });
         solved.transverse = sol.state;
@@ -512,7 +525,10 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   const nCurve = Math.max(3, Math.min(101, Math.round(input.curve?.points ?? 21)));
   const quiet = new Notes();
   const curveMethod: 'scaling' | 'solver' | undefined = input.method === 'auto' ? undefined : input.method;
-  const curveRun: PointRun = { cells: Math.min(input.solver?.cells ?? 256, 128), warm: { solved: [] }, slipOnly: true, ...(curveMethod ? { forceMethod: curveMethod } : {}) };
+  // Curve and half-slip root: about 64 cells on the gap (128 per period at φ = 0.5), so their cost does not
+  // grow with the groove fraction; never finer than the points.
+  const curveCells = Math.min(input.solver?.cells ?? 256, Math.max(32, Math.round(64 / pr.phi)));
+  const curveRun: PointRun = { cells: curveCells, warm: { solved: [] }, slipOnly: true, ...(curveMethod ? { forceMethod: curveMethod } : {}) };
   const retainedAt = (c: number): number => evaluatePoint(input, pr, c, quiet, curveRun).slipRetained;
   const cs: number[] = [];
   const rs: number[] = [];
