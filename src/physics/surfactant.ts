@@ -96,8 +96,8 @@ export interface SurfactantInput {
   cleanTension?: number;
   /** Curve of slip retained against concentration: number of points and range (mol/m³). */
   curve?: { points?: number; minimum?: number; maximum?: number };
-  /** Solver resolution and tolerance. */
-  solver?: { cells?: number; grooveCells?: number; tolerance?: number };
+  /** Solver resolution, tolerance and iteration budget (linear solves per solve, default 400). */
+  solver?: { cells?: number; grooveCells?: number; tolerance?: number; maxIterations?: number };
 }
 
 export interface SurfactantValidity {
@@ -391,6 +391,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
           temperature: T,
           cells: run.cells ?? input.solver?.cells ?? 256,
           tolerance: tol,
+          ...(input.solver?.maxIterations !== undefined ? { maxIterations: input.solver.maxIterations } : {}),
           ...(warmTransverse.length > 0 ? { warmStart: warmTransverse } : {}),
           ...(run.slipOnly ? { reportLinearised: false } : {}),
         });
@@ -415,6 +416,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
           temperature: T,
           cells: input.solver?.grooveCells ?? 200,
           tolerance: tol,
+          ...(input.solver?.maxIterations !== undefined ? { maxIterations: input.solver.maxIterations } : {}),
           ...(warmGroove ? { warmStart: warmGroove } : {}),
         });
         solved.groove = lw.state;
