@@ -53,22 +53,12 @@ const WATER_VISCOSITY = 0.00089;
 const TEMPERATURE = 298.15;
 
 export function sweepScenario(d: SweepDesign): Scenario {
-  const fluid = (id: string, density: number, viscosity: number, extra = {}) => ({
-    id,
-    name: id,
-    temperature: TEMPERATURE,
-    density,
-    viscosity,
-    origins: {},
-    references: [],
-    warnings: [],
-    ...extra,
-  });
   const rho = 997;
+  const common = { temperature: TEMPERATURE, origins: {}, references: [], warnings: [] };
   return {
     texture: { grooveWidth: d.grooveWidth, pitch: d.pitch, grooveDepth: d.grooveDepth, flowAngle: d.flowAngle },
-    lubricant: fluid('lubricant', 960, d.viscosityRatio * WATER_VISCOSITY),
-    workingFluid: fluid('water', rho, WATER_VISCOSITY, { surfaceTension: 0.072 }),
+    lubricant: { ...common, id: 'lubricant', name: 'lubricant', density: 960, viscosity: d.viscosityRatio * WATER_VISCOSITY },
+    workingFluid: { ...common, id: 'water', name: 'water', density: rho, viscosity: WATER_VISCOSITY, surfaceTension: 0.072 },
     flow: {
       kind: 'wall-shear',
       wallShearStress: d.wallShearStress,

@@ -26,15 +26,11 @@ import { solveSteadyState, type SteadyStateProblem } from '../numerics/steady-st
 import { ConvergenceError, DomainError, GAS_CONSTANT } from './common.js';
 import {
   diffusiveLayerThickness,
-  exchangeRate,
   exchangeState,
-  fittedFlux,
-  surfaceExcessRatio,
-  surfaceExcessRatioSlope,
+  transportProblem,
   type ExchangeState,
   type InterfaceProfile,
   type SurfactantSolveConditions,
-  keepSurfaceExcessPositive,
 } from './surfactant-transport.js';
 
 export interface LongWaveInput extends SurfactantSolveConditions {
@@ -118,50 +114,29 @@ function grooveProblem(
   timeScale: number,
 ): SteadyStateProblem & { faceVelocity(v: Float64Array, a: number): number } {
   const N = centres.length;
-  const gap = (a: number): number => centres[a + 1] - centres[a];
-  const faceVelocity = (v: Float64Array, a: number): number => 1 - (marangoni * (v[a + 1] - v[a])) / gap(a);
-  const faces = (v: Float64Array) => {
-    const q = new Float64Array(N);
-    for (let i = 0; i < N; i++) q[i] = surfaceExcessRatio(v[i], ex);
-    const f = [];
-    for (let a = 0; a < N - 1; a++) f.push(fittedFlux(q[a], q[a + 1], faceVelocity(v, a), gap(a), eps));
-    return { q, f };
-  };
+  const spacing = (a: number): number => centres[a + 1] - centres[a];
+  const faceVelocity = (v: Float64Array, a: number): number => 1 - (marangoni * (v[a + 1] - v[a])) / spacing(a);
+  const transport = transportProblem({ volume, spacing, faceVelocity, diffusivity: eps, exchange: ex, timeScale });
   return {
-    size: N,
+    ...transport,
     faceVelocity,
-    residual(v, out) {
-      const { q, f } = faces(v);
-      for (let i = 0; i < N; i++) out[i] = (i < N - 1 ? f[i].flux : 0) - (i > 0 ? f[i - 1].flux : 0) - volume[i] * exchangeRate(q[i], ex, timeScale).rate;
-    },
-    rowScale(v, out) {
-      const { q, f } = faces(v);
-      let top = 0;
-      for (let i = 0; i < N; i++) {
-        out[i] = (i < N - 1 ? f[i].magnitude : 0) + (i > 0 ? f[i - 1].magnitude : 0) + volume[i] * Math.abs(exchangeRate(q[i], ex, timeScale).rate);
-        top = Math.max(top, out[i]);
-      }
-      for (let i = 0; i < N; i++) out[i] = Math.max(out[i], 1e-14 * top, 1e-300);
-    },
-    accumulationDerivative(v, out) {
-      for (let i = 0; i < N; i++) out[i] = volume[i] * surfaceExcessRatioSlope(v[i], ex);
-    },
-    project: keepSurfaceExcessPositive,
     solveLinearised(v, shift, rhs) {
-      const { q, f } = faces(v);
       const lower = new Float64Array(N);
       const diag = new Float64Array(N);
       const upper = new Float64Array(N);
-      for (let i = 0; i < N; i++) diag[i] = -volume[i] * exchangeRate(q[i], ex, timeScale).slope * surfaceExcessRatioSlope(v[i], ex) + (shift ? shift[i] : 0);
+      const add = (i: number, j: number, value: number): void => {
+        if (j === i) diag[i] += value;
+        else if (j === i + 1) upper[i] += value;
+        else lower[i] += value;
+      };
+      const dU = transport.localJacobian(v, shift, add);
+      // U_a depends on v_a (+Ma s_eq/Δx_a) and v_{a+1} (−Ma s_eq/Δx_a) only: the Jacobian stays tridiagonal.
       for (let a = 0; a < N - 1; a++) {
-        const fa = f[a];
-        const dU = (marangoni / gap(a)) * fa.dU;
-        const dLeft = fa.dqa * surfaceExcessRatioSlope(v[a], ex) + dU;
-        const dRight = fa.dqb * surfaceExcessRatioSlope(v[a + 1], ex) - dU;
-        diag[a] += dLeft;
-        upper[a] += dRight;
-        lower[a + 1] -= dLeft;
-        diag[a + 1] -= dRight;
+        const w = (marangoni / spacing(a)) * dU[a];
+        add(a, a, w);
+        add(a, a + 1, -w);
+        add(a + 1, a, -w);
+        add(a + 1, a + 1, w);
       }
       return solveTridiagonalPivoting(lower, diag, upper, rhs);
     },

@@ -49,15 +49,11 @@ import { relativeResidual, solveSteadyState, type SteadyStateProblem, type Stead
 import { ConvergenceError, DomainError, GAS_CONSTANT } from './common.js';
 import {
   diffusiveLayerThickness,
-  exchangeRate,
   exchangeState,
-  fittedFlux,
-  surfaceExcessRatio,
-  surfaceExcessRatioSlope,
+  transportProblem,
   type ExchangeState,
   type InterfaceProfile,
   type SurfactantSolveConditions,
-  keepSurfaceExcessPositive,
 } from './surfactant-transport.js';
 
 export { diffusiveLayerThickness, type InterfaceProfile, type SurfactantSolveConditions } from './surfactant-transport.js';
@@ -247,66 +243,37 @@ function transverseProblem(op: GapOperator, marangoni: number, eps: number, ex: 
     }
     return u;
   };
+  const transport = transportProblem({
+    volume: new Float64Array(Ng).fill(h),
+    spacing: () => h,
+    faceVelocity(v, a) {
+      let acc = 0;
+      const row = a * Ng;
+      for (let j = 0; j < Ng; j++) acc += faceGreen[row + j] * v[j];
+      return 0.5 * (clean[a] + clean[a + 1]) - marangoni * acc;
+    },
+    diffusivity: eps,
+    exchange: ex,
+    timeScale,
+  });
   const J = new Float64Array(Ng * Ng); // Jacobian workspace, reused every iteration
-  const faceVelocity = (v: Float64Array, a: number): number => {
-    let acc = 0;
-    const row = a * Ng;
-    for (let j = 0; j < Ng; j++) acc += faceGreen[row + j] * v[j];
-    return 0.5 * (clean[a] + clean[a + 1]) - marangoni * acc;
-  };
-  const faces = (v: Float64Array) => {
-    const q = new Float64Array(Ng);
-    for (let i = 0; i < Ng; i++) q[i] = surfaceExcessRatio(v[i], ex);
-    const f = [];
-    for (let a = 0; a < Ng - 1; a++) f.push(fittedFlux(q[a], q[a + 1], faceVelocity(v, a), h, eps));
-    return { q, f };
-  };
   return {
-    size: Ng,
+    ...transport,
     velocity,
-    residual(v, out) {
-      const { q, f } = faces(v);
-      for (let i = 0; i < Ng; i++) {
-        out[i] = (i < Ng - 1 ? f[i].flux : 0) - (i > 0 ? f[i - 1].flux : 0) - h * exchangeRate(q[i], ex, timeScale).rate;
-      }
-    },
-    rowScale(v, out) {
-      const { q, f } = faces(v);
-      let top = 0;
-      for (let i = 0; i < Ng; i++) {
-        out[i] = (i < Ng - 1 ? f[i].magnitude : 0) + (i > 0 ? f[i - 1].magnitude : 0) + h * Math.abs(exchangeRate(q[i], ex, timeScale).rate);
-        top = Math.max(top, out[i]);
-      }
-      for (let i = 0; i < Ng; i++) out[i] = Math.max(out[i], 1e-14 * top, 1e-300);
-    },
-    accumulationDerivative(v, out) {
-      for (let i = 0; i < Ng; i++) out[i] = h * surfaceExcessRatioSlope(v[i], ex);
-    },
-    project: keepSurfaceExcessPositive,
     solveLinearised(v, shift, rhs) {
-      const { q, f } = faces(v);
       J.fill(0);
-      for (let i = 0; i < Ng; i++) {
-        const dq = surfaceExcessRatioSlope(v[i], ex);
-        J[i * Ng + i] += -h * exchangeRate(q[i], ex, timeScale).slope * dq + (shift ? shift[i] : 0);
-      }
+      const dU = transport.localJacobian(v, shift, (i, j, value) => {
+        J[i * Ng + j] += value;
+      });
+      // Face velocity U_a = U_c,a − Ma s_eq Σ_j Gf_aj v_j: a dense coupling through the half-space.
       for (let a = 0; a < Ng - 1; a++) {
-        const fa = f[a];
-        const dqa = fa.dqa * surfaceExcessRatioSlope(v[a], ex);
-        const dqb = fa.dqb * surfaceExcessRatioSlope(v[a + 1], ex);
-        // F_a enters row a with +1 and row a+1 with −1.
-        J[a * Ng + a] += dqa;
-        J[a * Ng + a + 1] += dqb;
-        J[(a + 1) * Ng + a] -= dqa;
-        J[(a + 1) * Ng + a + 1] -= dqb;
-        const w = -marangoni * fa.dU;
-        if (w !== 0) {
-          const fg = a * Ng;
-          for (let j = 0; j < Ng; j++) {
-            const t = w * faceGreen[fg + j];
-            J[a * Ng + j] += t;
-            J[(a + 1) * Ng + j] -= t;
-          }
+        const w = -marangoni * dU[a];
+        if (w === 0) continue;
+        const fg = a * Ng;
+        for (let j = 0; j < Ng; j++) {
+          const t = w * faceGreen[fg + j];
+          J[a * Ng + j] += t;
+          J[(a + 1) * Ng + j] -= t;
         }
       }
       const step = Float64Array.from(rhs);

@@ -143,6 +143,83 @@ export function fittedFlux(qa: number, qb: number, velocity: number, spacing: nu
   };
 }
 
+/** Cells of a surface-transport discretisation (positions and lengths in the solver's length unit). */
+export interface TransportCells {
+  /** Cell lengths. */
+  volume: Float64Array;
+  /** Distance between the centres of cells a and a+1. */
+  spacing(a: number): number;
+  /** Interface velocity at the face between cells a and a+1, for the tension variable v. */
+  faceVelocity(v: Float64Array, a: number): number;
+  /** Surface diffusivity in the solver's units. */
+  diffusivity: number;
+  exchange: ExchangeState;
+  /** Time unit of the exchange rate, s. */
+  timeScale: number;
+}
+
+/**
+ * The parts of the steady transport problem in v that both interface solvers share: cell balances
+ * R_i = F_{i+½} − F_{i−½} − V_i J(q_i) with zero flux through the ends, their magnitudes (the scale of
+ * the relative residual), the pseudo-time accumulation d(V_i q_i)/dv_i, the projection, and the Jacobian
+ * at fixed face velocities (`localJacobian` adds its entries through `add` and returns ∂F_a/∂U_a per face,
+ * for the solver to chain with its own ∂U/∂v).
+ */
+export function transportProblem(c: TransportCells) {
+  const { volume, exchange: ex, timeScale, diffusivity } = c;
+  const n = volume.length;
+  const faces = (v: Float64Array) => {
+    const q = new Float64Array(n);
+    for (let i = 0; i < n; i++) q[i] = surfaceExcessRatio(v[i], ex);
+    const f = [];
+    for (let a = 0; a < n - 1; a++) f.push(fittedFlux(q[a], q[a + 1], c.faceVelocity(v, a), c.spacing(a), diffusivity));
+    return { q, f };
+  };
+  const balances = (v: Float64Array, out: Float64Array, magnitude: boolean): void => {
+    const { q, f } = faces(v);
+    let top = 0;
+    for (let i = 0; i < n; i++) {
+      const exchange = volume[i] * exchangeRate(q[i], ex, timeScale).rate;
+      if (magnitude) {
+        out[i] = (i < n - 1 ? f[i].magnitude : 0) + (i > 0 ? f[i - 1].magnitude : 0) + Math.abs(exchange);
+        top = Math.max(top, out[i]);
+      } else {
+        out[i] = (i < n - 1 ? f[i].flux : 0) - (i > 0 ? f[i - 1].flux : 0) - exchange;
+      }
+    }
+    if (magnitude) for (let i = 0; i < n; i++) out[i] = Math.max(out[i], 1e-14 * top, 1e-300);
+  };
+  return {
+    size: n,
+    residual(v: Float64Array, out: Float64Array): void {
+      balances(v, out, false);
+    },
+    rowScale(v: Float64Array, out: Float64Array): void {
+      balances(v, out, true);
+    },
+    accumulationDerivative(v: Float64Array, out: Float64Array): void {
+      for (let i = 0; i < n; i++) out[i] = volume[i] * surfaceExcessRatioSlope(v[i], ex);
+    },
+    project: keepSurfaceExcessPositive,
+    localJacobian(v: Float64Array, shift: Float64Array | null, add: (row: number, column: number, value: number) => void): Float64Array {
+      const { q, f } = faces(v);
+      for (let i = 0; i < n; i++) add(i, i, -volume[i] * exchangeRate(q[i], ex, timeScale).slope * surfaceExcessRatioSlope(v[i], ex) + (shift ? shift[i] : 0));
+      const dU = new Float64Array(Math.max(0, n - 1));
+      for (let a = 0; a < n - 1; a++) {
+        const dqa = f[a].dqa * surfaceExcessRatioSlope(v[a], ex);
+        const dqb = f[a].dqb * surfaceExcessRatioSlope(v[a + 1], ex);
+        // F_a enters row a with +1 and row a+1 with −1.
+        add(a, a, dqa);
+        add(a, a + 1, dqb);
+        add(a + 1, a, -dqa);
+        add(a + 1, a + 1, -dqb);
+        dU[a] = f[a].dU;
+      }
+      return dU;
+    },
+  };
+}
+
 /**
  * Projection of a trial iterate that keeps every Γ ≥ 0 (v ≥ 0): no unknown
  * may fall below a tenth of its current value in one step (component-wise, so
