@@ -17,7 +17,12 @@
  * - along the flow at angle θ to the grooves: b = b_∥ cos²θ + b_⊥ sin²θ
  *   (projection of the slip tensor; common practice, no source).
  * The clean slip lengths are inputs (from the slip model), so c = 0 returns
- * them exactly. The drag change with the reduced slip is computed by the
+ * them exactly. Solves along the points, the concentration curve and the
+ * half-slip root start from their neighbours (surfactant-warm-starts.ts); a
+ * point whose solve finds no steady state within its iteration budget is
+ * answered by the scaling theory with the warning `solver-fallback-scaling`,
+ * never by an error (none in the committed 600-design sweep,
+ * bench/surfactant-sweep.ts). The drag change with the reduced slip is computed by the
  * slip endpoint's drag model from `slipLength` (not here).
  *
  * Regime thresholds (ours; common practice, no source): `clean` when at
@@ -46,8 +51,8 @@ import {
   slipWithMarangoni,
   type SurfactantGroups,
 } from './surfactant-scaling.js';
-import { solveLongWaveGroove, solveTransverseInterface, type InterfaceProfile, type InterfaceState } from './surfactant-solver.js';
-import type { GrooveState } from './surfactant-groove.js';
+import { solveLongWaveGroove, solveTransverseInterface, type InterfaceProfile } from './surfactant-solver.js';
+import { nearestState, transverseStarts, type WarmStarts } from './surfactant-warm-starts.js';
 
 export const SURFACTANT_SLIP_REFERENCES = {
   landel2020: SURFACTANT_REFERENCES.landel2020,
@@ -262,41 +267,6 @@ function uniformProfile(pr: Prepared, reduction: number, tauW: number): Interfac
     tensionChange.push(reduction * tauW * (pr.width / 2 - x));
   }
   return { position, velocity, cleanVelocity, surfaceExcess: [], marangoniStress, tensionChange };
-}
-
-/** Solver states of earlier solves, so a neighbouring concentration starts close to its answer. */
-interface WarmStarts {
-  solved: Array<{ logConcentration: number; transverse?: InterfaceState; groove?: GrooveState }>;
-}
-
-/** The stored state of the nearest concentration (in log c) that has the wanted kind. */
-function nearestState<K extends 'transverse' | 'groove'>(warm: WarmStarts, c: number, kind: K): WarmStarts['solved'][number][K] | undefined {
-  return nearestEntries(warm, c, kind)[0]?.[kind];
-}
-
-function nearestEntries(warm: WarmStarts, c: number, kind: 'transverse' | 'groove'): WarmStarts['solved'] {
-  const target = Math.log(c);
-  return warm.solved.filter((e) => e[kind] !== undefined).sort((a, b) => Math.abs(a.logConcentration - target) - Math.abs(b.logConcentration - target));
-}
-
-/**
- * Transverse starts for concentration c: the nearest solved state and the secant prediction in log c
- * from the two nearest (tension profile s = v·s_eq extrapolated linearly; ours).
- */
-function transverseStarts(warm: WarmStarts, c: number): InterfaceState[] {
-  const near = nearestEntries(warm, c, 'transverse');
-  const out: InterfaceState[] = [];
-  const a = near[0];
-  const b = near[1];
-  if (a?.transverse) out.push(a.transverse);
-  if (a?.transverse && b?.transverse && a.transverse.gapCells === b.transverse.gapCells && a.logConcentration !== b.logConcentration) {
-    const t = (Math.log(c) - a.logConcentration) / (a.logConcentration - b.logConcentration);
-    const sa = a.transverse;
-    const sb = b.transverse;
-    const tension = sa.tension.map((v, i) => Math.max(0, v * sa.equilibriumTension + t * (v * sa.equilibriumTension - sb.tension[i] * sb.equilibriumTension)));
-    out.push({ cells: sa.cells, gapCells: sa.gapCells, tension, equilibriumTension: 1 });
-  }
-  return out;
 }
 
 interface PointRun {
