@@ -30,12 +30,14 @@
  * G = M⁻¹D (M the gap operator 2|∂| + drag, D the tension-gradient
  * stencil), both computed once per grid and cached. The velocity is
  * eliminated, leaving N_g transport equations in v, solved by Newton's
- * method with the analytic Jacobian and a line search, from the linearised
- * solution (or a warm start); if Newton fails, by pseudo-transient
- * continuation from the same start: the interface evolves in pseudo time
- * as it would from that state once the flow is switched on, and the time
- * step grows until the iteration is Newton's (numerics/steady-state.ts).
- * Convergence is judged relative to the size of each cell's transport terms,
+ * method with the analytic Jacobian and a line search, from a warm start
+ * (a neighbouring concentration) and then from the linearised solution; if
+ * Newton fails from both, by pseudo-transient continuation from the warm
+ * start and then from the undisturbed interface: the interface evolves in
+ * pseudo time as it would from that state once the flow is switched on, and
+ * the time step grows until the iteration is Newton's
+ * (numerics/steady-state.ts). Steps are projected so no cell's surface
+ * excess turns negative. Convergence is judged relative to the size of each cell's transport terms,
  * so the stiff coupling at large Marangoni numbers (Ma·s_eq up to ~10⁴ in
  * realistic designs) does not leave a residual floor above the tolerance.
  * The linearised problem (about the uniform equilibrium Γ_eq) is solved as
