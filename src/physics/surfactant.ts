@@ -404,7 +404,7 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
       const regime = scalingRegime(scal.groups, scal.flags.stagnantCapLikely, scal.flags.dilute);
       notes.warn(
         'solver-fallback-scaling',
-        `At c = ${c.toPrecision(3)} mol/m³ the interface solver found no steady state (${error.message}); the scaling theory of Landel et al. (2020) answers instead. Its groups place this point in ${regime}.`,
+        `At c = ${c.toPrecision(3)} mol/m³ the interface solver found no steady state (${error.iterations} linear solves, relative residual ${Number.isFinite(error.residual) ? error.residual.toExponential(2) : 'not finite'}); the scaling theory of Landel et al. (2020) answers instead. Its groups place this point in ${regime}.`,
         'warning',
       );
       grooveProfile = undefined;
