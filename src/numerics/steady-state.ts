@@ -17,10 +17,11 @@
  *
  * Convergence is judged on the residual relative to a per-row magnitude the
  * problem supplies (the sum of the absolute values of the row's terms), so
- * the test does not depend on the units or on how stiff the coupling is;
- * a full Newton step that changes no unknown beyond `stepTolerance` of its
- * size also counts as converged once the relative residual is at the
- * rounding floor (`floorTolerance`). Never throws.
+ * the test does not depend on the units or on how stiff the coupling is.
+ * At the rounding floor also: a full Newton step that changes no unknown
+ * beyond `stepTolerance` of its size once the relative residual is below
+ * `floorTolerance`, or two Newton steps in a row that no longer shrink a
+ * relative residual already within 100× the tolerance. Never throws.
  */
 
 export interface SteadyStateProblem {
@@ -121,6 +122,7 @@ function newton(problem: SteadyStateProblem, x0: Float64Array, o: Required<Stead
   if (!Number.isFinite(e.normInf)) return { x, converged: false, iterations: 0, residualNorm: Infinity };
   const n = problem.size;
   let stalls = 0;
+  let floorStalls = 0;
   for (let iter = 1; iter <= maxIterations; iter++) {
     if (e.normInf <= o.tolerance) return { x, converged: true, iterations: iter - 1, residualNorm: e.normInf };
     const minusR = new Float64Array(n);
@@ -142,20 +144,24 @@ function newton(problem: SteadyStateProblem, x0: Float64Array, o: Required<Stead
       t *= 0.5;
     }
     const full = t === 1 && !projected;
+    const atFloor = e.normInf <= 100 * o.tolerance;
     if (!accepted) {
       // No decrease along the Newton direction: at the rounding floor this is convergence.
-      const done = e.normInf <= o.floorTolerance && stepIsSmall(x, step, o.typicalSize, 1e3 * o.stepTolerance);
+      const done = e.normInf <= o.floorTolerance && (atFloor || stepIsSmall(x, step, o.typicalSize, 1e3 * o.stepTolerance));
       return { x, converged: done, iterations: iter, residualNorm: e.normInf };
     }
     x = accepted;
-    const previous = e.norm2;
+    const previous = e;
     e = evaluate(problem, x);
-    // Heavily damped steps that barely reduce the residual: Newton is far from its basin; stop early.
-    stalls = t <= 0.125 && e.norm2 > 0.9 * previous ? stalls + 1 : 0;
-    if (stalls >= 3) return { x, converged: false, iterations: iter, residualNorm: e.normInf };
     if (full && e.normInf <= o.floorTolerance && stepIsSmall(x, step, o.typicalSize, o.stepTolerance)) {
       return { x, converged: true, iterations: iter, residualNorm: e.normInf };
     }
+    // Newton steps within 100× the tolerance that no longer shrink the residual: the rounding floor.
+    floorStalls = e.normInf <= 100 * o.tolerance && e.normInf > 0.25 * previous.normInf ? floorStalls + 1 : 0;
+    if (floorStalls >= 2) return { x, converged: true, iterations: iter, residualNorm: e.normInf };
+    // Heavily damped steps that barely reduce the residual: Newton is far from its basin; stop early.
+    stalls = t <= 0.125 && e.norm2 > 0.9 * previous.norm2 ? stalls + 1 : 0;
+    if (stalls >= 3) return { x, converged: false, iterations: iter, residualNorm: e.normInf };
   }
   return { x, converged: e.normInf <= o.tolerance, iterations: maxIterations, residualNorm: e.normInf };
 }
