@@ -26,11 +26,9 @@ export interface FluidSpec {
   specificHeat?: number;
 }
 
-/** A surfactant: catalogue id and/or explicit adsorption parameters for the interface in question, SI. */
-export interface SurfactantSpec {
-  id?: string;
-  /** Display name of a surfactant given by its values. */
-  name?: string;
+/** Adsorption parameters of a surfactant at one interface, SI; any of them overrides the catalogue. */
+export interface SurfactantParameters {
+  /** Γ_m, mol/m². */
   maximumSurfaceExcess?: number;
   langmuirConstant?: number;
   adsorptionRate?: number;
@@ -39,6 +37,13 @@ export interface SurfactantSpec {
   surfaceDiffusivity?: number;
   gibbsPrefactor?: number;
   criticalMicelleConcentration?: number;
+}
+
+/** A surfactant: catalogue id and/or explicit adsorption parameters for the interface in question. */
+export interface SurfactantSpec extends SurfactantParameters {
+  id?: string;
+  /** Display name of a surfactant given by its values. */
+  name?: string;
 }
 
 export interface Catalogue {

@@ -10,6 +10,7 @@
  * rate constant m³/(mol·s), desorption rate constant 1/s, diffusivities
  * m²/s, concentrations mol/m³ (1 mol/m³ = 1 mM).
  */
+import type { SurfactantParameters } from '../core/catalogue.js';
 import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
 import { DomainError } from '../core/errors.js';
 import type { Warning } from '../core/notes.js';
@@ -182,19 +183,8 @@ export function surfactantListing(): {
   return { surfactants, references: [...refs.values()] };
 }
 
-/** Request-supplied values (SI); any of them overrides the catalogue. */
-export interface SurfactantParameters {
-  maximumSurfaceExcess?: number;
-  langmuirConstant?: number;
-  adsorptionRate?: number;
-  desorptionRate?: number;
-  bulkDiffusivity?: number;
-  surfaceDiffusivity?: number;
-  gibbsPrefactor?: number;
-  criticalMicelleConcentration?: number;
-}
-
-export interface SurfactantSpec {
+/** What the catalogue resolver takes: an id and/or parameters, for one interface type. */
+export interface SurfactantResolveSpec {
   /** Catalogue id; omit to give every parameter explicitly. */
   id?: string;
   interfaceType: InterfaceType;
@@ -211,7 +201,7 @@ export interface SurfactantSpec {
  * Missing required values (Γ_m, K, D, n) throw DomainError; a missing
  * surface diffusivity falls back to the bulk diffusivity (assumption, warned).
  */
-export function resolveSurfactant(spec: SurfactantSpec, field = 'surfactant'): ResolvedSurfactant {
+export function resolveSurfactant(spec: SurfactantResolveSpec, field = 'surfactant'): ResolvedSurfactant {
   const entry = spec.id !== undefined ? getSurfactant(spec.id) : undefined;
   if (spec.id !== undefined && !entry) {
     throw new DomainError(`unknown surfactant "${spec.id}"`, { field: `${field}.id`, code: 'unknown-surfactant' });

@@ -8,24 +8,10 @@
 import { ConvergenceError } from '../../core/errors.js';
 import type { Notes } from '../../core/notes.js';
 import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groove-duct.js';
-import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, type TimelinePoint } from './drainage.js';
+import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, type DrainageInput, type TimelinePoint } from './drainage.js';
 
-export interface TimelineInput {
-  grooveWidth: number;
-  grooveDepth: number;
-  segmentLength: number;
-  segments: number;
-  grooveEnds: 'open' | 'closed';
-  interfacialTension: number;
-  /** τ_i along the grooves, Pa. */
-  interfacialShearStress: number;
-  lubricantViscosity: number;
-  /** (ρ_o − ρ_w) g sin α along the grooves, Pa/m. */
-  bodyForceGradient: number;
-  recedingCurvature: number;
-  spillCurvature: number;
-  initialFill: number;
-  duration: number;
+/** The drainage model's inputs, plus what the choice between the two timelines needs. */
+export interface TimelineInput extends Omit<DrainageInput, 'cellsPerSegment' | 'timelinePoints' | 'maxSteps'> {
   /** Steady retained length of the binding mechanism, m (where the lumped plug stops). */
   retainedLength: number;
   /** Whether the capillary mechanism binds, so the finite-volume model applies. */
@@ -70,23 +56,9 @@ export function drainageTimeline(input: TimelineInput, notes: Notes): Timeline {
     notes.assume(`timeline solved for the first ${solvedSegments} of ${input.segments} segments (interior segments behave alike)`);
   }
   try {
-    const drainage = solveDrainage({
-      grooveWidth: input.grooveWidth,
-      grooveDepth: input.grooveDepth,
-      segmentLength: input.segmentLength,
-      segments: solvedSegments,
-      grooveEnds: input.grooveEnds,
-      interfacialTension: input.interfacialTension,
-      interfacialShearStress: input.interfacialShearStress,
-      lubricantViscosity: input.lubricantViscosity,
-      bodyForceGradient: input.bodyForceGradient,
-      recedingCurvature: input.recedingCurvature,
-      spillCurvature: input.spillCurvature,
-      initialFill: input.initialFill,
-      duration: input.duration,
-      // A stalled integration must fail fast (the request has a time budget); the lumped model then answers.
-      maxSteps: 8_000,
-    });
+    const { retainedLength: _retainedLength, finiteVolume: _finiteVolume, ...model } = input;
+    // A stalled integration must fail fast (the request has a time budget); the lumped model then answers.
+    const drainage = solveDrainage({ ...model, segments: solvedSegments, maxSteps: 8_000 });
     notes.model('retention.drainage-finite-volume');
     return {
       timeline: drainage.timeline,
