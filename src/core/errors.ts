@@ -28,7 +28,8 @@ export class ConvergenceError extends DomainError {
   readonly iterations: number;
   readonly residual: number;
   constructor(message: string, iterations: number, residual: number, field?: string) {
-    super(`${message} (after ${iterations} iterations, residual ${residual.toExponential(3)})`, {
+    // A non-finite residual is described in words: the API keeps the tokens NaN and Infinity out of every response.
+    super(`${message} (after ${iterations} iterations, residual ${Number.isFinite(residual) ? residual.toExponential(3) : 'not finite'})`, {
       field,
       code: 'not-converged',
     });

@@ -9,7 +9,7 @@
  *   slip → heat (the velocity slip that makes the flow plug-like).
  * An assessment of the whole design is these functions called on one context.
  */
-import { ConvergenceError, DomainError, MissingInputError } from '../../core/errors.js';
+import { DomainError, MissingInputError } from '../../core/errors.js';
 import { Notes, type Warning } from '../../core/notes.js';
 import type { ModelId } from '../../core/models.js';
 import type { Reference } from '../../core/references.js';
@@ -66,7 +66,6 @@ function answer<R>(ctx: DesignContext, own: Notes, compute: () => { result: R; v
     if (error instanceof DomainError && !(error instanceof MissingInputError) && error.field !== undefined) {
       error.field = documentPath(error.field);
     }
-    if (error instanceof ConvergenceError && error.field === undefined) error.field = 'options.method';
     throw error;
   }
   const notes = new Notes().merge(ctx.notes).merge(own);

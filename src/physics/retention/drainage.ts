@@ -82,7 +82,8 @@ export function lumpedDrainageTime(initialLength: number, length: number, retain
  * by Brent's method); L₀ ≤ L∞ stays put.
  */
 export function lumpedRetainedLength(time: number, initialLength: number, retainedLength: number, drainageSpeed: number): number {
-  if (initialLength <= retainedLength || time <= 0) return initialLength;
+  // No drainage yet, or less than the rounding of L₀ (the inversion has nothing to resolve).
+  if (initialLength <= retainedLength || !(drainageSpeed * time > Number.EPSILON * initialLength)) return initialLength;
   if (retainedLength === 0) return Math.max(0, initialLength - drainageSpeed * time);
   const f = (length: number): number => lumpedDrainageTime(initialLength, length, retainedLength, drainageSpeed) - time;
   // Bracket: t(lo) ≥ time + L∞/V_s because the logarithm alone exceeds V_s·time/L∞ there.
