@@ -212,3 +212,28 @@ describe('the thread entry', () => {
     expect(pool).not.toMatch(/'\.\/worker\.js'/);
   });
 });
+
+describe('over HTTP: a client that disconnects cancels its solve', () => {
+  it('closing the connection while the solve computes kills its thread; the service keeps answering', async () => {
+    const { buildApp } = await import('../../src/api/app.js');
+    const { testConfig } = await import('../../src/api/config.js');
+    const http = await import('node:http');
+    const app = await buildApp(testConfig({ workerThreads: 1 }));
+    try {
+      await app.listen({ port: 0, host: '127.0.0.1' });
+      const port = (app.server.address() as { port: number }).port;
+      const body = JSON.stringify({ ...heatExample, method: 'field', sensitivity: { points: 25 } });
+      const req = http.request({ host: '127.0.0.1', port, path: '/v1/heat', method: 'POST', headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } });
+      req.on('error', () => {});
+      req.end(body);
+      await startedComputing(app.solverPool);
+      req.destroy();
+      while (app.solverPool.stats().running > 0) await new Promise((r) => setTimeout(r, 20));
+      expect(app.solverPool.stats()).toEqual({ waiting: 0, running: 0, threadsLost: 1 });
+      const next = await app.inject({ method: 'POST', url: '/v1/heat', payload: { ...heatExample, method: 'closed-form' } });
+      expect(next.statusCode).toBe(200);
+    } finally {
+      await app.close();
+    }
+  }, 300_000);
+});
