@@ -21,6 +21,13 @@ export interface QuantityDefinition {
   example: number | string;
   /** Whether a unit string is accepted (false: JSON number only). */
   acceptsUnitString?: boolean;
+  /** Added to the message for a unit of the wrong dimension (e.g. how to convert a common mistake). */
+  hint?: string;
+}
+
+/** What a caller may send for a quantity, for the message of a rejected unit. */
+function accepted(def: QuantityDefinition): string {
+  return `give the ${def.quantity} as a number in ${def.unitLabel} or as a string with a unit convertible to ${def.unitLabel}, e.g. "${def.example}"${def.hint ? `; ${def.hint}` : ''}`;
 }
 
 function describe(def: QuantityDefinition): string {
@@ -41,7 +48,7 @@ export function quantity(def: QuantityDefinition) {
         try {
           value = parseQuantity(raw, def.siUnit);
         } catch (error) {
-          ctx.addIssue({ code: 'custom', message: error instanceof UnitError ? error.message : 'unreadable quantity' });
+          ctx.addIssue({ code: 'custom', message: `${error instanceof UnitError ? error.message : 'unreadable quantity'}; ${accepted(def)}` });
           return z.NEVER;
         }
       }
@@ -259,6 +266,7 @@ export const Concentration = quantity({
   max: 1e4,
   description: 'Molar bulk concentration (1 mM = 1 mol/m³)',
   example: '0.1 mM',
+  hint: 'a mass concentration such as mg/L needs the molar mass: mg/L divided by g/mol gives mol/m³ (= mM)',
 });
 
 export const MassConcentration = quantity({
