@@ -19,9 +19,12 @@
  *   widths deep (deeper fluid is at rest to within exp(−π·4) ≈ 3.5e-6 of the
  *   mouth velocity along the grooves, and beyond the third corner eddy across
  *   them, so the slip does not change; checked in test/physics/solver-budget.test.ts);
- * - heat cross-section and conduction cell: ≤ {@link HEAT_FIELD_LIMITS.maxCells}
- *   cells per grid and ≤ {@link HEAT_FIELD_LIMITS.maxFieldSolves} field solves per
- *   request (sensitivity sweep included).
+ * The other field solvers are bounded by construction, whatever the geometry
+ * (DEVELOPERS.md, "Work bounds"): the heat grids have at most about 80
+ * columns and a number of rows that grows with the logarithm of H/P (about
+ * 44 000 cells at the extremes the schema admits) and a sweep runs at most 25
+ * field points; the surfactant interface solver uses 256–320 cells per
+ * period; the drainage timeline has a step budget.
  */
 import { DomainError } from './common.js';
 
@@ -43,13 +46,6 @@ export const GROOVE_CELL_LIMITS = {
   minInterfaceFraction: 0.01,
   /** Groove depth, in groove widths, beyond which the cell is cut (the field there has decayed). */
   resolvedDepthInWidths: 4,
-} as const;
-
-export const HEAT_FIELD_LIMITS = {
-  /** Largest grid (cells) of one heat field solve. */
-  maxCells: 120_000,
-  /** Largest number of field solves in one request (the main solve plus sweep points). */
-  maxFieldSolves: 26,
 } as const;
 
 /** Sizes of cells growing by `growth` from `fine` to `coarse`, then uniform, over `length` (count only). */
