@@ -59,7 +59,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     maxQueuedSolves: intFrom(env, 'OILSKIN_MAX_QUEUE', 64),
     queueTimeoutMs: intFrom(env, 'OILSKIN_QUEUE_TIMEOUT_MS', 10_000, 1),
     solveTimeoutMs: intFrom(env, 'OILSKIN_SOLVE_TIMEOUT_MS', 20_000, 1),
-    workerMemoryMb: intFrom(env, 'OILSKIN_WORKER_MEMORY_MB', 512, 1),
+    // Below ~64 MB a thread cannot even load the model code (and piscina stops replacing threads that fail to start).
+    workerMemoryMb: intFrom(env, 'OILSKIN_WORKER_MEMORY_MB', 512, 64),
     drainTimeoutMs: intFrom(env, 'OILSKIN_DRAIN_TIMEOUT_MS', 10_000, 1),
     headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
