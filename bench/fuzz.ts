@@ -22,8 +22,7 @@
  * p50/p99 latency; and whether the service process died. Exit code 1 when
  * any 5xx other than 503, hang, NaN or death was seen.
  */
-import { spawn } from 'node:child_process';
-import { fileURLToPath } from 'node:url';
+import { seededRandom, startService } from './child-service.js';
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 interface Schema {
@@ -51,15 +50,7 @@ function option(name: string, fallback: string): string {
 const flag = (name: string) => process.argv.includes(`--${name}`);
 
 const seedText = option('seed', '1');
-let state = Number(seedText) >>> 0;
-/** mulberry32: small, seeded. */
-function random(): number {
-  state = (state + 0x6d2b79f5) >>> 0;
-  let t = state;
-  t = Math.imul(t ^ (t >>> 15), t | 1);
-  t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-  return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-}
+const random = seededRandom(Number(seedText));
 const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)];
 const chance = (p: number) => random() < p;
 
@@ -204,31 +195,9 @@ async function main() {
   const heavyCount = Number(option('heavy', '2000'));
   const deadline = Date.now() + Number(option('minutes', '120')) * 60_000;
   const only = option('only', '').split(',').filter(Boolean);
-  const root = fileURLToPath(new URL('..', import.meta.url));
-  const args = flag('sources') ? ['--import', 'tsx', 'src/api/server.ts'] : ['dist/src/api/server.js'];
-  const child = spawn(process.execPath, args, {
-    cwd: root,
-    env: { ...process.env, OILSKIN_PORT: '0', OILSKIN_HOST: '127.0.0.1', OILSKIN_WORKERS: '2', OILSKIN_RATE_LIMIT: '0', OILSKIN_LOG_LEVEL: 'info' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let log = '';
-  let died: string | null = null;
-  child.stdout.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-200_000)));
-  child.stderr.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-200_000)));
-  child.on('exit', (code, signal) => (died = `exit code ${code}, signal ${signal}`));
-  const port = await new Promise<number>((resolvePort, reject) => {
-    const timer = setInterval(() => {
-      const m = log.match(/Server listening at http:\/\/127\.0\.0\.1:(\d+)/);
-      if (m) {
-        clearInterval(timer);
-        resolvePort(Number(m[1]));
-      } else if (died) {
-        clearInterval(timer);
-        reject(new Error(`service did not start (${died}): ${log.slice(-2000)}`));
-      }
-    }, 50);
-  });
-  const base = `http://127.0.0.1:${port}`;
+  const service = await startService({ sources: flag('sources'), env: { OILSKIN_WORKERS: '2' } });
+  const { base, child } = service;
+  const died = () => service.died();
   const document = (await (await fetch(`${base}/openapi.json`)).json()) as {
     paths: Record<string, Record<string, { requestBody?: { content: Record<string, { schema: Schema; example?: Json }> } }>>;
     components: { schemas: Record<string, Schema> };
@@ -249,7 +218,7 @@ async function main() {
     const concurrency = CHEAP.has(target.path) ? 8 : 2;
     let sent = 0;
     const worker = async () => {
-      while (sent < target.count && Date.now() < deadline && !died) {
+      while (sent < target.count && Date.now() < deadline && !died()) {
         sent++;
         const payload = JSON.stringify(body(target.schema, target.example));
         const start = performance.now();
@@ -304,7 +273,7 @@ async function main() {
         `p50 ${percentile(tally.latencies, 50).toFixed(1)} ms, p99 ${percentile(tally.latencies, 99).toFixed(1)} ms`,
     );
   }
-  const alive = !died;
+  const alive = !died();
   console.log('\n| endpoint | requests | 2xx | 4xx | 5xx (503) | hangs | NaN | 422 without a field | p50 ms | p99 ms |');
   console.log('|---|---|---|---|---|---|---|---|---|---|');
   for (const [path, t] of Object.entries(results)) {
@@ -313,7 +282,7 @@ async function main() {
       `| ${path} | ${t.requests} | ${count(200, 300)} | ${count(400, 500)} | ${t.serverErrors} (${t.unavailable}) | ${t.hangs} | ${t.nonFinite} | ${t.unnamed} | ${percentile(t.latencies, 50).toFixed(1)} | ${percentile(t.latencies, 99).toFixed(1)} |`,
     );
   }
-  console.log(`service process: ${alive ? 'alive at the end' : `DIED (${died})`}`);
+  console.log(`service process: ${alive ? 'alive at the end' : `DIED (${died()})`}`);
   if (alive) child.kill('SIGTERM');
   const bad = !alive || Object.values(results).some((t) => t.serverErrors > 0 || t.hangs > 0 || t.nonFinite > 0);
   process.exitCode = bad ? 1 : 0;

@@ -18,11 +18,10 @@
  * and the latency of GET /healthz probed every 500 ms during the run.
  */
 import os from 'node:os';
-import { spawn } from 'node:child_process';
 import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import type { IncomingHttpHeaders } from 'node:http';
 import autocannon from 'autocannon';
+import { startService } from './child-service.js';
 
 function option(name: string, fallback: string): string {
   const i = process.argv.indexOf(`--${name}`);
@@ -32,7 +31,6 @@ const mix = option('mix', 'both');
 const duration = Number(option('duration', '60'));
 const cheapConnections = Number(option('connections', '100'));
 const heavyConnections = Number(option('heavy-connections', '20'));
-const root = fileURLToPath(new URL('..', import.meta.url));
 
 function rssMb(pid: number): number {
   try {
@@ -43,29 +41,8 @@ function rssMb(pid: number): number {
   }
 }
 
-const child = spawn(process.execPath, process.argv.includes('--sources') ? ['--import', 'tsx', 'src/api/server.ts'] : ['dist/src/api/server.js'], {
-  cwd: root,
-  env: { ...process.env, OILSKIN_PORT: '0', OILSKIN_HOST: '127.0.0.1', OILSKIN_RATE_LIMIT: '0', OILSKIN_LOG_LEVEL: 'info' },
-  stdio: ['ignore', 'pipe', 'pipe'],
-});
-let log = '';
-let died: string | null = null;
-child.stdout.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-100_000)));
-child.stderr.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-100_000)));
-child.on('exit', (code, signal) => (died = `exit code ${code}, signal ${signal}`));
-const port = await new Promise<number>((resolve, reject) => {
-  const timer = setInterval(() => {
-    const m = log.match(/Server listening at http:\/\/127\.0\.0\.1:(\d+)/);
-    if (m) {
-      clearInterval(timer);
-      resolve(Number(m[1]));
-    } else if (died) {
-      clearInterval(timer);
-      reject(new Error(`service did not start (${died})`));
-    }
-  }, 50);
-});
-const base = `http://127.0.0.1:${port}`;
+const service = await startService({ sources: process.argv.includes('--sources') });
+const { base, child } = service;
 
 const design = {
   texture: { grooveWidth: '20 um', pitch: '40 um', grooveDepth: '20 um' },
@@ -133,5 +110,6 @@ async function run(name: 'cheap' | 'heavy', connections: number) {
 console.log(`load: ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown'}), load average ${os.loadavg()[0].toFixed(1)}, Node ${process.version}, service ${process.argv.includes('--sources') ? 'from sources' : 'compiled'}`);
 if (mix === 'cheap' || mix === 'both') await run('cheap', cheapConnections);
 if (mix === 'heavy' || mix === 'both') await run('heavy', heavyConnections);
+const died = service.died();
 console.log(`\nservice process: ${died ? `DIED (${died})` : 'alive at the end'}`);
 if (!died) child.kill('SIGTERM');

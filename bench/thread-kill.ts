@@ -18,6 +18,7 @@
 import { Worker } from 'node:worker_threads';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { seededRandom } from './child-service.js';
 
 function option(name: string, fallback: string): string {
   const i = process.argv.indexOf(`--${name}`);
@@ -26,15 +27,7 @@ function option(name: string, fallback: string): string {
 
 const entryKind = option('entry', 'compiled');
 const rounds = Number(option('rounds', '150'));
-let seed = Number(option('seed', '1')) >>> 0;
-/** mulberry32: a small seeded generator, so a run can be repeated. */
-function random(): number {
-  seed = (seed + 0x6d2b79f5) >>> 0;
-  let t = seed;
-  t = Math.imul(t ^ (t >>> 15), t | 1);
-  t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-  return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-}
+const random = seededRandom(Number(option('seed', '1')));
 
 const target = fileURLToPath(new URL(entryKind === 'esm' ? '../dist/src/api/worker.js' : '../dist/src/api/worker-entry.cjs', import.meta.url));
 if (!existsSync(target)) {

@@ -105,6 +105,9 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   }
   await app.register(metricsPlugin, { poolStats: () => pool.stats() });
   await app.register(healthPlugin);
+  void pool.ready().then(() => {
+    app.solversReady = true;
+  });
 
   if (config.apiKeys.length > 0) {
     app.addHook('onRequest', async (request, reply) => {

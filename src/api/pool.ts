@@ -27,6 +27,8 @@ export interface SolverPool {
   run(name: string, input: unknown, options?: { signal?: AbortSignal }): Promise<CalculationOutput>;
   /** Solves waiting for a thread, solves computing, and threads lost (killed or failed, then replaced) so far. */
   stats(): PoolStats;
+  /** Resolves once every thread has loaded the model code (at once without threads). */
+  ready(): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -98,6 +100,7 @@ export function createSolverPool(options: PoolOptions): SolverPool {
     return {
       run: async (name, input) => unwrap(options.inline(name, input)),
       stats: () => ({ waiting: 0, running: 0, threadsLost: 0 }),
+      ready: async () => {},
       close: async () => {},
     };
   }
@@ -116,6 +119,20 @@ export function createSolverPool(options: PoolOptions): SolverPool {
   piscina.on('workerDestroy', () => {
     if (!closing) threadsLost++;
   });
+
+  // One skipped task per thread, all at once: abortable tasks only go to idle threads, so each lands on its own
+  // thread and comes back once that thread has loaded the model code.
+  const warmed = Promise.all(
+    Array.from({ length: options.threads }, () => {
+      const cancelled = new Int32Array(new SharedArrayBuffer(4));
+      cancelled[0] = 1;
+      const task: SolverTask = { name: '', input: null, cancelled };
+      return piscina.run(task, { signal: new AbortController().signal });
+    }),
+  ).then(
+    () => undefined,
+    () => undefined,
+  );
 
   let waiting = 0;
   let running = 0;
@@ -241,6 +258,7 @@ export function createSolverPool(options: PoolOptions): SolverPool {
       });
     },
     stats: () => ({ waiting, running, threadsLost }),
+    ready: () => warmed,
     close() {
       closing = true;
       destroyed ??= piscina.destroy();

@@ -213,6 +213,26 @@ describe('the thread entry', () => {
   });
 });
 
+describe('readiness waits for the solver threads', () => {
+  it('/readyz is 503 "starting" while the threads load the model code, 200 once they have', async () => {
+    const { buildApp } = await import('../../src/api/app.js');
+    const { testConfig } = await import('../../src/api/config.js');
+    const app = await buildApp(testConfig({ workerThreads: 2 }));
+    try {
+      // Loading the model code takes a thread hundreds of milliseconds at least; this asks at once.
+      const early = await app.inject('/readyz');
+      expect(early.statusCode).toBe(503);
+      expect(early.json().type).toMatch(/starting$/);
+      await app.solverPool.ready();
+      expect((await app.inject('/readyz')).statusCode).toBe(200);
+      // The warm-up computed nothing and lost no thread.
+      expect(app.solverPool.stats()).toEqual({ waiting: 0, running: 0, threadsLost: 0 });
+    } finally {
+      await app.close();
+    }
+  }, 300_000);
+});
+
 describe('over HTTP: a client that disconnects cancels its solve', () => {
   it('closing the connection while the solve computes kills its thread; the service keeps answering', async () => {
     const { buildApp } = await import('../../src/api/app.js');
