@@ -37,6 +37,19 @@ describe('problem titles say what happened and paths name the request field', ()
     expect(body.errors?.[0].path).toBe('flow.roughness');
   });
 
+  it('absurdly small flow quantities are refused naming the field (they underflowed to a non-finite result with an empty path)', async () => {
+    const channel = { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' };
+    for (const [flow, path] of [
+      [{ ...channel, bulkVelocity: 1e-300 }, 'flow.bulkVelocity'],
+      [{ ...channel, height: 1e-300 }, 'flow.height'],
+      [{ kind: 'wall-shear', wallShearStress: 1e-300 }, 'flow.wallShearStress'],
+    ] as const) {
+      const { status, body } = await post('/v1/flow', { workingFluid: { fluid: 'water' }, flow });
+      expect(status, path).toBe(422);
+      expect(body.errors?.[0].path).toBe(path);
+    }
+  });
+
   it('a lubricant without a specific heat for /v1/heat: "A required property is missing", path as in the request', async () => {
     const heat = JSON.parse(readFileSync(new URL('../../examples/heat-worked-example.json', import.meta.url), 'utf8'));
     const { specificHeat: _dropped, ...lubricant } = heat.lubricant;
