@@ -252,6 +252,8 @@ export function createSolverPool(options: PoolOptions): SolverPool {
           (error: unknown) =>
             settle(() => {
               if (stoppedBy) throw stopError(stoppedBy);
+              // The pool is being destroyed (shutdown past the drain limit): not a thread failure.
+              if (closing) throw busy('This replica is shutting down; retry on another.', 'draining');
               throw threadFailure(error);
             }),
         );

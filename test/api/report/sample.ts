@@ -73,7 +73,8 @@ export async function sampleInputs(app: FastifyInstance): Promise<SampleInputs> 
       duration: '2 h',
     }),
     post(app, '/v1/slip', { ...DEMO_DESIGN, method: 'closed-form' }),
-    post(app, '/v1/waves', DEMO_DESIGN),
+    // The regime map is computed only when asked for.
+    post(app, '/v1/waves', { ...DEMO_DESIGN, map: true }),
     // Transverse grooves here: along straight streamwise grooves no surfactant gradient builds up and the curve is flat.
     post(app, '/v1/surfactant', {
       ...DEMO_DESIGN,
