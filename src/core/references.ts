@@ -27,6 +27,14 @@ function bibliography<T extends Entries>(entries: T): { readonly [K in keyof T]:
 }
 
 export const REFERENCES = bibliography({
+  // --- Limits of the continuum description -------------------------------------------------------
+  garajeu2013: {
+    citation: 'Gărăjeu, M., Gouin, H., Saccomandi, G. (2013). Scaling Navier–Stokes equation in nanotubes. Physics of Fluids 25, 082003.',
+    doi: '10.1063/1.4818159',
+  },
+  hansen2015: {
+    citation: 'Hansen, J. S., Dyre, J. C., Daivis, P., Todd, B. D., Bruus, H. (2015). Continuum nanofluidics. Langmuir 31, 13275–13289.',
+  },
   // --- Flow over a smooth wall -------------------------------------------------------------------
   dean1978: {
     citation:

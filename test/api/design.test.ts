@@ -56,7 +56,7 @@ describe('request examples and missing parts', () => {
     const res = await app.inject({ method: 'POST', url: calc.path, payload: {} });
     expect(res.statusCode).toBe(422);
     const body = res.json();
-    expect(body.title).toBe('Missing required property');
+    expect(body.title).toBe('A required property is missing');
     expect(body.errors[0].path).toMatch(/^(texture|lubricant|workingFluid|flow|contactAngles|waterQuality|solid)$/);
     expect(body.detail).toContain(`${calc.name} needs`);
   });

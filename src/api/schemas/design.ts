@@ -205,7 +205,8 @@ export const OptionsSchema = z
     duration: Duration.optional().openapi({ description: 'Length of the drainage timeline (default 2 h)' }),
     initialFill: Fraction.optional().openapi({ description: 'Initially filled fraction of each segment (default 1)' }),
     targetFill: Fraction.optional().openapi({ description: 'Fill fraction the retention verdict and the barrier spacing aim at (default 0.9)' }),
-    mapResolution: z.number().int().min(2).max(100).optional().openapi({ description: 'Cells per axis of the wave regime map (default 24)' }),
+    map: z.boolean().optional().openapi({ description: 'Waves: also compute the regime map over a (We_τ, w⁺) grid, for plotting (default false; computed in the worker pool)' }),
+    mapResolution: z.number().int().min(2).max(100).optional().openapi({ description: 'Cells per axis of the wave regime map (default 24); implies map: true' }),
     sensitivity: z.strictObject({ points: z.number().int().min(2).max(101) }).optional().openapi({ description: 'Sweep of the lubricant conductivity (heat)' }),
   })
   .openapi('Options', { description: 'The knobs of the methods; defaults as stated' });

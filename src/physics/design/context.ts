@@ -9,6 +9,7 @@
  * A question asks for a part with its own name; a part the document lacks is a
  * MissingInputError naming the document path and the question.
  */
+import { checkContinuumScale } from '../continuum.js';
 import type { Catalogue } from '../../core/catalogue.js';
 import { DomainError, MissingInputError } from '../../core/errors.js';
 import type { FluidPropertyName, FluidState } from '../../core/fluid.js';
@@ -77,6 +78,8 @@ export class DesignContext {
         grooveDepth: spec.grooveDepth,
         flowAngle: spec.flowAngle ?? 0,
       };
+      // Below molecular size no model applies (422); below 100 nm a caution (src/physics/continuum.ts).
+      checkContinuumScale(texture, this.notes);
       this.echo('texture', { ...spec, flowAngle: texture.flowAngle });
       return texture;
     });

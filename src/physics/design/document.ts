@@ -77,6 +77,8 @@ export interface DesignOptions {
   /** Fill fraction the retention verdict and barrier spacing aim at (default 0.9). */
   targetFill?: number;
   /** Cells per axis of the wave regime map (default 24). */
+  /** Waves: compute the regime map (default false; mapResolution implies it). */
+  map?: boolean;
   mapResolution?: number;
   /** Sweep of the lubricant conductivity (heat). */
   sensitivity?: { points: number };

@@ -159,24 +159,35 @@ function gravityOf(ctx: DesignContext, question: Question): { gravity?: { inclin
   return { gravity: { inclination: orientation.inclination, facing } };
 }
 
+/** Cells per axis of the wave regime map when it is asked for without a resolution. */
+const DEFAULT_MAP_CELLS = 24;
+
+/** Whether the waves answer carries the regime map: only when asked for (map, or a mapResolution). */
+export function wavesMapWanted(options: { map?: boolean; mapResolution?: number } | undefined): boolean {
+  return options?.map === true || options?.mapResolution !== undefined;
+}
+
 /** POST /v1/waves: do capillary waves on the interface stay calm? */
-export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 'verdict'>> {
+export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 'verdict' | 'map'> & { map?: WavesResult['map'] }> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const scenario = ctx.scenario('waves', 'required');
     const slip = ctx.slip('waves', 'closed-form');
     notes.cite(...slip.notes.references);
     notes.assume('Interface drift from the closed-form longitudinal slip length (see slip).');
-    const mapResolution = ctx.document.options?.mapResolution;
+    const options = ctx.document.options;
+    const map = wavesMapWanted(options);
     const waves = evaluateWaves({
       scenario,
       slipLengthLongitudinal: slip.result.slipLengthLongitudinal,
       ...gravityOf(ctx, 'waves'),
-      ...(mapResolution === undefined ? {} : { mapResolution }),
+      // No map asked for: the smallest one (2 × 2), dropped from the answer.
+      mapResolution: map ? (options?.mapResolution ?? DEFAULT_MAP_CELLS) : 2,
     });
     notes.merge(waves);
-    if (mapResolution !== undefined) ctx.echo('options', { mapResolution });
-    return lift(waves.result);
+    if (map) ctx.echo('options', { map, mapResolution: options?.mapResolution ?? DEFAULT_MAP_CELLS });
+    const { map: _regimeMap, ...rest } = waves.result;
+    return lift(map ? waves.result : rest);
   });
 }
 

@@ -73,7 +73,8 @@ export async function sampleInputs(app: FastifyInstance): Promise<SampleInputs> 
       options: { duration: '2 h' },
     }),
     post(app, '/v1/slip', { ...DEMO_DESIGN, options: { method: 'closed-form' } }),
-    post(app, '/v1/waves', DEMO_DESIGN),
+    // The regime map is computed only when asked for.
+    post(app, '/v1/waves', { ...DEMO_DESIGN, options: { map: true } }),
     // Transverse grooves here: along straight streamwise grooves no surfactant gradient builds up and the curve is flat.
     post(app, '/v1/surfactant', {
       ...DEMO_DESIGN,

@@ -29,7 +29,7 @@ describe('POST /v1/heat', () => {
   it('a lubricant given without its specific heat → 422 missing required property naming lubricant.specificHeat (not an internal path)', async () => {
     const res = await app.inject({ method: 'POST', url: '/v1/heat', payload: { ...worked, lubricant: { density: 900, viscosity: '10 mPa.s', thermalConductivity: 0.15 } } });
     expect(res.statusCode).toBe(422);
-    expect(res.json().title).toBe('Missing required property');
+    expect(res.json().title).toBe('A required property is missing');
     expect(res.json().errors[0].path).toBe('lubricant.specificHeat');
   });
 });

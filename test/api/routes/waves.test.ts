@@ -25,10 +25,24 @@ describe('POST /v1/waves', () => {
     const s = body.result.scaling;
     expect(s.inertialCapillaryNumber).toBeCloseTo(s.grooveWidthPlus * Math.cbrt(s.frictionCapillaryNumber), 10);
   });
+  it('cheap by default: computed inline, no regime map; the map only when asked for, through the pool, with the same verdict', async () => {
+    expect(typeof wavesCalculation.heavy === 'function' && wavesCalculation.heavy({ ...example } as never)).toBe(false);
+    expect(typeof wavesCalculation.heavy === 'function' && wavesCalculation.heavy({ ...example, options: { map: true } } as never)).toBe(true);
+    const plain = (await app.inject({ method: 'POST', url: '/v1/waves', payload: example })).json();
+    expect(plain.result.map).toBeUndefined();
+    const mapped = (await app.inject({ method: 'POST', url: '/v1/waves', payload: { ...example, options: { map: true } } })).json();
+    expect(mapped.result.map.regimes.length).toBe(24);
+    const resolved = (await app.inject({ method: 'POST', url: '/v1/waves', payload: { ...example, options: { mapResolution: 5 } } })).json();
+    expect(resolved.result.map.regimes.length).toBe(5);
+    // The map changes nothing else.
+    const { map: _map, ...withoutMap } = mapped.result;
+    expect(withoutMap).toEqual(plain.result);
+    expect(mapped.verdict).toEqual(plain.verdict);
+  });
   it('no interfacial tension and no way to estimate it → 422 missing required property naming interfacialTension', async () => {
     const res = await app.inject({ method: 'POST', url: '/v1/waves', payload: { ...example, lubricant: { density: 900, viscosity: 0.01 } } });
     expect(res.statusCode).toBe(422);
-    expect(res.json().title).toBe('Missing required property');
+    expect(res.json().title).toBe('A required property is missing');
     expect(res.json().errors[0].path).toBe('interfacialTension');
   });
   it('a downward-facing wall feels gravity against the interface (Rayleigh–Taylor load grows with width; physics)', async () => {

@@ -36,7 +36,7 @@ describe('POST /v1/wetting', () => {
   it('no contact angles → 422 "missing required property" naming contactAngles and the question', async () => {
     const res = await app.inject({ method: 'POST', url: '/v1/wetting', payload: design });
     expect(res.statusCode).toBe(422);
-    expect(res.json().title).toBe('Missing required property');
+    expect(res.json().title).toBe('A required property is missing');
     expect(res.json().errors[0].path).toBe('contactAngles');
     expect(res.json().detail).toMatch(/wetting needs/);
   });

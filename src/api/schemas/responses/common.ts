@@ -118,6 +118,7 @@ export const DesignEchoSchema = z
         duration: z.number().optional(),
         initialFill: z.number().optional(),
         targetFill: z.number().optional(),
+        map: z.boolean().optional(),
         mapResolution: z.number().optional(),
         sensitivity: z.strictObject({ points: z.number() }).optional(),
       })

@@ -75,7 +75,9 @@ export const WavesResultSchema = z
       regimes: z.array(z.array(WaveRegimeSchema)),
       boundaryGrooveWidthPlus: z.array(z.number().nullable()).openapi({ description: 'Per column, the w⁺ where the largest load ratio is 1 (the trade boundary Λ = 1 when the scaling governs)' }),
       designPoint: z.strictObject({ frictionCapillaryNumber: z.number(), grooveWidthPlus: z.number() }),
-    }),
+    })
+      .optional()
+      .openapi({ description: 'Regime over a (We_τ, w⁺) grid with the design point, for plotting (only when asked for: options.map or options.mapResolution)' }),
   })
   .openapi('WavesResult');
 
