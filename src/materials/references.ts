@@ -301,3 +301,13 @@ export const ROSEN_KUNJAPPU_2012: Reference = {
   key: 'rosen2012',
   citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
 };
+
+export const CIAAW_2021: Reference = {
+  key: 'ciaaw2021',
+  citation:
+    'Prohaska, T., Irrgeher, J., Benefield, J., et al. (2022). Standard atomic weights of the elements 2021 ' +
+    '(IUPAC Technical Report). Pure and Applied Chemistry 94(5), 573–600. Molar masses of the catalogue ' +
+    'surfactants are computed from their formulas with the conventional atomic weights of this table ' +
+    '(C 12.011, H 1.008, O 15.999, S 32.06, Na 22.990; from memory).',
+  doi: '10.1515/pac-2019-0603',
+};

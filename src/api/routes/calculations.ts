@@ -61,7 +61,7 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
       reply.header('cache-control', 'no-store');
       reply.type('application/json; charset=utf-8');
       reply.serializer(reply.getSerializationFunction('200') as (payload: unknown) => string);
-      return envelope(out, performance.now() - start);
+      return envelope(out, performance.now() - start, input as object);
     });
   }
 }
