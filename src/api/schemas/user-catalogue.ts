@@ -25,7 +25,20 @@ import {
   SurfaceTension,
   Temperature,
   ThermalConductivity,
+  quantity,
 } from './quantities.js';
+
+/** A fluid's freezing or boiling limit: a temperature, with room for liquid metals (gallium boils near 2500 K). */
+const LimitTemperature = quantity({
+  quantity: 'temperature',
+  siUnit: 'K',
+  unitLabel: 'K',
+  min: 0,
+  minInclusive: false,
+  max: 10_000,
+  description: 'Freezing or boiling limit of the fluid; a number is kelvin',
+  example: '-40 degC',
+});
 
 const text = (max: number) => z.string().trim().min(1).max(max);
 
@@ -85,8 +98,8 @@ export const UserFluidSchema = z
     description: text(2000),
     source: UserSourceSchema,
     referenceTemperature: Temperature.describe('Temperature of the listing, and the default of a request that gives none'),
-    freezingPoint: Temperature.optional(),
-    boilingPoint: Temperature.optional(),
+    freezingPoint: LimitTemperature.optional(),
+    boilingPoint: LimitTemperature.optional(),
     safety: text(2000).optional().describe('Flammability, decomposition, handling: repeated in every response that uses the fluid'),
     properties: z.strictObject({
       density: fluidProperty(Density),
