@@ -44,7 +44,11 @@ import {
 // Water and seawater
 // ---------------------------------------------------------------------------------------------
 
-/** Normal boiling point of water at 101.325 kPa on ITS-90, K (IAPWS-95; from memory). */
+/**
+ * Normal boiling point of water at 101.325 kPa on ITS-90, K: saturated liquid of IAPWS-95 (W. Wagner & A. Pruß 2002,
+ * J. Phys. Chem. Ref. Data 31, 387), 373.1243 K as evaluated by the iapws package
+ * (fixtures/materials/water_seawater.json; checked in the water tests).
+ */
 const WATER_NORMAL_BOILING_POINT = 373.124;
 const WATER_LIQUID_RANGE: Range = { min: 273.15, max: 373.15 };
 
