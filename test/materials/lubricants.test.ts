@@ -77,6 +77,18 @@ describe('silicone oils (polydimethylsiloxane grades)', () => {
     expect(oil.specificHeat!.at(298.15)).toBeCloseTo(1223.69 + 1.48417 * 298.15, 9);
   });
 
+  // DIPPR flash points as transcribed in the chemicals library (Serat et al. 2017, Fluid Phase Equilib. 449, 52):
+  // octamethyltrisiloxane 299.99 K, hexacosamethyldodecasiloxane 455.50 K.
+  it('gives no flash point for a grade, only the DIPPR range of the linear oligomers, 27 to 182 °C (Serat et al. 2017)', () => {
+    for (const grade of [5, 1000]) {
+      const safety = getFluid(`silicone-oil-${grade}cst`)!.safety ?? '';
+      expect(safety).toContain(`from ${Math.round(299.99 - 273.15)} °C (octamethyltrisiloxane)`);
+      expect(safety).toContain(`${Math.round(455.5 - 273.15)} °C (hexacosamethyldodecasiloxane`);
+      expect(safety).toContain('serat2017');
+      expect(safety).not.toMatch(/flash point about/);
+    }
+  });
+
   it('names the grades generically ("Polydimethylsiloxane, 10 cSt")', () => {
     expect(getFluid('silicone-oil-10cst')!.name).toBe('Polydimethylsiloxane, 10 cSt (silicone oil)');
   });
