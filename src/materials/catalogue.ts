@@ -27,6 +27,7 @@ import {
   seawaterThermalConductivity,
   seawaterViscosity,
 } from './seawater.js';
+import * as MATERIAL_REFERENCES from './references.js';
 import { SILICONE_OILS } from './silicones.js';
 import type { CatalogueFluid, PropertyRecord } from './types.js';
 import type { FluidPropertyName } from '../core/fluid.js';
@@ -194,10 +195,25 @@ export interface FluidListing {
   properties: Partial<Record<FluidPropertyName, PropertyListing>>;
 }
 
-/** JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references its values cite. */
+/** Every catalogue source, so that a key named in a description or safety note can be listed with its citation. */
+const CITABLE: readonly Reference[] = [
+  ...Object.values(MATERIAL_REFERENCES).filter(
+    (value): value is Reference => typeof value === 'object' && value !== null && 'key' in value && 'citation' in value,
+  ),
+  REFERENCES.fowkes1964,
+];
+
+/**
+ * JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references it cites — those of its values
+ * and those whose keys its description or safety note names (a flash point's source, for instance).
+ */
 export function catalogueListing(): { fluids: FluidListing[]; references: Reference[] } {
   const references = new Map<string, Reference>();
   const fluids = FLUIDS.map((fluid) => {
+    const text = `${fluid.description} ${fluid.safety ?? ''}`;
+    for (const reference of CITABLE) {
+      if (text.includes(reference.key)) references.set(reference.key, reference);
+    }
     const properties: Partial<Record<FluidPropertyName, PropertyListing>> = {};
     for (const [name, record] of Object.entries(fluid.properties) as [FluidPropertyName, PropertyRecord][]) {
       references.set(record.source.key, record.source);

@@ -16,6 +16,7 @@ import {
   PACANSKY_WALTMAN_1997,
   PERFLUORODECALIN_DATA,
   PFPE_FLUID_DATA,
+  USP_LIGHT_MINERAL_OIL,
 } from './references.js';
 import { CELSIUS_ZERO, FROM_MEMORY, around, constant, fromFunction, tabulated } from './records.js';
 import type { CatalogueFluid } from './types.js';
@@ -103,11 +104,18 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
   description:
     'Light white mineral oil (a mixture of saturated hydrocarbons). Properties vary between suppliers and ' +
     'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C, ' +
-    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found.',
+    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found. ' +
+    `The pharmacopoeial grade (${USP_LIGHT_MINERAL_OIL.key}) only bounds it: specific gravity 0.818–0.880, ` +
+    'kinematic viscosity 3.0–34.4 mm²/s at 40 °C, a factor of ten.',
   referenceTemperature: 298.15,
   safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
   properties: {
-    density: constant(838, around(25, 5), MINERAL_OIL_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    density: constant(
+      838,
+      around(25, 5),
+      MINERAL_OIL_DATA,
+      `at 25 °C; ${FROM_MEMORY}; inside the pharmacopoeial specific-gravity range 0.818–0.880 (${USP_LIGHT_MINERAL_OIL.key})`,
+    ),
     viscosity: constant(838 * 30e-6, around(25, 3), MINERAL_OIL_DATA, `≈ 30 cSt at 25 °C × density; ${FROM_MEMORY}`),
     surfaceTension: constant(30e-3, around(25, 5), MINERAL_OIL_DATA, `typical value; ${FROM_MEMORY}`),
     surfaceTensionDispersive: constant(

@@ -183,6 +183,14 @@ export const MINERAL_OIL_DATA: Reference = {
     'product specifications (density at 25 °C; kinematic viscosity grade; recalled, not re-read).',
 };
 
+export const USP_LIGHT_MINERAL_OIL: Reference = {
+  key: 'usp32-light-mineral-oil',
+  citation:
+    'United States Pharmacopeia 32 – National Formulary 27 (2009), monograph Topical Light Mineral Oil (Light ' +
+    'Mineral Oil suitably packaged): specific gravity between 0.818 and 0.880; kinematic viscosity between 3.0 ' +
+    'and 34.4 mm²/s at 40.0 °C (capillary viscometer). Read in the drugfuture.com reproduction of the monograph.',
+};
+
 const CRC_2014 = 'W. M. Haynes (ed.) (2014), CRC Handbook of Chemistry and Physics, 95th ed., CRC Press';
 
 export const CRC_ORGANIC_CONSTANTS: Reference = {

@@ -190,6 +190,18 @@ describe('catalogue contents', () => {
 describe('catalogueListing', () => {
   const { fluids: listing, references } = catalogueListing();
 
+  it('lists the reference of every source key a description or safety note names (flash points, safety mechanisms, pharmacopoeia)', () => {
+    const keys = new Set(references.map((r) => r.key));
+    for (const key of ['serat2017', 'iec60079-20-1-2010', 'astm-d7094-dodecane', 'pacansky-waltman1997', 'xu2012-gallium-oxide', 'usp32-light-mineral-oil']) {
+      expect(keys.has(key), key).toBe(true);
+    }
+    for (const entry of listing) {
+      for (const match of `${entry.description} ${entry.safety ?? ''}`.matchAll(/\(([a-z][a-z0-9-]*\d[a-z0-9-]*)\)/g)) {
+        expect(keys.has(match[1]), `${entry.id}: ${match[1]}`).toBe(true);
+      }
+    }
+  });
+
   it('describes every fluid and survives a JSON round trip unchanged', () => {
     expect(listing.map((f) => f.id)).toEqual(fluidIds());
     expect(JSON.parse(JSON.stringify(references))).toEqual(references);

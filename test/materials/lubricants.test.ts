@@ -197,6 +197,19 @@ describe('catalogue names', () => {
   });
 });
 
+describe('light mineral oil', () => {
+  // USP 32–NF 27, Topical Light Mineral Oil: specific gravity 0.818–0.880. Water at 25 °C, 997.05 kg/m³ (IAPWS SR6-08
+  // through the catalogue), as the reference for the specific gravity; the range is wide enough that 20 or 25 °C water
+  // makes no difference here.
+  it('lists a density inside the pharmacopoeial specific-gravity range 0.818–0.880', () => {
+    const water = getFluid('water')!.properties.density!.at(298.15);
+    const oil = getFluid('mineral-oil-light')!.properties.density!.at(298.15);
+    expect(oil / water).toBeGreaterThan(0.818);
+    expect(oil / water).toBeLessThan(0.88);
+    expect(getFluid('mineral-oil-light')!.description).toContain('usp32-light-mineral-oil');
+  });
+});
+
 describe('fluorinated oils', () => {
   it('lists the CRC Handbook density of perfluorodecalin, 1930.5 kg/m³ (Physical Constants of Organic Compounds as transcribed in the chemicals library, which drops the temperature of the entry: 20 or 25 °C)', () => {
     const density = getFluid('perfluorodecalin')!.properties.density!;
