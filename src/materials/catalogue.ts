@@ -2,7 +2,8 @@
  * The built-in fluid catalogue: water and seawater here, the lubricant
  * families in their own modules (alkanes, silicones, lubricants). Every
  * property names its source; a value that was recalled and could not be
- * confirmed against that source during writing carries `note: 'from memory …'`.
+ * confirmed against that source during writing carries the recalled-value tag
+ * of records.ts in its note.
  * Temperatures are kelvin, values SI.
  */
 import { REFERENCES, type Reference } from '../core/references.js';
