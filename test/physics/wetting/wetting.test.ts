@@ -23,7 +23,8 @@ describe('interfacial tension (Fowkes 1964)', () => {
     // Exact arithmetic of the Fowkes rule with Fowkes' own inputs (γ_w = 72.8, γ_w^d = 21.8, γ_o = 27.5 mN/m):
     expect(value).toBeCloseTo(0.0275 + 0.0728 - 2 * Math.sqrt(0.0275 * 0.0218), 15);
     expect(value * 1e3).toBeCloseTo(51.33, 2);
-    // Measured n-hexadecane/water at 20 °C, 53.3 mN/m: Goebel & Lunkenheimer 1997, Langmuir 13, 369 (value from memory).
+    // Measured n-hexadecane/water at 20 °C, 53.3 mN/m: Goebel & Lunkenheimer 1997, Langmuir 13, 369 (value from memory:
+    // searched by title, authors and the pair "Goebel and Lunkenheimer" without a readable page).
     // The estimate must fall within 5 % of the measurement.
     expect(Math.abs(value * 1e3 - 53.3) / 53.3).toBeLessThan(0.05);
   });
