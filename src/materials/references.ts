@@ -308,12 +308,10 @@ export const ROSEN_KUNJAPPU_2012: Reference = {
   citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
 };
 
-export const CIAAW_2021: Reference = {
-  key: 'ciaaw2021',
+export const IUPAC_ATOMIC_WEIGHTS_1995: Reference = {
+  key: 'iupac-atomic-weights-1995',
   citation:
-    'Prohaska, T., Irrgeher, J., Benefield, J., et al. (2022). Standard atomic weights of the elements 2021 ' +
-    '(IUPAC Technical Report). Pure and Applied Chemistry 94(5), 573–600. Molar masses of the catalogue ' +
-    'surfactants are computed from their formulas with the conventional atomic weights of this table ' +
-    '(C 12.011, H 1.008, O 15.999, S 32.06, Na 22.990; from memory).',
-  doi: '10.1515/pac-2019-0603',
+    'Coplen, T. B. (1996). Atomic weights of the elements 1995 (IUPAC Technical Report). Pure and Applied ' +
+    'Chemistry 68(12), 2339–2359, Table 2 (C 12.0107, H 1.00794, O 15.9994, Na 22.989770, S 32.066). Molar ' +
+    'masses of the catalogue surfactants are computed from their formulas with these weights.',
 };

@@ -18,7 +18,7 @@ import type { Warning } from '../core/notes.js';
 import { REFERENCES, type Reference } from '../core/references.js';
 import { userSurfactant, userSurfactants, type CatalogueOrigin } from './user-catalogue.js';
 import { RECALLED_TAG } from './records.js';
-import { CHANG_FRANSES_1995, CIAAW_2021, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
+import { CHANG_FRANSES_1995, IUPAC_ATOMIC_WEIGHTS_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
 
 
 
@@ -69,7 +69,7 @@ const R = {
   landel2020: REFERENCES.landel2020,
   mukerjee1971: MUKERJEE_MYSELS_1971,
   rosen2012: ROSEN_KUNJAPPU_2012,
-  ciaaw2021: CIAAW_2021,
+  atomicWeights: IUPAC_ATOMIC_WEIGHTS_1995,
 };
 
 
@@ -90,7 +90,7 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
       source: R.mukerjee1971,
       note: 'about 8.2 mM at 25 °C without added salt; from memory (the compilation lists values near 8.1–8.3 mM)',
     },
-    molarMass: { value: 0.28838, source: R.ciaaw2021, note: 'C12H25NaO4S: 288.38 g/mol from the conventional atomic weights' },
+    molarMass: { value: 0.28838, source: R.atomicWeights, note: 'C12H25NaO4S: 288.38 g/mol' },
     interfaces: {
       'air-water': {
         maximumSurfaceExcess: { value: 3.9e-6, source: R.chang1995, note: 'as used by Landel et al. (2020) from Chang & Franses (1995)' },
@@ -123,9 +123,9 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
     bulkDiffusivity: { value: 2.6e-10, source: R.chang1995, note: 'from memory' },
     criticalMicelleConcentration: { value: 0.24, source: R.mukerjee1971, note: 'about 0.2–0.3 mM at 25 °C; from memory' },
     molarMass: {
-      value: 0.62483,
-      source: R.ciaaw2021,
-      note: 'mean of the polydisperse ethoxylate, C14H22O(C2H4O)n with the n = 9.5 of the description (from memory): 624.83 g/mol',
+      value: 0.62482,
+      source: R.atomicWeights,
+      note: 'mean of the polydisperse ethoxylate, C14H22O(C2H4O)n with the n = 9.5 the description states: 624.82 g/mol',
     },
     interfaces: {
       'air-water': {
