@@ -15,6 +15,7 @@ import healthPlugin from './plugins/health.js';
 import docsPlugin from './plugins/docs.js';
 import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
+import sweepRoutes from './routes/sweep.js';
 import { createSolverPool, type SolverPool } from './pool.js';
 import { computeSafely } from './worker.js';
 
@@ -126,5 +127,6 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   await app.register(docsPlugin);
   await app.register(catalogueRoutes);
   await app.register(calculationRoutes, { pool });
+  await app.register(sweepRoutes, { pool, config });
   return app;
 }

@@ -29,6 +29,10 @@ export interface ServiceConfig {
   requestTimeoutMs: number;
   /** Idle keep-alive connections are closed after this long, ms. */
   keepAliveTimeoutMs: number;
+  /** Most points one sweep request (one shard) may compute (413 beyond). */
+  sweepMaxPoints: number;
+  /** Compute budget of one sweep point, ms (the point fails with 'over its time budget' beyond). */
+  sweepPointTimeoutMs: number;
 }
 
 function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0): number {
@@ -65,6 +69,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
+    sweepMaxPoints: intFrom(env, 'OILSKIN_SWEEP_MAX_POINTS', 100_000, 1),
+    sweepPointTimeoutMs: intFrom(env, 'OILSKIN_SWEEP_POINT_TIMEOUT_MS', 20_000, 1),
   };
   // Node refuses a header limit longer than the whole-request limit.
   if (config.headersTimeoutMs > config.requestTimeoutMs) {

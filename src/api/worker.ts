@@ -3,8 +3,12 @@ import { computeChecked, problemFromError, type ComputeFailure } from './calcula
 import type { CalculationOutput } from './envelope.js';
 import type { SolverTask, TaskSkipped } from './pool.js';
 import { calculationByName } from './routes/index.js';
+import { runSweepBatch, SWEEP_BATCH_TASK } from './sweep/points.js';
 
-export default function runInWorker(task: SolverTask): CalculationOutput | ComputeFailure | TaskSkipped {
+/** Tasks a solver thread runs besides the calculations, by name. */
+const TASKS: Record<string, (input: unknown) => unknown> = { [SWEEP_BATCH_TASK]: runSweepBatch };
+
+export default function runInWorker(task: SolverTask): unknown {
   // Given up while it waited (queue budget, client gone): nothing to compute.
   if (task.cancelled && Atomics.load(task.cancelled, 0) === 1) {
     task.started?.close();
@@ -16,7 +20,20 @@ export default function runInWorker(task: SolverTask): CalculationOutput | Compu
   return computeSafely(task.name, task.input);
 }
 
-export function computeSafely(name: string, input: unknown): CalculationOutput | ComputeFailure {
+export function computeSafely(name: string, input: unknown): unknown {
+  const task = Object.hasOwn(TASKS, name) ? TASKS[name] : undefined;
+  if (task) {
+    try {
+      return task(input);
+    } catch (error) {
+      return { failed: true, problem: problemFromError(error), message: error instanceof Error ? error.message : String(error) } satisfies ComputeFailure;
+    }
+  }
+  return computeCalculation(name, input);
+}
+
+/** One calculation's compute step by its name; failures come back as data. */
+export function computeCalculation(name: string, input: unknown): CalculationOutput | ComputeFailure {
   const definition = calculationByName(name);
   if (!definition) return { failed: true, problem: problemFromError(new Error(`unknown calculation ${name}`)), message: 'unknown calculation' };
   try {
