@@ -1,4 +1,4 @@
-/** Solver-thread side of the pool: run one calculation's compute step; failures come back as data. */
+/** Solver-thread side of the pool: run one calculation's compute step, or a named task (a batch of sweep points); failures come back as data. */
 import { computeChecked, problemFromError, type ComputeFailure } from './calculation.js';
 import type { CalculationOutput } from './envelope.js';
 import type { SolverTask, TaskSkipped } from './pool.js';
@@ -12,7 +12,7 @@ export default function runInWorker(task: SolverTask): unknown {
   // Given up while it waited (queue budget, client gone): nothing to compute.
   if (task.cancelled && Atomics.load(task.cancelled, 0) === 1) {
     task.started?.close();
-    return { skipped: true };
+    return { skipped: true } satisfies TaskSkipped;
   }
   // Tell the pool the compute budget starts now (the time before was queue wait).
   task.started?.postMessage(0);
