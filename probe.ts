@@ -2,17 +2,16 @@ import { buildApp } from './src/api/app.js';
 import { testConfig } from './src/api/config.js';
 const app = await buildApp(testConfig());
 await app.ready();
-const body = {
-  calculation: 'flow',
-  design: { workingFluid: { id: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' }, texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' } },
-  axes: [ { path: 'flow.bulkVelocity', range: { from: '0.1 m/s', to: '2 m/s', points: 3 } }, { path: 'texture.grooveWidth', values: ['20 um', '150 um'] } ],
-};
-for (const accept of ['application/json', 'text/csv', 'application/x-ndjson']) {
-  const res = await app.inject({ method: 'POST', url: '/v1/sweep', payload: body, headers: { accept } });
-  console.log(res.statusCode, res.headers['content-type']); console.log(res.body.slice(0, 1500));
-}
-const bad = await app.inject({ method: 'POST', url: '/v1/sweep', payload: { ...body, axes: [{ path: 'texture.grooveWidht', values: [1] }] } });
-console.log(bad.statusCode, bad.body);
-const big = await app.inject({ method: 'POST', url: '/v1/sweep', payload: { ...body, axes: [{ path: 'flow.bulkVelocity', range: { from: 0.1, to: 2, points: 1000000 } }] } });
-console.log(big.statusCode, big.body);
+const body = { design: {
+  texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '25 um', grooveLength: '20 mm' },
+  lubricant: { id: 'n-decane', temperature: '20 degC' }, workingFluid: { id: 'water', temperature: '20 degC' },
+  contactAngles: { underWorkingFluid: { advancing: 120, receding: 80 } },
+  flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' }, options: { method: 'closed-form' } },
+  search: { grooveWidth: { min: '5 um', max: '300 um' }, interfaceFraction: { min: 0.5, max: 0.5 }, grooveDepth: { min: '2 um', max: '200 um' }, coarsePoints: 5, refinements: 2 },
+  requirements: { minDragReduction: 0.02, minRetainedFraction: 0.5 } };
+const t0 = performance.now();
+const res = await app.inject({ method: 'POST', url: '/v1/design-window', payload: body });
+const j = res.json();
+console.log(res.statusCode, performance.now() - t0, j.candidates, j.evaluated, j.feasibleCandidates, j.limitingShare, j.best, j.pareto?.length, j.boundary?.length, j.detail);
+console.log(j.plane?.labels.map((r: string[]) => r.map((l) => l[0]).join('')).reverse().join('\n'));
 await app.close();

@@ -16,6 +16,7 @@ import docsPlugin from './plugins/docs.js';
 import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
 import sweepRoutes from './routes/sweep.js';
+import designWindowRoutes from './routes/design-window.js';
 import { createSolverPool, type SolverPool } from './pool.js';
 import { computeSafely } from './worker.js';
 
@@ -128,5 +129,6 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   await app.register(catalogueRoutes);
   await app.register(calculationRoutes, { pool });
   await app.register(sweepRoutes, { pool, config });
+  await app.register(designWindowRoutes, { pool, config });
   return app;
 }

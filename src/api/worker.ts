@@ -4,9 +4,10 @@ import type { CalculationOutput } from './envelope.js';
 import type { SolverTask, TaskSkipped } from './pool.js';
 import { calculationByName } from './routes/index.js';
 import { runSweepBatch, SWEEP_BATCH_TASK } from './sweep/points.js';
+import { runWindowBatch, WINDOW_BATCH_TASK } from './window/run.js';
 
 /** Tasks a solver thread runs besides the calculations, by name. */
-const TASKS: Record<string, (input: unknown) => unknown> = { [SWEEP_BATCH_TASK]: runSweepBatch };
+const TASKS: Record<string, (input: unknown) => unknown> = { [SWEEP_BATCH_TASK]: runSweepBatch, [WINDOW_BATCH_TASK]: runWindowBatch };
 
 export default function runInWorker(task: SolverTask): unknown {
   // Given up while it waited (queue budget, client gone): nothing to compute.
