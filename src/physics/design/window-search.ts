@@ -119,7 +119,10 @@ export async function searchWindow<T extends Labelled>(
   const settled: { lo: number[]; step: number }[] = [];
   while (step > 1) {
     const boundary: number[][] = [];
-    for (const lo of cells) (uniform(lo, step) ? settled.push({ lo, step }) : boundary.push(lo));
+    for (const lo of cells) {
+      if (uniform(lo, step)) settled.push({ lo, step });
+      else boundary.push(lo);
+    }
     const half = step / 2;
     await ensure(boundary.flatMap((lo) => lattice(lo, lo.map((i, a) => (fixed[a] ? i : i + step)), half)));
     cells = boundary.flatMap((lo) => lattice(lo, lo.map((i, a) => (fixed[a] ? i : i + half)), half));
