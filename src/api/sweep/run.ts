@@ -70,7 +70,7 @@ export async function* sweepRows(plan: SweepPlan, request: unknown, pool: Solver
   }
 
   let next = plan.shard.start;
-  let size = 8;
+  let size = 32;
   let msPerPoint = 0;
   const inFlight: { promise: Promise<Row[]>; points: number; issued: number }[] = [];
   const issue = () => {
@@ -93,7 +93,7 @@ export async function* sweepRows(plan: SweepPlan, request: unknown, pool: Solver
       const head = inFlight.shift()!;
       const rows = await head.promise;
       const perPoint = (performance.now() - head.issued) / head.points / Math.max(1, inFlight.length + 1);
-      msPerPoint = msPerPoint === 0 ? perPoint : 0.7 * msPerPoint + 0.3 * perPoint;
+      msPerPoint = msPerPoint === 0 ? perPoint : 0.5 * msPerPoint + 0.5 * perPoint;
       size = Math.max(1, Math.min(MAX_BATCH, Math.floor(TARGET_BATCH_MS / Math.max(msPerPoint, 1e-4))));
       issue();
       done += rows.length;
