@@ -7,7 +7,7 @@
  *     the questions: credited drag, retained share at the service time, waves; inline, one thread);
  *  4. a design window over about 10⁴ candidates (105 × 105 lattice, pitch fraction fixed) on the pool, wall time;
  *  5. peak RSS while streaming --rows NDJSON rows of a flow sweep to a sink that honours back-pressure.
- * Run: npx tsx bench/sweep.ts [--threads 2] [--points 20000] [--rows 1000000] [--skip-window] [--skip-rss]
+ * Run: npx tsx bench/sweep.ts [--threads 2] [--points 20000] [--rows 1000000] [--skip-window] [--skip-rss] [--only-rss]
  */
 import os from 'node:os';
 import { Writable } from 'node:stream';
@@ -71,10 +71,13 @@ function flowRate(n: number): number {
 const fmt = (x: number) => Math.round(x).toLocaleString('en-US');
 console.log(`bench/sweep.ts — ${os.cpus().length} cores ${os.cpus()[0]?.model.trim()}, Node ${process.version}, load average ${os.loadavg().map((l) => l.toFixed(1)).join(' ')}, threads ${threads}`);
 
+const only = process.argv.includes('--only-rss');
+let b = Number.NaN;
 // 1 and 2: alternate baseline and sweep, three rounds, medians.
 const inline = pool(0);
-const threaded = pool(threads);
+const threaded = pool(only ? 0 : threads);
 await threaded.ready();
+if (!only) {
 flowRate(2000);
 await sweepRate(2000, inline, 2);
 await sweepRate(2000, threaded, 2 * threads);
@@ -87,13 +90,14 @@ for (let round = 0; round < 3; round++) {
   sweepPool.push(await sweepRate(points, threaded, 2 * threads));
 }
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
-const b = median(base);
+b = median(base);
 console.log(`/v1/flow compute in process (parse, compute, envelope): ${fmt(b)} points/s`);
 console.log(`flow sweep, inline (one thread): ${fmt(median(sweepInline))} points/s = ${(median(sweepInline) / b).toFixed(2)} × /v1/flow`);
 console.log(`flow sweep, pool of ${threads} threads: ${fmt(median(sweepPool))} points/s = ${(median(sweepPool) / b).toFixed(2)} × /v1/flow`);
+}
 
 // 3: the window's assessment-rule evaluation on one core.
-{
+if (!only) {
   const plan = planWindow(windowRequest(5, 0));
   const candidates = Array.from({ length: 60 }, (_, i) => ({ grooveWidth: 5e-6 * 60 ** (i / 59), pitch: 2 * 5e-6 * 60 ** (i / 59), grooveDepth: 2e-6 * 100 ** (((i * 7) % 60) / 59) }));
   evaluateCandidates(plan.spec.document, plan.spec.requirements, catalogue, candidates.slice(0, 5));
@@ -104,7 +108,7 @@ console.log(`flow sweep, pool of ${threads} threads: ${fmt(median(sweepPool))} p
 }
 
 // 4: design window over ~10⁴ candidates on the pool.
-if (!process.argv.includes('--skip-window')) {
+if (!only && !process.argv.includes('--skip-window')) {
   const request = windowRequest(14, 3);
   const plan = planWindow(request);
   const start = performance.now();
@@ -131,7 +135,12 @@ if (!process.argv.includes('--skip-rss')) {
     write(chunk: Buffer, _encoding, done) {
       const before = written;
       written += chunk.toString().split('\n').length - 1;
-      for (const m of [1e4, 1e5, 5e5, 1e6]) if (before < m && written >= m) marks.push(`${m.toExponential(0)} rows ${(process.memoryUsage().rss / 2 ** 20).toFixed(0)} MB`);
+      for (const m of [1e4, 1e5, 2e5, 5e5, 1e6]) {
+        if (before < m && written >= m) {
+          const use = process.memoryUsage();
+          marks.push(`${m.toExponential(0)} rows: RSS ${(use.rss / 2 ** 20).toFixed(0)} MB, main heap ${(use.heapUsed / 2 ** 20).toFixed(0)} MB`);
+        }
+      }
       done();
     },
   });
