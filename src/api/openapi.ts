@@ -10,6 +10,7 @@ import { SERVICE_VERSION } from './envelope.js';
 import { CALCULATIONS } from './routes/index.js';
 import { FluidsResponse, SurfactantsResponse } from './schemas/responses/catalogue.js';
 import { registerSweepPaths } from './sweep/openapi.js';
+import { registerWindowPaths } from './window/openapi.js';
 
 const problemContent = { 'application/problem+json': { schema: ProblemSchema } };
 
@@ -46,6 +47,7 @@ export function buildOpenApiDocument(): Record<string, unknown> {
   }
 
   registerSweepPaths(registry, problemContent, errorResponses);
+  registerWindowPaths(registry, problemContent, errorResponses);
 
   registry.registerPath({
     method: 'get',

@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import type { FastifyInstance } from 'fastify';
 import { makeApp } from '../helpers.js';
+import { SweepResponseSchema } from '../../../src/api/sweep/openapi.js';
 
 const design = {
   workingFluid: { id: 'water', temperature: '20 degC' },
@@ -92,6 +93,8 @@ describe('CSV', () => {
     expect(records[1]!['result.wallShearStress (Pa)']).toBe('');
     expect(Number(records[2]!['result.wallShearStress (Pa)'])).toBeGreaterThan(0);
     const json = (await sweep(body)).json();
+    // The answer is what the OpenAPI document says it is.
+    SweepResponseSchema.parse(json);
     expect(json.failed).toBe(1);
     expect(json.points[1].problem.errors[0].path).toBe('texture.grooveWidth');
   });

@@ -10,6 +10,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
 import { makeApp } from '../helpers.js';
+import { DesignWindowResponseSchema } from '../../../src/api/window/openapi.js';
 
 const design = {
   texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '25 um', grooveLength: '20 mm' },
@@ -55,6 +56,7 @@ async function marginsFromEndpoints(d: Design): Promise<number[]> {
 
 describe('design window', () => {
   it('has feasible designs, a boundary, a best design, and evaluates fewer designs than the box holds', () => {
+    DesignWindowResponseSchema.parse(window);
     expect(window.feasible.length).toBeGreaterThan(0);
     expect(window.boundary.length).toBeGreaterThan(0);
     expect(window.best.label).toBe('feasible');
