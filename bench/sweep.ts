@@ -9,6 +9,7 @@
  *  5. peak RSS while streaming --rows NDJSON rows of a flow sweep to a sink that honours back-pressure.
  * Run: npx tsx bench/sweep.ts [--threads 2] [--points 20000] [--rows 1000000] [--skip-window] [--skip-rss] [--only-rss]
  */
+import { readFileSync } from 'node:fs';
 import os from 'node:os';
 import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
@@ -34,19 +35,9 @@ const rows = arg('rows', 1_000_000);
 
 const flowDesign = { workingFluid: { id: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' }, texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' } };
 const flowSweep = (n: number) => ({ calculation: 'flow', design: flowDesign, axes: [{ path: 'flow.bulkVelocity', range: { from: '0.01 m/s', to: '5 m/s', points: n } }] });
-const windowDesign = {
-  texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '25 um', grooveLength: '20 mm' },
-  lubricant: { id: 'n-decane', temperature: '20 degC' },
-  workingFluid: { id: 'water', temperature: '20 degC' },
-  contactAngles: { underWorkingFluid: { advancing: 120, receding: 80 } },
-  flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
-  options: { method: 'closed-form' },
-};
-const windowRequest = (coarsePoints: number, refinements: number) => ({
-  design: windowDesign,
-  search: { grooveWidth: { min: '5 um', max: '300 um' }, interfaceFraction: { min: 0.5, max: 0.5 }, grooveDepth: { min: '2 um', max: '200 um' }, coarsePoints, refinements },
-  requirements: { minDragReduction: 0.02, minRetainedFraction: 0.5 },
-});
+/** The README's worked window (examples/design-window.json) on a lattice of the size asked for. */
+const demoWindow = JSON.parse(readFileSync(new URL('../examples/design-window.json', import.meta.url), 'utf8')) as { search: Record<string, unknown> };
+const windowRequest = (coarsePoints: number, refinements: number) => ({ ...demoWindow, search: { ...demoWindow.search, coarsePoints, refinements } });
 
 function pool(n: number) {
   return createSolverPool({ threads: n, maxQueued: 64, queueTimeoutMs: 3_600_000, solveTimeoutMs: 600_000, workerMemoryMb: 512, inline: computeSafely });

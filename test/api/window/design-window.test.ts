@@ -9,18 +9,13 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';
-import { makeApp } from '../helpers.js';
+import { example, makeApp } from '../helpers.js';
 import { DesignWindowResponseSchema } from '../../../src/api/window/openapi.js';
 
-const design = {
-  texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '25 um', grooveLength: '20 mm' },
-  lubricant: { id: 'n-decane', temperature: '20 degC' },
-  workingFluid: { id: 'water', temperature: '20 degC' },
-  contactAngles: { underWorkingFluid: { advancing: 120, receding: 80 } },
-  flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
-  options: { method: 'closed-form' },
-};
-const search = { grooveWidth: { min: '5 um', max: '300 um' }, interfaceFraction: { min: 0.5, max: 0.5 }, grooveDepth: { min: '2 um', max: '200 um' }, coarsePoints: 5, refinements: 2 };
+/** The README's worked window (an invented demo scenario), searched on a smaller lattice to keep the test short. */
+const demo = example('design-window.json') as { design: Record<string, unknown> & { texture: Record<string, unknown> }; search: Record<string, unknown>; requirements: Record<string, unknown> };
+const design = demo.design;
+const search = { ...demo.search, coarsePoints: 5, refinements: 2 };
 const requirements = { minDragReduction: 0.02, minRetainedFraction: 0.5, serviceTime: 7200 };
 
 interface Design {
