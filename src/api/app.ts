@@ -15,6 +15,8 @@ import healthPlugin from './plugins/health.js';
 import docsPlugin from './plugins/docs.js';
 import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
+import sweepRoutes from './routes/sweep.js';
+import designWindowRoutes from './routes/design-window.js';
 import { createSolverPool, type SolverPool } from './pool.js';
 import { computeSafely } from './worker.js';
 import { loadUserCatalogue } from './user-catalogue-file.js';
@@ -136,5 +138,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   await app.register(docsPlugin);
   await app.register(catalogueRoutes);
   await app.register(calculationRoutes, { pool });
+  await app.register(sweepRoutes, { pool, config });
+  await app.register(designWindowRoutes, { pool, config });
   return app;
 }

@@ -31,6 +31,10 @@ export interface ServiceConfig {
   keepAliveTimeoutMs: number;
   /** A lab's own fluids and surfactants (JSON or YAML), added to the built-in catalogue at start-up. */
   catalogueFile?: string;
+  /** Most points one sweep request (one shard) may compute (413 beyond). */
+  sweepMaxPoints: number;
+  /** Compute budget of one sweep point, ms (the point fails with 'over its time budget' beyond). */
+  sweepPointTimeoutMs: number;
 }
 
 /** The value of `--catalogue file` (or `--catalogue=file`) in command-line arguments, if given. */
@@ -80,6 +84,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: readonly 
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
     ...(catalogueFile === undefined ? {} : { catalogueFile }),
+    sweepMaxPoints: intFrom(env, 'OILSKIN_SWEEP_MAX_POINTS', 100_000, 1),
+    sweepPointTimeoutMs: intFrom(env, 'OILSKIN_SWEEP_POINT_TIMEOUT_MS', 20_000, 1),
   };
   // Node refuses a header limit longer than the whole-request limit.
   if (config.headersTimeoutMs > config.requestTimeoutMs) {

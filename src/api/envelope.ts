@@ -28,8 +28,29 @@ export function inputsHash(inputs: unknown): string {
   return createHash('sha256').update(canonicalJson(inputs)).digest('hex');
 }
 
+/** Whether any number in a value is NaN or infinite (no allocation: the common, all-finite case stays cheap). */
+function containsNonFinite(value: unknown): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value);
+  if (value === null || typeof value !== 'object') return false;
+  if (ArrayBuffer.isView(value)) {
+    const view = value as unknown as ArrayLike<number>;
+    for (let i = 0; i < view.length; i++) if (!Number.isFinite(view[i])) return true;
+    return false;
+  }
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (containsNonFinite(value[i])) return true;
+    return false;
+  }
+  for (const k in value) if (Object.hasOwn(value, k) && containsNonFinite((value as Record<string, unknown>)[k])) return true;
+  return false;
+}
+
 /** Path of the first non-finite number in a value, or null when every number is finite. */
 export function findNonFinite(value: unknown, path = ''): string | null {
+  return containsNonFinite(value) ? locateNonFinite(value, path) : null;
+}
+
+function locateNonFinite(value: unknown, path: string): string | null {
   if (typeof value === 'number') return Number.isFinite(value) ? null : path || '(root)';
   if (value === null || typeof value !== 'object') return null;
   if (ArrayBuffer.isView(value)) {
@@ -39,13 +60,13 @@ export function findNonFinite(value: unknown, path = ''): string | null {
   }
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
-      const p = findNonFinite(value[i], `${path}[${i}]`);
+      const p = locateNonFinite(value[i], `${path}[${i}]`);
       if (p) return p;
     }
     return null;
   }
   for (const [k, v] of Object.entries(value as Record<string, unknown>)) {
-    const p = findNonFinite(v, path ? `${path}.${k}` : k);
+    const p = locateNonFinite(v, path ? `${path}.${k}` : k);
     if (p) return p;
   }
   return null;

@@ -9,6 +9,8 @@ import { ProblemSchema } from './problem.js';
 import { SERVICE_VERSION } from './envelope.js';
 import { CALCULATIONS } from './routes/index.js';
 import { FluidsResponse, SurfactantsResponse } from './schemas/responses/catalogue.js';
+import { registerSweepPaths } from './sweep/openapi.js';
+import { registerWindowPaths } from './window/openapi.js';
 
 const problemContent = { 'application/problem+json': { schema: ProblemSchema } };
 
@@ -43,6 +45,9 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       responses: { 200: { description: 'The result with its inputs, warnings, assumptions, references and provenance', content: { 'application/json': { schema: c.response } } }, ...errorResponses },
     });
   }
+
+  registerSweepPaths(registry, problemContent, errorResponses);
+  registerWindowPaths(registry, problemContent, errorResponses);
 
   registry.registerPath({
     method: 'get',

@@ -24,13 +24,22 @@ import type { UserCatalogueData } from '../materials/user-catalogue.js';
 import { problem, ProblemError } from './problem.js';
 
 export interface SolverPool {
-  /** Run one calculation's compute step; `signal` aborts it (queued or running). */
-  run(name: string, input: unknown, options?: { signal?: AbortSignal }): Promise<CalculationOutput>;
+  /**
+   * Run one task on a thread: a calculation's compute step by its name, or another task the thread knows
+   * (a batch of sweep points). `signal` aborts it (queued or running); `solveTimeoutMs` replaces the pool's
+   * compute budget for this task (a batch of sweep points gets its points' budgets together).
+   */
+  run<T = CalculationOutput>(name: string, input: unknown, options?: RunOptions): Promise<T>;
   /** Solves waiting for a thread, solves computing, and threads lost (killed or failed, then replaced) so far. */
   stats(): PoolStats;
   /** Resolves once every thread has loaded the model code (at once without threads). */
   ready(): Promise<void>;
   close(): Promise<void>;
+}
+
+export interface RunOptions {
+  signal?: AbortSignal;
+  solveTimeoutMs?: number;
 }
 
 export interface PoolStats {
@@ -52,7 +61,7 @@ export interface PoolOptions {
   /** The validated user catalogue, installed in every solver thread before it takes a task. */
   userCatalogue?: UserCatalogueData;
   /** Inline runner used when threads = 0. */
-  inline: (name: string, input: unknown) => CalculationOutput | ComputeFailure;
+  inline: (name: string, input: unknown) => unknown;
   /** Told about thread failures that belong to no request (logged by the app). */
   onThreadError?: (error: unknown) => void;
 }
@@ -82,9 +91,9 @@ export class ClientGoneError extends Error {
   }
 }
 
-function unwrap(out: CalculationOutput | ComputeFailure): CalculationOutput {
-  if ('failed' in out) throw new ProblemError(out.problem);
-  return out;
+function unwrap<T>(out: unknown): T {
+  if (typeof out === 'object' && out !== null && 'failed' in out) throw new ProblemError((out as ComputeFailure).problem);
+  return out as T;
 }
 
 /** Where the solver-thread entry lives: the compiled CommonJS file, or its TypeScript source under tsx. */
@@ -101,7 +110,7 @@ function workerEntry(): { filename: string; execArgv: string[] } {
 export function createSolverPool(options: PoolOptions): SolverPool {
   if (options.threads === 0) {
     return {
-      run: async (name, input) => unwrap(options.inline(name, input)),
+      run: async <T>(name: string, input: unknown) => unwrap<T>(options.inline(name, input)),
       stats: () => ({ waiting: 0, running: 0, threadsLost: 0 }),
       ready: async () => {},
       close: async () => {},
@@ -155,7 +164,7 @@ export function createSolverPool(options: PoolOptions): SolverPool {
     return new ProblemError(problem(503, slug, 'The service is busy', detail), { 'retry-after': retryAfterSeconds() });
   }
 
-  function stopError(why: StopReason): Error {
+  function stopError(why: StopReason, solveTimeoutMs: number): Error {
     switch (why) {
       case 'client':
         return new ClientGoneError();
@@ -167,7 +176,7 @@ export function createSolverPool(options: PoolOptions): SolverPool {
             422,
             'solve-timeout',
             'The solve is over its time budget',
-            `The calculation did not finish within ${options.solveTimeoutMs} ms of compute. Ask for less work: method "closed-form" where the endpoint offers it, fewer sensitivity or sweep points, or a texture whose groove width, depth and pitch are closer to one another.`,
+            `The calculation did not finish within ${solveTimeoutMs} ms of compute. Ask for less work: method "closed-form" where the endpoint offers it, fewer sensitivity or sweep points, or a texture whose groove width, depth and pitch are closer to one another.`,
           ),
         );
     }
@@ -185,8 +194,9 @@ export function createSolverPool(options: PoolOptions): SolverPool {
   }
 
   return {
-    async run(name, input, runOptions = {}) {
+    async run<T>(name: string, input: unknown, runOptions: RunOptions = {}): Promise<T> {
       const callerSignal = runOptions.signal;
+      const solveTimeoutMs = runOptions.solveTimeoutMs ?? options.solveTimeoutMs;
       if (callerSignal?.aborted) throw new ClientGoneError();
       if (closing) throw busy('This replica is shutting down; retry on another.', 'draining');
       if (waiting >= options.maxQueued) throw busy(`${waiting} solves are already waiting for a solver thread; retry shortly.`);
@@ -200,9 +210,9 @@ export function createSolverPool(options: PoolOptions): SolverPool {
       let computeTimer: NodeJS.Timeout | undefined;
       waiting++;
 
-      return new Promise<CalculationOutput>((resolve, reject) => {
+      return new Promise<T>((resolve, reject) => {
         let settled = false;
-        const settle = (outcome: () => CalculationOutput) => {
+        const settle = (outcome: () => T) => {
           if (settled) return;
           settled = true;
           if (queued) waiting--;
@@ -225,7 +235,7 @@ export function createSolverPool(options: PoolOptions): SolverPool {
             // (it may be loading the model code, or about to be free for the next solve).
             Atomics.store(cancelled, 0, 1);
             settle(() => {
-              throw stopError(why);
+              throw stopError(why, solveTimeoutMs);
             });
           } else {
             // Computing: the only way to stop a synchronous solve is to end its thread; piscina replaces it.
@@ -243,20 +253,20 @@ export function createSolverPool(options: PoolOptions): SolverPool {
           clearTimeout(queueTimer);
           // Cancelled in the instant between the thread's check and its start message: stop it now.
           if (stoppedBy) controller.abort();
-          else computeTimer = setTimeout(() => stop('compute'), options.solveTimeoutMs);
+          else computeTimer = setTimeout(() => stop('compute'), solveTimeoutMs);
         });
 
         const task: SolverTask = { name, input, started: port2, cancelled };
         piscina.run(task, { signal: controller.signal, transferList: [port2] }).then(
-          (out: CalculationOutput | ComputeFailure | TaskSkipped) =>
+          (out: unknown) =>
             settle(() => {
-              if ('skipped' in out) throw stopError(stoppedBy ?? 'client');
+              if (typeof out === 'object' && out !== null && 'skipped' in (out as TaskSkipped)) throw stopError(stoppedBy ?? 'client', solveTimeoutMs);
               if (startedAt > 0) typicalComputeMs = 0.8 * typicalComputeMs + 0.2 * (performance.now() - startedAt);
-              return unwrap(out);
+              return unwrap<T>(out);
             }),
           (error: unknown) =>
             settle(() => {
-              if (stoppedBy) throw stopError(stoppedBy);
+              if (stoppedBy) throw stopError(stoppedBy, solveTimeoutMs);
               // The pool is being destroyed (shutdown past the drain limit): not a thread failure.
               if (closing) throw busy('This replica is shutting down; retry on another.', 'draining');
               throw threadFailure(error);

@@ -5,7 +5,8 @@
  * fluids and surfactants, as it does for the service.
  * Exit 0 with the envelope on stdout; exit 2 with the problem document on
  * stderr for bad input, or the reasons on stderr for a bad catalogue file;
- * exit 1 for anything else.
+ * exit 1 for anything else. `oilskin sweep` and `oilskin merge-shards` stream
+ * their output (src/cli/sweep.ts, merge.ts).
  */
 import { readFileSync } from 'node:fs';
 import { uninstallUserCatalogue } from '../materials/user-catalogue.js';
@@ -15,12 +16,20 @@ import { CatalogueFileError, loadUserCatalogue } from '../api/user-catalogue-fil
 import { ProblemError } from '../api/problem.js';
 import { safeStringify } from '../api/envelope.js';
 import { CALCULATIONS, calculationByName } from '../api/routes/index.js';
+import { nodeIo, type CliIo } from './io.js';
+import { runMergeCli } from './merge.js';
+import { runSweepCli } from './sweep.js';
 
 function usage(): string {
-  return `usage: oilskin [--catalogue lab.json] <calculation> <file.json | ->\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}`;
+  return `usage: oilskin [--catalogue lab.json] <calculation> <file.json | ->\n       oilskin [--catalogue lab.json] sweep <sweep.json> [--csv out.csv] [--ndjson out.ndjson] [--shard i/n]\n       oilskin merge-shards <shard.ndjson>... [--ndjson merged.ndjson] [--csv merged.csv]\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}`;
 }
 
 type CliResult = { code: number; stdout: string; stderr: string };
+
+/** The arguments without `--catalogue file` / `--catalogue=file`. */
+function withoutCatalogueFlag(argv: readonly string[]): string[] {
+  return argv.filter((arg, i) => !(arg === '--catalogue' || arg.startsWith('--catalogue=') || (i > 0 && argv[i - 1] === '--catalogue')));
+}
 
 export function runCli(
   argv: readonly string[],
@@ -28,7 +37,7 @@ export function runCli(
   env: NodeJS.ProcessEnv = process.env,
 ): CliResult {
   const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
-  const rest = argv.filter((arg, i) => !(arg === '--catalogue' || arg.startsWith('--catalogue=') || (i > 0 && argv[i - 1] === '--catalogue')));
+  const rest = withoutCatalogueFlag(argv);
   if (catalogueFile === undefined) return runCalculation(rest, readInput);
   try {
     loadUserCatalogue(catalogueFile);
@@ -61,4 +70,30 @@ function runCalculation(argv: readonly string[], readInput: (path: string) => st
     const problem = error instanceof ProblemError ? error.problem : problemFromError(error);
     return { code: problem.status < 500 ? 2 : 1, stdout: '', stderr: JSON.stringify(problem, null, 2) + '\n' };
   }
+}
+
+/** The commands that stream their output, by name. */
+const STREAMING: Record<string, (args: readonly string[], io: CliIo) => Promise<number>> = { sweep: runSweepCli, 'merge-shards': runMergeCli };
+
+/** Entry of bin/oilskin.js: run a command, write its output, resolve to the exit code. */
+export async function main(argv: readonly string[], io: CliIo = nodeIo()): Promise<number> {
+  const [name, ...rest] = withoutCatalogueFlag(argv);
+  const streaming = name !== undefined && Object.hasOwn(STREAMING, name) ? STREAMING[name] : undefined;
+  if (streaming) {
+    const catalogueFile = catalogueFlag(argv) ?? (process.env.OILSKIN_CATALOGUE_FILE || undefined);
+    if (catalogueFile !== undefined) {
+      try {
+        loadUserCatalogue(catalogueFile);
+      } catch (error) {
+        if (!(error instanceof CatalogueFileError)) throw error;
+        io.stderr.write(`oilskin: ${error.message}\n`);
+        return 2;
+      }
+    }
+    return streaming(rest, io);
+  }
+  const { code, stdout, stderr } = runCli(argv, io.readText);
+  process.stdout.write(stdout);
+  io.stderr.write(stderr);
+  return code;
 }

@@ -9,7 +9,7 @@ import type { ZodType } from 'zod';
 import { parseBody } from '../calculation.js';
 import { envelope } from '../envelope.js';
 import { ClientGoneError, type SolverPool } from '../pool.js';
-import { computeSafely } from '../worker.js';
+import { computeCalculation } from '../worker.js';
 import { ProblemError } from '../problem.js';
 import { z } from '../schemas/zod.js';
 import { CALCULATIONS } from './index.js';
@@ -54,7 +54,7 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
           gone.release();
         }
       } else {
-        const r = computeSafely(definition.name, input);
+        const r = computeCalculation(definition.name, input);
         if ('failed' in r) throw new ProblemError(r.problem);
         out = r;
       }

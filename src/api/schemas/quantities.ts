@@ -36,9 +36,24 @@ function describe(def: QuantityDefinition): string {
   return `${def.description} [${def.unitLabel}; ${lower}, ≤ ${def.max}].${strings}`;
 }
 
+/**
+ * The definition behind each quantity schema, keyed by the schema's input side, which every copy made by
+ * `.openapi()` or `.optional()` shares: lets a caller that holds a schema (a sweep axis) learn its SI unit.
+ */
+const DEFINITIONS = new WeakMap<object, QuantityDefinition>();
+
+/** The quantity definition of a schema built by {@link quantity} (through optional/openapi copies), else undefined. */
+export function quantityDefinitionOf(schema: unknown): QuantityDefinition | undefined {
+  let s = schema as { _zod?: { def: { type: string; innerType?: unknown; in?: unknown } } } | undefined;
+  while (s?._zod && ['optional', 'nullable', 'default'].includes(s._zod.def.type)) s = s._zod.def.innerType as typeof s;
+  const input = s?._zod?.def.type === 'pipe' ? s._zod.def.in : undefined;
+  return input === undefined ? undefined : DEFINITIONS.get(input as object);
+}
+
 /** Build the schema of one physical quantity; its parsed value is a finite SI number. */
 export function quantity(def: QuantityDefinition) {
   const input = def.acceptsUnitString === false ? z.number() : z.union([z.number(), z.string()]);
+  DEFINITIONS.set(input, def);
   return input
     .transform((raw, ctx): number => {
       let value: number;
