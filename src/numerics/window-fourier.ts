@@ -108,6 +108,8 @@ function scaledOscillatingTail(p: number, n0: number, theta: number): number {
 
 /** Highest power of μ²/α² kept in the tail expansion (ratio ≤ ¼ there and the tail is a small part of the sum, so 14 terms reach rounding). */
 const TAIL_TERMS = 14;
+/** Tail moments whose oscillating part is summed (beyond them it is below 1e-10 of σ for K·2|sin πφ| ≥ 60). */
+const OSCILLATING_TERMS = 4;
 
 export function windowFourierSums(input: WindowSumsInput): WindowSums {
   const { period, halfWidth, wavenumbers } = input;
@@ -130,22 +132,21 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
   const weighted = new Float64Array(kAll + 1);
   const squares = new Float64Array(kAll + 1);
   const inverse = new Float64Array(kAll + 1);
-  // Prefix sums of cos(nθ)/n³ and cos(nθ)/n⁵.
-  const prefix3 = new Float64Array(kAll + 1);
-  const prefix5 = new Float64Array(kAll + 1);
+  // Prefix sums of cos(nθ)/n^p for the first OSCILLATING_TERMS odd powers p = 3, 5, …, and their tails beyond kAll.
+  const prefix: Float64Array[] = Array.from({ length: OSCILLATING_TERMS }, () => new Float64Array(kAll + 1));
   for (let n = 1; n <= kAll; n++) {
     const c = Math.cos(Math.PI * n * fraction);
     weighted[n] = (weight ? weight(n) : 1) * c * c;
     squares[n] = n * n;
     inverse[n] = 1 / n;
-    const oscillation = 2 * c * c - 1; // cos(nθ) = cos(2πnφ)
-    const n3 = n * n * n;
-    prefix3[n] = prefix3[n - 1] + oscillation / n3;
-    prefix5[n] = prefix5[n - 1] + oscillation / (n3 * n * n);
+    let term = (2 * c * c - 1) / (n * n * n); // cos(nθ)/n³, cos(nθ) = cos(2πnφ)
+    for (let q = 0; q < OSCILLATING_TERMS; q++) {
+      prefix[q][n] = prefix[q][n - 1] + term;
+      term /= n * n;
+    }
   }
   const n1 = kAll + 1;
-  const farTail3 = scaledOscillatingTail(3, n1, theta) / n1 ** 3;
-  const farTail5 = scaledOscillatingTail(5, n1, theta) / n1 ** 5;
+  const farTail = Array.from({ length: OSCILLATING_TERMS }, (_, q) => scaledOscillatingTail(2 * q + 3, n1, theta) / n1 ** (2 * q + 3));
   const sigma = new Float64Array(count);
   const curvature = new Float64Array(count);
   const coincident = new Int32Array(count).fill(-1);
@@ -175,14 +176,15 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
     const r2 = c2 / k2;
     let factor = 0.5 * shrink;
     let rq = 1;
+    let kPower = k2; // K^{2q+2}
     for (let q = 0; q <= TAIL_TERMS && rq > 1e-18; q++) {
       let moment = factor * scaledHurwitzZeta(2 * q + 3, n0);
-      if (q === 0) moment += 0.5 * k2 * (farTail3 + prefix3[kAll] - prefix3[k]);
-      else if (q === 1) moment += 0.5 * k2 * k2 * (farTail5 + prefix5[kAll] - prefix5[k]);
+      if (q < OSCILLATING_TERMS) moment += 0.5 * kPower * (farTail[q] + prefix[q][kAll] - prefix[q][k]);
       s += rq * r2 * moment;
       d += ((q + 1) * rq * moment) / k2;
       rq *= r2;
       factor *= shrink;
+      kPower *= k2;
     }
     sigma[j] = s / beta;
     curvature[j] = d / (beta * beta * beta);
