@@ -24,7 +24,7 @@
  * of Z_j at the groove wall (../../numerics/window-fourier.ts). Minimising it
  * with the heat input q gives the mean top temperature, hence R and b_t; the
  * Galerkin value of R rises monotonically with the number of modes. Truncating
- * the modes at μ ≤ Xπ/ℓ (ℓ the narrower of groove and ridge), the error falls like X^(−2λ), λ the smallest corner
+ * the modes at μ ≤ Xπ/w (and at least ~48 modes), the error falls like X^(−2λ), λ the smallest corner
  * exponent (the three-material lip, the groove floor corners; from
  * ../../numerics/wedge-exponent.ts), so the values at X and X/2 from one
  * nested Cholesky factorisation are Richardson-extrapolated.
@@ -63,7 +63,7 @@ export interface ThermalGrooveInput {
   workingConductivity: number;
   lubricantConductivity: number;
   solidConductivity: number;
-  /** Mode cut-off X: modes with μ ≤ Xπ/min(w, P − w) (default 16); ≥ 6. */
+  /** Mode cut-off X: modes with μ ≤ max(Xπ/w, 96π/P) (default 16). */
   resolution?: number;
 }
 
@@ -119,7 +119,7 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
   const kw = positive(input.workingConductivity, 'workingConductivity');
   const ko = positive(input.lubricantConductivity, 'lubricantConductivity') / kw;
   const ks = positive(input.solidConductivity, 'solidConductivity') / kw;
-  const resolution = Math.max(6, input.resolution ?? 16);
+  const resolution = Math.max(0.5, input.resolution ?? 16);
   const phi = width / pitch;
   const warnings = rangeWarnings(phi, depth / width, substrate / pitch, ko, ks);
   if (ko === ks) {
@@ -131,11 +131,12 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
   const s = substrate / pitch < 1e-4 ? 0 : substrate / pitch;
   const d = depth / pitch;
   const lambda = thermalEdgeExponent(1, ko, ks, s > 0);
-  // Cut-off Xπ/ℓ with ℓ the narrower of groove and ridge: both corners of the narrow segment need resolving.
-  const narrow = Math.min(phi, 1 - phi);
-  const modes = twoPhaseLayerModes(1, phi / 2, ko, ks, (resolution * Math.PI) / narrow);
+  // Cut-off μ ≤ max(Xπ/w, 2π·48/P): X groove half-wavelengths across the groove, and at least about 48 modes
+  // (a thin ridge needs no more: measured, docs/slip-core.md). The coarse truncation is at half the cut-off.
+  const cutoff = Math.max((resolution * Math.PI) / phi, 2 * Math.PI * MINIMUM_MODES);
+  const modes = twoPhaseLayerModes(1, phi / 2, ko, ks, cutoff);
   const count = modes.wavenumbers.length;
-  const coarse = countBelow(modes.wavenumbers, (resolution * Math.PI) / (2 * narrow));
+  const coarse = countBelow(modes.wavenumbers, cutoff / 2);
   const system = assemble(modes, phi / 2, d, s, ko, ks);
   if (!choleskyInPlace(system.matrix, system.size)) {
     throw new ConvergenceError('modal thermal slip: Galerkin matrix not positive definite', count, NaN);
@@ -164,6 +165,9 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
     warnings,
   };
 }
+
+/** Fewest modes in the finest truncation. */
+const MINIMUM_MODES = 48;
 
 function countBelow(sorted: Float64Array, limit: number): number {
   let m = 0;
