@@ -54,25 +54,19 @@ import { extrapolateToInfiniteResolution } from '../../numerics/extrapolation.js
 import { eulerAlternatingTail } from '../../numerics/series.js';
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums } from '../../numerics/window-fourier.js';
+import { type GrooveCellInput } from '../../numerics/groove-cell.js';
 import { ConvergenceError, DomainError, type Warning } from '../common.js';
 import { philipSlipLengthLongitudinal } from '../stripe-slip.js';
+import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
 
-export interface LongitudinalGrooveInput {
-  /** Texture period P, m (> 0). */
-  pitch: number;
-  /** Groove width w, m (0 < w < P; validated 0.02 ≤ w/P ≤ 0.98). */
-  grooveWidth: number;
-  /** Groove depth d, m (> 0; validated 0.01 ≤ d/w ≤ 10). */
-  grooveDepth: number;
-  /** N = μ_lubricant/μ_working (≥ 0; 0 = shear-free mouth; validated 1e-4 ≤ N ≤ 1e4). */
-  viscosityRatio: number;
-  /** Far-field shear stress τ, Pa (default 1; results are linear in τ). */
-  appliedShear?: number;
-  /** Working-liquid viscosity μ_w, Pa·s (default 1). */
-  waterViscosity?: number;
-  /** Groove modes M_max (default 24, more for w/P > 0.85 where the thin ridges need them); ≥ 12. */
+/**
+ * Same geometry and fluids as the field solver's input (../../numerics/groove-cell.ts), plus the mode count
+ * M_max (default 24, more for w/P > 0.85 where the thin ridges need them; ≥ 12). Validated range: w/P 0.02–0.98,
+ * d/w 0.01–10, N = 0 and 1e-4–1e4.
+ */
+export type LongitudinalGrooveInput = Pick<GrooveCellInput, 'pitch' | 'grooveWidth' | 'grooveDepth' | 'viscosityRatio' | 'appliedShear' | 'waterViscosity'> & {
   modes?: number;
-}
+};
 
 export interface LongitudinalGrooveSlip {
   /** Effective slip length b_∥ measured from the interface plane, m. */
@@ -98,13 +92,6 @@ export interface LongitudinalGrooveSlip {
   warnings: Warning[];
 }
 
-function positive(value: unknown, field: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value) || !(value > 0)) {
-    throw new DomainError(`${field} must be a positive finite number`, { field });
-  }
-  return value;
-}
-
 /** Lip exponent: liquid half-plane (coefficient 1) and lubricant quadrant (N) between two no-slip rays. */
 export function longitudinalEdgeExponent(viscosityRatio: number): number {
   if (viscosityRatio === 0) return 0.5;
@@ -128,18 +115,6 @@ function defaultModeCount(fraction: number): number {
   return fraction <= 0.93 ? 36 : 48;
 }
 
-/** Range warnings shared by the cores: the validated envelope of the accuracy figures. */
-function geometryWarnings(fraction: number, depthRatio: number): Warning[] {
-  const warnings: Warning[] = [];
-  if (fraction < 0.02 || fraction > 0.98) {
-    warnings.push({ code: 'slip-core-outside-validated-range', severity: 'caution', message: `w/P = ${fraction.toPrecision(3)} is outside 0.02–0.98, where the modal core's accuracy was measured.` });
-  }
-  if (depthRatio < 0.01 || depthRatio > 10) {
-    warnings.push({ code: 'slip-core-outside-validated-range', severity: 'caution', message: `d/w = ${depthRatio.toPrecision(3)} is outside 0.01–10, where the modal core's accuracy was measured.` });
-  }
-  return warnings;
-}
-
 /**
  * Longitudinal slip of the groove cell by modal matching (method in the module
  * comment). Throws DomainError for impossible input (non-positive lengths,
@@ -147,22 +122,18 @@ function geometryWarnings(fraction: number, depthRatio: number): Warning[] {
  * definite (not observed in the validated range).
  */
 export function longitudinalGrooveSlip(input: LongitudinalGrooveInput): LongitudinalGrooveSlip {
-  const pitch = positive(input.pitch, 'pitch');
-  const width = positive(input.grooveWidth, 'grooveWidth');
-  const depth = positive(input.grooveDepth, 'grooveDepth');
-  if (!(width < pitch)) throw new DomainError('groove width must be smaller than the pitch', { field: 'grooveWidth' });
+  const { pitch, width, depth } = grooveGeometry(input.pitch, input.grooveWidth, input.grooveDepth);
   const ratio = input.viscosityRatio;
   if (typeof ratio !== 'number' || !Number.isFinite(ratio) || ratio < 0) {
     throw new DomainError('viscosity ratio must be a finite number ≥ 0', { field: 'viscosityRatio' });
   }
   const shear = input.appliedShear ?? 1;
   if (!Number.isFinite(shear)) throw new DomainError('applied shear must be finite', { field: 'appliedShear' });
-  const viscosity = input.waterViscosity === undefined ? 1 : positive(input.waterViscosity, 'waterViscosity');
+  const viscosity = input.waterViscosity === undefined ? 1 : positiveInput(input.waterViscosity, 'waterViscosity');
   const phi = width / pitch;
-  const warnings = geometryWarnings(phi, depth / width);
-  if (ratio !== 0 && (ratio < 1e-4 || ratio > 1e4)) {
-    warnings.push({ code: 'slip-core-outside-validated-range', severity: 'caution', message: `N = ${ratio.toPrecision(3)} is outside 1e-4–1e4, where the modal core's accuracy was measured.` });
-  }
+  const cautions = new RangeCautions().geometry(phi, depth / width);
+  if (ratio !== 0) cautions.check(ratio, 1e-4, 1e4, 'N');
+  const warnings = cautions.warnings;
   const velocityScale = (shear * pitch) / viscosity; // τP/μ_w
   if (ratio === 0) {
     // Shear-free mouth: Philip (1972) exactly; ∫ f dz = P b, so the mean interface velocity is (τ/μ_w) P b / w.

@@ -49,23 +49,15 @@ import { layerModeTransform, twoPhaseLayerModes, type TwoPhaseLayerModes } from 
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums, type WindowSums } from '../../numerics/window-fourier.js';
 import { ConvergenceError, DomainError, type Warning } from '../common.js';
+import { type WallCell } from '../heat.js';
+import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
 
-export interface ThermalGrooveInput {
-  /** Texture period P, m (> 0). */
-  pitch: number;
-  /** Groove width w, m (0 < w < P; validated 0.02 ≤ w/P ≤ 0.98). */
-  grooveWidth: number;
-  /** Groove depth d, m (> 0; validated 0.01 ≤ d/w ≤ 10). */
-  grooveDepth: number;
-  /** Substrate thickness s below the groove floor, m (≥ 0; validated ≤ 2P). */
-  substrateThickness: number;
-  /** Conductivities k_w (working liquid), k_o (lubricant), k_s (solid), W/(m·K), > 0; validated ratios 1e-2–1e2. */
-  workingConductivity: number;
-  lubricantConductivity: number;
-  solidConductivity: number;
-  /** Mode cut-off X: modes with μ ≤ max(Xπ/w, 96π/P) (default 16). */
-  resolution?: number;
-}
+/**
+ * The wall cell of the field method (../heat.ts `WallCell`: P, w, d, s, k_w, k_o, k_s in SI), plus the mode
+ * cut-off X: modes with μ ≤ max(Xπ/w, 96π/P) (default 16). Validated range: w/P 0.02–0.98, d/w 0.01–10,
+ * s ≤ 2P, every conductivity ratio among k_w, k_o, k_s in 1e-2–1e2.
+ */
+export type ThermalGrooveInput = WallCell & { resolution?: number };
 
 export interface ThermalGrooveSlip {
   /** Apparent thermal slip length b_t, m (positive = extra resistance against the solid-filled wall). */
@@ -77,13 +69,6 @@ export interface ThermalGrooveSlip {
   /** Layer modes in the finest truncation. */
   modes: number;
   warnings: Warning[];
-}
-
-function positive(value: unknown, field: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value) || !(value > 0)) {
-    throw new DomainError(`${field} must be a positive finite number`, { field });
-  }
-  return value;
 }
 
 /** Smallest corner exponent of the cell: the lip (liquid, lubricant, solid) and the groove floor corners. */
@@ -108,20 +93,19 @@ export function thermalEdgeExponent(kw: number, ko: number, ks: number, withSubs
  * positive definite (not observed in the validated range).
  */
 export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip {
-  const pitch = positive(input.pitch, 'pitch');
-  const width = positive(input.grooveWidth, 'grooveWidth');
-  const depth = positive(input.grooveDepth, 'grooveDepth');
-  if (!(width < pitch)) throw new DomainError('groove width must be smaller than the pitch', { field: 'grooveWidth' });
+  const { pitch, width, depth } = grooveGeometry(input.pitch, input.grooveWidth, input.grooveDepth);
   const substrate = input.substrateThickness;
   if (typeof substrate !== 'number' || !Number.isFinite(substrate) || substrate < 0) {
     throw new DomainError('substrate thickness must be a finite number ≥ 0', { field: 'substrateThickness' });
   }
-  const kw = positive(input.workingConductivity, 'workingConductivity');
-  const ko = positive(input.lubricantConductivity, 'lubricantConductivity') / kw;
-  const ks = positive(input.solidConductivity, 'solidConductivity') / kw;
+  const kw = positiveInput(input.workingConductivity, 'workingConductivity');
+  const ko = positiveInput(input.lubricantConductivity, 'lubricantConductivity') / kw;
+  const ks = positiveInput(input.solidConductivity, 'solidConductivity') / kw;
   const resolution = Math.max(0.5, input.resolution ?? 16);
   const phi = width / pitch;
-  const warnings = rangeWarnings(phi, depth / width, substrate / pitch, ko, ks);
+  const cautions = new RangeCautions().geometry(phi, depth / width).check(substrate / pitch, 0, 2, 's/P');
+  cautions.check(ko, 1e-2, 1e2, 'k_o/k_w').check(ks, 1e-2, 1e2, 'k_s/k_w').check(ko / ks, 1e-2, 1e2, 'k_o/k_s');
+  const warnings = cautions.warnings;
   if (ko === ks) {
     // A uniform layer: the textured wall is the solid-filled wall (exact).
     return { thermalSlipLength: 0, thermalSlipLengthErrorEstimate: 0, edgeExponent: 1, modes: 1, warnings };
@@ -173,23 +157,6 @@ function countBelow(sorted: Float64Array, limit: number): number {
   let m = 0;
   while (m < sorted.length && sorted[m] <= limit) m++;
   return Math.max(2, m);
-}
-
-function rangeWarnings(fraction: number, depthRatio: number, substrateRatio: number, ko: number, ks: number): Warning[] {
-  const warnings: Warning[] = [];
-  const outside = (what: string): void => {
-    warnings.push({ code: 'slip-core-outside-validated-range', severity: 'caution', message: `${what}, where the modal core's accuracy was measured.` });
-  };
-  if (fraction < 0.02 || fraction > 0.98) outside(`w/P = ${fraction.toPrecision(3)} is outside 0.02–0.98`);
-  if (depthRatio < 0.01 || depthRatio > 10) outside(`d/w = ${depthRatio.toPrecision(3)} is outside 0.01–10`);
-  if (substrateRatio > 2) outside(`s/P = ${substrateRatio.toPrecision(3)} is above 2`);
-  for (const ratio of [ko, ks, ko / ks]) {
-    if (ratio < 1e-2 || ratio > 1e2) {
-      outside('a conductivity ratio among liquid, lubricant and solid is outside 1e-2–1e2');
-      break;
-    }
-  }
-  return warnings;
 }
 
 /**

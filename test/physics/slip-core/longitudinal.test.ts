@@ -1,9 +1,9 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { solveLongitudinalCell } from '../../../src/numerics/groove-cell.js';
-import { DomainError } from '../../../src/physics/common.js';
 import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../../../src/physics/groove-duct.js';
 import { longitudinalGrooveSlip } from '../../../src/physics/slip-core/longitudinal.js';
+import { expectDomainError } from './helpers.js';
 
 /** Philip (1972) ZAMP 23, 353; Lauga & Stone (2003) J. Fluid Mech. 489, 55: b_∥ = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -128,15 +128,7 @@ describe('longitudinal slip core: impossible and out-of-range input', () => {
       [{ grooveDepth: Number.NaN }, 'grooveDepth'],
       [{ viscosityRatio: -1 }, 'viscosityRatio'],
     ];
-    for (const [change, field] of bad) {
-      try {
-        longitudinalGrooveSlip({ ...good, ...change });
-        expect.unreachable();
-      } catch (e) {
-        expect(e).toBeInstanceOf(DomainError);
-        expect((e as DomainError).field).toBe(field);
-      }
-    }
+    for (const [change, field] of bad) expectDomainError(() => longitudinalGrooveSlip({ ...good, ...change }), field);
   });
   it('outside the validated range: a finite result and a caution', () => {
     const r = longitudinalGrooveSlip({ pitch: 1, grooveWidth: 0.995, grooveDepth: 50, viscosityRatio: 1e6 });

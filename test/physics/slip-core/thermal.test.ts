@@ -1,9 +1,9 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../../src/physics/common.js';
 import { thermalSlipField } from '../../../src/physics/heat.js';
 import { longitudinalGrooveSlip } from '../../../src/physics/slip-core/longitudinal.js';
 import { thermalGrooveSlip } from '../../../src/physics/slip-core/thermal.js';
+import { expectDomainError } from './helpers.js';
 
 /** Philip (1972) ZAMP 23, 353, conduction analogue (adiabatic grooves over isothermal ridges): b_t = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -113,13 +113,7 @@ describe('thermal slip core: impossible and out-of-range input', () => {
       [{ lubricantConductivity: 0 }, 'lubricantConductivity'],
       [{ grooveWidth: 2 }, 'grooveWidth'],
     ] as const) {
-      try {
-        thermalGrooveSlip({ ...good, ...change });
-        expect.unreachable();
-      } catch (e) {
-        expect(e).toBeInstanceOf(DomainError);
-        expect((e as DomainError).field).toBe(field);
-      }
+      expectDomainError(() => thermalGrooveSlip({ ...good, ...change }), field);
     }
   });
   it('conductivity ratios beyond 1e-2–1e2 give a finite result and a caution', () => {

@@ -1,0 +1,179 @@
+/**
+ * Slip-core benchmark: the modal (exact, fast) cores against the finite-volume
+ * field solvers on a fixed set of cases spanning the documented range, with the
+ * relative difference, the time per evaluation of each method and the fast
+ * cores' throughput on one core in process.
+ *
+ *   npx tsx bench/slip-core.ts            (add --quick to skip the field solvers)
+ *
+ * Rows: longitudinal slip length (b_∥, groove cell, field solver
+ * solveLongitudinalCell at its default graded grid with Richardson) and thermal
+ * slip length (b_t, field solver thermalSlipField at 64 and 128 cells per pitch,
+ * first-order Richardson 2b₁₂₈ − b₆₄ since it is first order near the lip).
+ * The transverse direction plugs in as one more entry of DIRECTIONS (its fast
+ * core and field solver) when its module is merged.
+ */
+import os from 'node:os';
+import { solveLongitudinalCell } from '../src/numerics/groove-cell.js';
+import { thermalSlipField } from '../src/physics/heat.js';
+import { longitudinalGrooveSlip } from '../src/physics/slip-core/longitudinal.js';
+import { thermalGrooveSlip } from '../src/physics/slip-core/thermal.js';
+
+const quick = process.argv.includes('--quick');
+
+interface BenchCase {
+  label: string;
+  fast: () => number;
+  field: () => number;
+}
+
+interface BenchDirection {
+  name: string;
+  quantity: string;
+  cases: BenchCase[];
+}
+
+const FRACTIONS = [0.02, 0.1, 0.3, 0.5, 0.7, 0.9, 0.98];
+const DEPTHS = [0.01, 0.1, 0.5, 2, 10];
+const RATIOS = [1e-4, 1e-2, 1, 1e2, 1e4];
+
+/** 42 longitudinal cases: every w/P with a rotating depth ratio and viscosity ratio (units P = τ = μ_w = 1). */
+function longitudinalCases(): BenchCase[] {
+  const cases: BenchCase[] = [];
+  FRACTIONS.forEach((phi, i) => {
+    for (let j = 0; j < 6; j++) {
+      const aspect = DEPTHS[(i + j) % DEPTHS.length];
+      const ratio = j === 5 ? 0 : RATIOS[(2 * i + j) % RATIOS.length];
+      const input = { pitch: 1, grooveWidth: phi, grooveDepth: aspect * phi, viscosityRatio: ratio };
+      cases.push({
+        label: `φ=${phi} d/w=${aspect} N=${ratio}`,
+        fast: () => longitudinalGrooveSlip(input).slipLength,
+        field: () => solveLongitudinalCell(input).slipLength,
+      });
+    }
+  });
+  return cases;
+}
+
+/** 24 thermal cases: w/P, d/w, s/P and conductivity triples (k_w, k_o, k_s) over ratios 1e-2–1e2. */
+function thermalCases(): BenchCase[] {
+  const triples = [
+    [1, 0.25, 40],
+    [1, 0.01, 100],
+    [1, 100, 1],
+    [1, 1, 0.01],
+    [0.01, 1, 100],
+    [1, 0.3, 0.33],
+  ];
+  const cases: BenchCase[] = [];
+  const geometries = [
+    [0.05, 0.5, 0],
+    [0.1, 2, 0.5],
+    [0.3, 0.1, 2],
+    [0.5, 1, 0.5],
+    [0.7, 0.05, 0],
+    [0.9, 4, 1],
+    [0.95, 0.5, 0.5],
+    [0.5, 0.01, 0.2],
+  ];
+  geometries.forEach(([phi, aspect, s], i) => {
+    for (let j = 0; j < 3; j++) {
+      const [kw, ko, ks] = triples[(i + 2 * j) % triples.length];
+      const wall = { pitch: 1, grooveWidth: phi, grooveDepth: aspect * phi, substrateThickness: s, workingConductivity: kw, lubricantConductivity: ko, solidConductivity: ks };
+      cases.push({
+        label: `φ=${phi} d/w=${aspect} s/P=${s} k=${kw}/${ko}/${ks}`,
+        fast: () => thermalGrooveSlip(wall).thermalSlipLength,
+        field: () => 2 * thermalSlipField(wall, 128).thermalSlipLength - thermalSlipField(wall, 64).thermalSlipLength,
+      });
+    }
+  });
+  return cases;
+}
+
+const DIRECTIONS: BenchDirection[] = [
+  { name: 'longitudinal', quantity: 'b_∥/P', cases: longitudinalCases() },
+  { name: 'thermal', quantity: 'b_t/P', cases: thermalCases() },
+  // The transverse core: { name: 'transverse', quantity: 'b_⊥/P', cases: [...] } with transverseGrooveSlip and solveTransverseCell.
+];
+
+/** CPU time per call (ms): the fastest of a few batches, each long enough to time (shared machine: the minimum is the least disturbed). */
+function cpuTimePerCall(run: () => number): number {
+  run();
+  let calls = 1;
+  for (;;) {
+    const c0 = process.cpuUsage();
+    for (let i = 0; i < calls; i++) run();
+    const c1 = process.cpuUsage(c0);
+    if (c1.user + c1.system > 20_000 || calls > 1e5) break;
+    calls *= 2;
+  }
+  let best = Infinity;
+  for (let batch = 0; batch < 3; batch++) {
+    const c0 = process.cpuUsage();
+    for (let i = 0; i < calls; i++) run();
+    const c1 = process.cpuUsage(c0);
+    best = Math.min(best, (c1.user + c1.system) / 1000 / calls);
+  }
+  return best;
+}
+
+function fieldTime(run: () => number): { value: number; ms: number } {
+  const c0 = process.cpuUsage();
+  const value = run();
+  const c1 = process.cpuUsage(c0);
+  return { value, ms: (c1.user + c1.system) / 1000 };
+}
+
+const median = (values: number[]): number => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[mid] : 0.5 * (sorted[mid - 1] + sorted[mid]);
+};
+
+console.log('oilskin slip-core benchmark');
+console.log(`node ${process.version}, ${os.cpus().length} logical cores (${os.cpus()[0]?.model ?? 'unknown'}), load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')}`);
+console.log('times are CPU time per call on one thread (process.cpuUsage), fast cores: fastest of 3 batches\n');
+
+for (const direction of DIRECTIONS) {
+  console.log(`## ${direction.name} (${direction.quantity})`);
+  console.log(['case', 'fast', 'field', 'rel.diff', 'fast ms', 'field ms'].join('\t'));
+  const fastTimes: number[] = [];
+  const differences: number[] = [];
+  for (const c of direction.cases) {
+    const value = c.fast();
+    const ms = cpuTimePerCall(c.fast);
+    fastTimes.push(ms);
+    let fieldValue = Number.NaN;
+    let fieldMs = Number.NaN;
+    if (!quick) {
+      try {
+        const f = fieldTime(c.field);
+        fieldValue = f.value;
+        fieldMs = f.ms;
+      } catch {
+        // The field solver refuses some extreme geometries; the row shows n/a.
+      }
+    }
+    const difference = (value - fieldValue) / Math.abs(fieldValue);
+    if (Number.isFinite(difference)) differences.push(Math.abs(difference));
+    console.log(
+      [c.label, value.toPrecision(7), Number.isFinite(fieldValue) ? fieldValue.toPrecision(7) : 'n/a', Number.isFinite(difference) ? difference.toExponential(2) : 'n/a', ms.toFixed(3), Number.isFinite(fieldMs) ? fieldMs.toFixed(0) : 'n/a'].join('\t'),
+    );
+  }
+  // Throughput: all cases in turn for about a second of CPU time.
+  let calls = 0;
+  const c0 = process.cpuUsage();
+  let elapsed = 0;
+  while (elapsed < 1000) {
+    for (const c of direction.cases) c.fast();
+    calls += direction.cases.length;
+    const c1 = process.cpuUsage(c0);
+    elapsed = (c1.user + c1.system) / 1000;
+  }
+  console.log(
+    `${direction.name}: ${direction.cases.length} cases; fast core median ${median(fastTimes).toFixed(3)} ms, max ${Math.max(...fastTimes).toFixed(3)} ms; ` +
+      `throughput ${((calls / elapsed) * 1000).toFixed(0)} evaluations/s over the set; ` +
+      (differences.length ? `|fast − field|/field median ${median(differences).toExponential(2)}, max ${Math.max(...differences).toExponential(2)}` : 'field solver skipped') +
+      '\n',
+  );
+}
