@@ -54,7 +54,7 @@ import { extrapolateToInfiniteResolution } from '../../numerics/extrapolation.js
 import { eulerAlternatingTail } from '../../numerics/series.js';
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums } from '../../numerics/window-fourier.js';
-import { type GrooveCellInput } from '../../numerics/groove-cell.js';
+import { type GrooveCellInput, type GrooveCellResult } from '../../numerics/groove-cell.js';
 import { ConvergenceError, DomainError, type Warning } from '../common.js';
 import { philipSlipLengthLongitudinal } from '../stripe-slip.js';
 import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
@@ -68,29 +68,28 @@ export type LongitudinalGrooveInput = Pick<GrooveCellInput, 'pitch' | 'grooveWid
   modes?: number;
 };
 
-export interface LongitudinalGrooveSlip {
-  /** Effective slip length b_∥ measured from the interface plane, m. */
-  slipLength: number;
-  /** |b − b(fit without the finest modes)|, m: a gauge of the extrapolation error, not a bound. */
-  slipLengthErrorEstimate: number;
-  /** Mean interface velocity over the mouth, m/s. */
-  meanInterfaceVelocity: number;
-  /** Mean interfacial shear stress over the mouth, Pa. */
-  meanInterfaceShear: number;
-  /** meanInterfaceShear/τ (the retention model's interfacial shear ratio). */
-  interfacialShearRatio: number;
-  /** u_i/(∂u/∂y)_liquid at the groove centre, m; null for N = 0. */
-  localSlipAtCentre: number | null;
-  /** mean u_i / mean (∂u/∂y)_liquid over the mouth, m; null for N = 0. */
-  meanLocalSlip: number | null;
-  /** Lubricant volume flux along the groove ∫∫ u dA, m³/s (0 for N = 0, the inviscid limit has none defined). */
-  lubricantFlux: number;
+/**
+ * The field solver's summary quantities (../../numerics/groove-cell.ts, same names and units; the slip-length
+ * error estimate here is the spread of the extrapolation), plus the lip's corner exponent, the modes used and
+ * range cautions.
+ */
+export type LongitudinalGrooveSlip = Pick<
+  GrooveCellResult,
+  | 'slipLength'
+  | 'slipLengthErrorEstimate'
+  | 'meanInterfaceVelocity'
+  | 'meanInterfaceShear'
+  | 'interfacialShearRatio'
+  | 'localSlipAtCentre'
+  | 'meanLocalSlip'
+  | 'lubricantFlux'
+> & {
   /** Corner exponent λ at the groove lip (u ~ r^λ). */
   edgeExponent: number;
-  /** Groove modes used. */
+  /** Groove modes used (0 for the closed form at N = 0). */
   modes: number;
   warnings: Warning[];
-}
+};
 
 /** Lip exponent: liquid half-plane (coefficient 1) and lubricant quadrant (N) between two no-slip rays. */
 export function longitudinalEdgeExponent(viscosityRatio: number): number {
