@@ -44,7 +44,7 @@ function carry(lambda: number, sectors: readonly WedgeSector[], theta0: number, 
  * (two roots closer than upper/steps may be missed; the physics callers' roots are
  * further apart than that for the coefficient ratios they allow).
  */
-export function smallestWedgeExponent(sectors: readonly WedgeSector[], ends: 'zero-value' | 'periodic', upper = 1, steps = 200): number {
+export function smallestWedgeExponent(sectors: readonly WedgeSector[], ends: 'zero-value' | 'periodic', upper = 1, steps = 100): number {
   const characteristic = (lambda: number): number => {
     if (ends === 'zero-value') return carry(lambda, sectors, 0, 1)[0];
     // Periodic: det(T − I) = 2 − trace(T) for the unimodular transfer matrix T.

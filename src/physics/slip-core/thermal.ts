@@ -151,7 +151,7 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
 }
 
 /** Fewest modes in the finest truncation. */
-const MINIMUM_MODES = 48;
+const MINIMUM_MODES = 32;
 
 function countBelow(sorted: Float64Array, limit: number): number {
   let m = 0;
