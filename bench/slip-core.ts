@@ -6,6 +6,10 @@
  *
  *   npx tsx bench/slip-core.ts            (add --quick to skip the field solvers)
  *
+ * A last section compares the fast cores with the committed FreeFEM references
+ * (fixtures/slip-core/*.json) quantity by quantity: the figures quoted in
+ * docs/slip-core.md.
+ *
  * Rows: longitudinal slip length (b_∥, groove cell, field solver
  * solveLongitudinalCell at its default graded grid with Richardson) and thermal
  * slip length (b_t, field solver thermalSlipField at 64 and 128 cells per pitch,
@@ -13,6 +17,7 @@
  * The transverse direction plugs in as one more entry of DIRECTIONS (its fast
  * core and field solver) when its module is merged.
  */
+import { existsSync, readFileSync } from 'node:fs';
 import os from 'node:os';
 import { solveLongitudinalCell } from '../src/numerics/groove-cell.js';
 import { thermalSlipField } from '../src/physics/heat.js';
@@ -176,4 +181,66 @@ for (const direction of DIRECTIONS) {
       (differences.length ? `|fast − field|/field median ${median(differences).toExponential(2)}, max ${Math.max(...differences).toExponential(2)}` : 'field solver skipped') +
       '\n',
   );
+}
+
+// Against the FreeFEM references: largest relative difference per quantity (absolute in units of P for b_t near zero).
+interface LongitudinalReference {
+  fraction: number;
+  depthOverWidth: number;
+  viscosityRatio: number;
+  slipLength: number;
+  interfacialShearRatio: number;
+  meanInterfaceVelocity: number;
+  localSlipAtCentre: number;
+  lubricantFlux: number;
+}
+interface ThermalReference {
+  fraction: number;
+  depthOverWidth: number;
+  substrateOverPitch: number;
+  workingConductivity: number;
+  lubricantConductivity: number;
+  solidConductivity: number;
+  thermalSlipLength: number;
+}
+const reference = <T>(name: string): T[] | undefined => {
+  const url = new URL(`../fixtures/slip-core/${name}.json`, import.meta.url);
+  return existsSync(url) ? (JSON.parse(readFileSync(url, 'utf8')) as { cases: T[] }).cases : undefined;
+};
+const longitudinalReferences = reference<LongitudinalReference>('longitudinal');
+if (longitudinalReferences) {
+  const worst = { slip: 0, shear: 0, centre: 0, mean: 0, flux: 0 };
+  for (const c of longitudinalReferences) {
+    const r = longitudinalGrooveSlip({ pitch: 1, grooveWidth: c.fraction, grooveDepth: c.depthOverWidth * c.fraction, viscosityRatio: c.viscosityRatio });
+    const rel = (a: number, b: number): number => Math.abs(a / b - 1);
+    worst.slip = Math.max(worst.slip, rel(r.slipLength, c.slipLength));
+    worst.shear = Math.max(worst.shear, rel(r.interfacialShearRatio, c.interfacialShearRatio));
+    worst.centre = Math.max(worst.centre, rel(r.localSlipAtCentre as number, c.localSlipAtCentre));
+    worst.mean = Math.max(worst.mean, rel(r.meanLocalSlip as number, c.meanInterfaceVelocity / c.interfacialShearRatio));
+    worst.flux = Math.max(worst.flux, rel(r.lubricantFlux, c.lubricantFlux));
+  }
+  console.log(
+    `## against FreeFEM (${longitudinalReferences.length} longitudinal cases): largest relative difference — slip length ${worst.slip.toExponential(2)}, ` +
+      `interfacial shear ratio ${worst.shear.toExponential(2)}, centre local slip ${worst.centre.toExponential(2)}, mean local slip ${worst.mean.toExponential(2)}, lubricant flux ${worst.flux.toExponential(2)}`,
+  );
+}
+const thermalReferences = reference<ThermalReference>('thermal');
+if (thermalReferences) {
+  let relative = 0;
+  let absolute = 0;
+  for (const c of thermalReferences) {
+    const r = thermalGrooveSlip({
+      pitch: 1,
+      grooveWidth: c.fraction,
+      grooveDepth: c.depthOverWidth * c.fraction,
+      substrateThickness: c.substrateOverPitch,
+      workingConductivity: c.workingConductivity,
+      lubricantConductivity: c.lubricantConductivity,
+      solidConductivity: c.solidConductivity,
+    });
+    const difference = Math.abs(r.thermalSlipLength - c.thermalSlipLength);
+    if (Math.abs(c.thermalSlipLength) > 2e-3) relative = Math.max(relative, difference / Math.abs(c.thermalSlipLength));
+    else absolute = Math.max(absolute, difference);
+  }
+  console.log(`## against FreeFEM (${thermalReferences.length} thermal cases): largest relative difference ${relative.toExponential(2)} where |b_t| > 2e-3 P, largest absolute difference ${absolute.toExponential(2)} P below`);
 }
