@@ -24,20 +24,22 @@
  * of Z_j at the groove wall (../../numerics/window-fourier.ts). Minimising it
  * with the heat input q gives the mean top temperature, hence R and b_t; the
  * Galerkin value of R rises monotonically with the number of modes. Truncating
- * the modes at μ ≤ Xπ/w (and at least ~48 modes), the error falls like X^(−2λ), λ the smallest corner
- * exponent (the three-material lip, the groove floor corners; from
- * ../../numerics/wedge-exponent.ts), so the values at X and X/2 from one
- * nested Cholesky factorisation are Richardson-extrapolated.
+ * the modes at μ ≤ Xπ/w (and keeping at least 32), the error falls like
+ * X^(−2λ), λ the smallest corner exponent (the three-material lip, the groove
+ * floor corners; ../../numerics/wedge-exponent.ts), so the values at X and X/2
+ * from one nested Cholesky factorisation are Richardson-extrapolated. The
+ * sequence jumps where a groove-type mode enters (near μw/π odd when k_o < k_s,
+ * even when k_o > k_s), so both cut-offs sit midway between such modes: the
+ * same phase of the sequence, which is what Richardson's rule assumes.
  *
  * Limits: k_o = k_s gives b_t = 0 exactly (returned without solving); k_o → 0
  * with k_s → ∞ gives Philip's adiabatic-groove value (P/π) ln sec(πφ/2); k_s → ∞
  * alone gives the longitudinal slip length with N = k_o/k_w.
  *
- * Accuracy and cost (measured, docs/slip-core.md): within 0.3 % (relative, or
- * 1e-5 P absolute where b_t crosses zero) of FreeFEM references for every
- * conductivity ratio in 1e-2–1e2, w/P 0.02–0.98, d/w 0.01–10, s 0–2P. The mode
- * count grows like X/(2φ), so the cost grows as w/P falls: about 0.1 ms at
- * w/P = 0.5 and several ms below w/P = 0.1 (dense factorisation).
+ * Accuracy and cost: measured in docs/slip-core.md against FreeFEM references
+ * over every conductivity ratio in 1e-2–1e2, w/P 0.02–0.98, d/w 0.01–10,
+ * s 0–2P. The mode count is about X/(2φ) for narrow grooves, so the cost of the
+ * dense factorisation grows like φ^(−3) below w/P ≈ 0.2.
  *
  * References
  * 1. Philip J.R. (1972) Z. Angew. Math. Phys. 23, 353–372 (adiabatic-groove limit).
@@ -54,7 +56,8 @@ import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
 
 /**
  * The wall cell of the field method (../heat.ts `WallCell`: P, w, d, s, k_w, k_o, k_s in SI), plus the mode
- * cut-off X: modes with μ ≤ max(Xπ/w, 96π/P) (default 16). Validated range: w/P 0.02–0.98, d/w 0.01–10,
+ * cut-off X: modes with μ ≤ max(Xπ/w, 64π/P) (default 12; X rounded to the parity that falls between groove
+ * resonances). Validated range: w/P 0.02–0.98, d/w 0.01–10,
  * s ≤ 2P, every conductivity ratio among k_w, k_o, k_s in 1e-2–1e2.
  */
 export type ThermalGrooveInput = WallCell & { resolution?: number };
@@ -101,7 +104,7 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
   const kw = positiveInput(input.workingConductivity, 'workingConductivity');
   const ko = positiveInput(input.lubricantConductivity, 'lubricantConductivity') / kw;
   const ks = positiveInput(input.solidConductivity, 'solidConductivity') / kw;
-  const resolution = Math.max(0.5, input.resolution ?? 16);
+  const resolution = Math.max(2, input.resolution ?? 12);
   const phi = width / pitch;
   const cautions = new RangeCautions().geometry(phi, depth / width).check(substrate / pitch, 0, 2, 's/P');
   cautions.check(ko, 1e-2, 1e2, 'k_o/k_w').check(ks, 1e-2, 1e2, 'k_s/k_w').check(ko / ks, 1e-2, 1e2, 'k_o/k_s');
@@ -117,10 +120,14 @@ export function thermalGrooveSlip(input: ThermalGrooveInput): ThermalGrooveSlip 
   const lambda = thermalEdgeExponent(1, ko, ks, s > 0);
   // Cut-off μ ≤ max(Xπ/w, 2π·48/P): X groove half-wavelengths across the groove, and at least about 48 modes
   // (a thin ridge needs no more: measured, docs/slip-core.md). The coarse truncation is at half the cut-off.
-  const cutoff = Math.max((resolution * Math.PI) / phi, 2 * Math.PI * MINIMUM_MODES);
+  // Groove-type modes cluster near μw/π odd (k_o < k_s: the walls act as fixed-temperature ones) or even (k_o > k_s);
+  // both truncations sit midway between two such clusters, so they cut the mode sequence at the same phase.
+  const shift = ko > ks ? 1 : 0;
+  const groove = (x: number): number => ((2 * Math.round((x - shift) / 2) + shift) * Math.PI) / phi;
+  const cutoff = Math.max(groove(resolution), 2 * Math.PI * MINIMUM_MODES);
   const modes = twoPhaseLayerModes(1, phi / 2, ko, ks, cutoff);
   const count = modes.wavenumbers.length;
-  const coarse = countBelow(modes.wavenumbers, cutoff / 2);
+  const coarse = countBelow(modes.wavenumbers, cutoff === 2 * Math.PI * MINIMUM_MODES ? cutoff / 2 : groove(resolution / 2));
   const system = assemble(modes, phi / 2, d, s, ko, ks);
   if (!choleskyInPlace(system.matrix, system.size)) {
     throw new ConvergenceError('modal thermal slip: Galerkin matrix not positive definite', count, NaN);
