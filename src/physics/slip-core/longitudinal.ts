@@ -35,18 +35,18 @@
  *                                exponents 2λ, 2λ+1.
  * N = 0 (shear-free mouth) returns Philip's (1972) closed form exactly.
  *
- * Accuracy (measured, docs/slip-core.md; tests against independent FreeFEM and
- * scipy finite-difference references and a 256-mode reference run): slip length
- * within 2e-4 relative for w/P ≤ 0.9 and 5e-4 up to 0.98 over d/w 0.01–10 and
- * N 1e-4–1e4; interfacial shear ratio and local slips within 3e-3. Cost: about
- * 0.1 ms per call (O(M²/φ) sums and an M³/6 factorisation, M = 32).
+ * Accuracy: measured in docs/slip-core.md against FreeFEM references over
+ * w/P 0.02–0.98, d/w 0.01–10 and N 1e-4–1e4 (tests: against those, a scipy
+ * finite-difference reference, Philip's limit and the lid-sheared duct limits).
+ * Cost: O(M²/φ) overlap sums and an M³/6 factorisation, M = 24 to 48; about
+ * 0.1 ms per call.
  *
  * References
  * 1. Philip J.R. (1972) Flows satisfying mixed no-slip and no-shear conditions.
  *    Z. Angew. Math. Phys. 23, 353–372.
  * 2. Schönecker C., Baier T., Hardt S. (2014) Influence of the enclosed fluid on
  *    the flow over a microstructured surface in the Cassie state. J. Fluid Mech.
- *    740, 168–195 (the same matching problem, solved with a different expansion).
+ *    740, 168–195 (a study of the same cell problem; from memory).
  * 3. Richardson L.F. (1911) Phil. Trans. R. Soc. A 210, 307–357 (from memory).
  */
 import { choleskyInPlace, forwardSubstitute, leadingSolution, nestedProducts } from '../../numerics/cholesky.js';
