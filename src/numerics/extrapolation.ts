@@ -8,8 +8,6 @@
  * elimination of the listed terms; with more points it is a least-squares
  * fit, which damps the irregular part of the error.
  */
-import { solveDense } from './linalg.js';
-
 export interface ExtrapolationResult {
   /** Estimate of v∞. */
   value: number;
@@ -33,23 +31,54 @@ export function extrapolateToInfiniteResolution(
   const finest = values[count - 1];
   if (terms <= 0) return { value: finest, points: count };
   const unknowns = terms + 1;
-  // Columns scaled by the finest resolution's powers so the normal matrix stays well conditioned.
+  // Columns scaled by the finest resolution's powers; solved by Householder QR rather than the normal
+  // equations, whose squared condition number loses everything when the resolutions are close together
+  // (consecutive mode counts; Golub & Van Loan 2013, §5.3).
   const reference = resolutions[count - 1];
-  const basis = new Float64Array(count * unknowns);
+  const a = new Float64Array(count * unknowns);
+  const rhs = Float64Array.from({ length: count }, (_, i) => values[i]);
   for (let i = 0; i < count; i++) {
-    basis[i * unknowns] = 1;
-    for (let k = 1; k < unknowns; k++) basis[i * unknowns + k] = (resolutions[i] / reference) ** -exponents[k - 1];
+    a[i * unknowns] = 1;
+    for (let k = 1; k < unknowns; k++) a[i * unknowns + k] = (resolutions[i] / reference) ** -exponents[k - 1];
   }
-  const normal = new Float64Array(unknowns * unknowns);
-  const rhs = new Float64Array(unknowns);
-  for (let i = 0; i < count; i++) {
-    for (let r = 0; r < unknowns; r++) {
-      const br = basis[i * unknowns + r];
-      rhs[r] += br * values[i];
-      for (let c = 0; c < unknowns; c++) normal[r * unknowns + c] += br * basis[i * unknowns + c];
-    }
-  }
-  const solution = solveDense(normal, rhs, unknowns);
+  const solution = leastSquares(a, rhs, count, unknowns);
   if (!solution || !Number.isFinite(solution[0])) return { value: finest, points: count };
   return { value: solution[0], points: count };
+}
+
+/** min ‖A x − b‖ for a row-major m × n matrix (m ≥ n) by Householder QR; null if A is rank-deficient. A and b are overwritten. */
+function leastSquares(a: Float64Array, b: Float64Array, m: number, n: number): Float64Array | null {
+  for (let k = 0; k < n; k++) {
+    let norm = 0;
+    for (let i = k; i < m; i++) norm += a[i * n + k] * a[i * n + k];
+    norm = Math.sqrt(norm);
+    if (norm === 0) return null;
+    const alpha = a[k * n + k] > 0 ? -norm : norm;
+    // v = column k below the diagonal minus alpha·e_k; reflect the remaining columns and b.
+    const v = new Float64Array(m - k);
+    for (let i = k; i < m; i++) v[i - k] = a[i * n + k];
+    v[0] -= alpha;
+    let vv = 0;
+    for (let i = 0; i < v.length; i++) vv += v[i] * v[i];
+    if (vv === 0) continue;
+    for (let j = k; j < n; j++) {
+      let dot = 0;
+      for (let i = k; i < m; i++) dot += v[i - k] * a[i * n + j];
+      const f = (2 * dot) / vv;
+      for (let i = k; i < m; i++) a[i * n + j] -= f * v[i - k];
+    }
+    let dot = 0;
+    for (let i = k; i < m; i++) dot += v[i - k] * b[i];
+    const f = (2 * dot) / vv;
+    for (let i = k; i < m; i++) b[i] -= f * v[i - k];
+  }
+  const x = new Float64Array(n);
+  for (let k = n - 1; k >= 0; k--) {
+    let sum = b[k];
+    for (let j = k + 1; j < n; j++) sum -= a[k * n + j] * x[j];
+    const diagonal = a[k * n + k];
+    if (diagonal === 0) return null;
+    x[k] = sum / diagonal;
+  }
+  return x;
 }

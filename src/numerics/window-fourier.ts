@@ -65,14 +65,13 @@ function scaledHurwitzZeta(p: number, n0: number): number {
 }
 
 /**
- * N^p Σ_{n≥N} cos(nθ) n^−p by Euler's transformation
- * Σ_{n≥N} zⁿ f(n) = zᴺ/(1 − z) Σ_j (z/(1 − z))ʲ Δʲf(N), z = e^{iθ},
- * which converges fast when N·|1 − z| ≫ p.
+ * Σ_{n≥N} cos(nθ) f(n) from f(N), f(N+1), …, f(N+T) (overwritten) by Euler's transformation
+ * Σ_{n≥N} zⁿ f(n) = zᴺ/(1 − z) Σ_j (z/(1 − z))ʲ Δʲf(N), z = e^{iθ}: the j-th term shrinks like
+ * j!/(N·|1 − z|)ʲ for f varying on the scale N, so it converges fast when N·|1 − z| ≫ 1; the series
+ * is asymptotic and is stopped at its smallest term.
  */
-function scaledOscillatingTail(p: number, n0: number, theta: number): number {
-  const terms = 24;
-  const diff = new Float64Array(terms + 1);
-  for (let i = 0; i <= terms; i++) diff[i] = (n0 / (n0 + i)) ** p;
+function oscillatingTail(values: Float64Array, n0: number, theta: number): number {
+  const terms = values.length - 1;
   // q = z/(1 − z), prefactor zᴺ/(1 − z), both complex.
   const zr = Math.cos(theta);
   const zi = Math.sin(theta);
@@ -91,14 +90,15 @@ function scaledOscillatingTail(p: number, n0: number, theta: number): number {
   let wi = 0;
   let last = Infinity;
   for (let j = 0; j <= terms; j++) {
-    const tr = wr * diff[0];
-    const ti = wi * diff[0];
+    const tr = wr * values[0];
+    const ti = wi * values[0];
     const size = Math.hypot(tr, ti);
-    if (size > last) break; // asymptotic: stop at the smallest term
+    if (size > last) break;
     sr += tr;
     si += ti;
+    if (size <= 1e-18 * Math.hypot(sr, si)) break;
     last = size;
-    for (let i = 0; i < terms - j; i++) diff[i] = diff[i + 1] - diff[i];
+    for (let i = 0; i < terms - j; i++) values[i] = values[i + 1] - values[i];
     const nr = wr * qr - wi * qi;
     wi = wr * qi + wi * qr;
     wr = nr;
@@ -106,10 +106,26 @@ function scaledOscillatingTail(p: number, n0: number, theta: number): number {
   return pr * sr - pi * si;
 }
 
-/** Highest power of μ²/α² kept in the tail expansion (ratio ≤ ¼ there and the tail is a small part of the sum, so 14 terms reach rounding). */
-const TAIL_TERMS = 14;
-/** Tail moments whose oscillating part is summed (beyond them it is below 1e-10 of σ for K·2|sin πφ| ≥ 60). */
-const OSCILLATING_TERMS = 4;
+/** n² and 1/n for n ≤ K, kept between calls (they depend on nothing else). */
+let integerCache = { squares: new Float64Array(1), inverse: new Float64Array(1) };
+function integerTables(k: number): { squares: Float64Array; inverse: Float64Array } {
+  if (integerCache.squares.length <= k) {
+    const size = Math.max(k + 1, 2 * integerCache.squares.length);
+    const squares = new Float64Array(size);
+    const inverse = new Float64Array(size);
+    for (let n = 1; n < size; n++) {
+      squares[n] = n * n;
+      inverse[n] = 1 / n;
+    }
+    integerCache = { squares, inverse };
+  }
+  return integerCache;
+}
+
+/** Powers of μ²/α² kept in the tail's non-oscillating part (ratio ≤ ¼ there: 26 terms reach 1e-16). */
+const TAIL_TERMS = 26;
+/** Values of the summand passed to Euler's transformation for the oscillating part of the tail. */
+const EULER_TERMS = 24;
 
 export function windowFourierSums(input: WindowSumsInput): WindowSums {
   const { period, halfWidth, wavenumbers } = input;
@@ -119,37 +135,26 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
   const theta = 2 * Math.PI * fraction;
   const weight = input.weight;
   const settle = Math.ceil(input.weightSettlesAt ?? 0);
-  // Mode j is summed term by term to K_j ≥ 2μ_j/β (tail ratio μ²/α² ≤ ¼). The oscillating tail moments
-  // come from one Euler transformation at the largest cut-off K (which needs K·|1 − e^{iθ}| ≫ p, with
-  // |1 − e^{iθ}| = 2|sin(πφ)|) plus prefix sums down to each K_j.
-  // Every K_j also stays above the oscillation floor, so the oscillating parts of the moments beyond the
-  // second (not summed) stay below rounding relative to the rest.
+  // Mode j is summed term by term to K_j ≥ 2μ_j/β. Beyond, C_n² = ½(1 + cos nθ): the plain half is the expansion
+  // in μ²/α² with Hurwitz-zeta moments (ratio ≤ ¼), the oscillating half Euler's transformation of the summand,
+  // which needs K·|1 − e^{iθ}| ≫ 1, |1 − e^{iθ}| = 2|sin(πφ)|: hence the floor on K.
   const oscillationFloor = Math.ceil(60 / (2 * Math.abs(Math.sin(Math.PI * fraction)))) + 8;
   const cutoff = (c: number): number => Math.max(oscillationFloor, settle, Math.ceil(2 * c) + 4);
   let largest = 0;
   for (let j = 0; j < count; j++) largest = Math.max(largest, wavenumbers[j] / beta);
   const kAll = cutoff(largest);
   const weighted = new Float64Array(kAll + 1);
-  const squares = new Float64Array(kAll + 1);
-  const inverse = new Float64Array(kAll + 1);
-  // Prefix sums of cos(nθ)/n^p for the first OSCILLATING_TERMS odd powers p = 3, 5, …, and their tails beyond kAll.
-  const prefix: Float64Array[] = Array.from({ length: OSCILLATING_TERMS }, () => new Float64Array(kAll + 1));
+  const { squares, inverse } = integerTables(kAll);
   for (let n = 1; n <= kAll; n++) {
     const c = Math.cos(Math.PI * n * fraction);
     weighted[n] = (weight ? weight(n) : 1) * c * c;
-    squares[n] = n * n;
-    inverse[n] = 1 / n;
-    let term = (2 * c * c - 1) / (n * n * n); // cos(nθ)/n³, cos(nθ) = cos(2πnφ)
-    for (let q = 0; q < OSCILLATING_TERMS; q++) {
-      prefix[q][n] = prefix[q][n - 1] + term;
-      term /= n * n;
-    }
   }
-  const n1 = kAll + 1;
-  const farTail = Array.from({ length: OSCILLATING_TERMS }, (_, q) => scaledOscillatingTail(2 * q + 3, n1, theta) / n1 ** (2 * q + 3));
   const sigma = new Float64Array(count);
   const curvature = new Float64Array(count);
   const coincident = new Int32Array(count).fill(-1);
+  const gap = 2 * Math.abs(Math.sin(Math.PI * fraction)); // |1 − e^{iθ}|
+  const sigmaValues = new Float64Array(EULER_TERMS + 1);
+  const curvatureValues = new Float64Array(EULER_TERMS + 1);
   for (let j = 0; j < count; j++) {
     const c = wavenumbers[j] / beta;
     const c2 = c * c;
@@ -168,24 +173,32 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
       d += t * n * u;
     }
     s *= c2;
-    // Tail n > K: c²/(n(n² − c²)) = Σ_q c^{2q+2} n^{−2q−3}, n/(n² − c²)² = Σ_q (q+1) c^{2q} n^{−2q−3}, with
-    // moments t_q = K^{2q+2} Σ_{n>K} C_n² n^{−2q−3} = ½ K^{2q+2} [Σ n^{−p} + Σ cos(nθ) n^{−p}], p = 2q + 3.
+    // Plain half of the tail n > K: c²/(n(n² − c²)) = Σ_q c^{2q+2} n^{−2q−3}, n/(n² − c²)² = Σ_q (q+1) c^{2q} n^{−2q−3},
+    // with moments K^{2q+2} Σ_{n>K} n^{−2q−3} from the Euler–Maclaurin Hurwitz zeta.
     const n0 = k + 1;
     const shrink = (k / n0) * (k / n0);
     const k2 = k * k;
     const r2 = c2 / k2;
     let factor = 0.5 * shrink;
     let rq = 1;
-    let kPower = k2; // K^{2q+2}
     for (let q = 0; q <= TAIL_TERMS && rq > 1e-18; q++) {
-      let moment = factor * scaledHurwitzZeta(2 * q + 3, n0);
-      if (q < OSCILLATING_TERMS) moment += 0.5 * kPower * (farTail[q] + prefix[q][kAll] - prefix[q][k]);
+      const moment = factor * scaledHurwitzZeta(2 * q + 3, n0);
       s += rq * r2 * moment;
       d += ((q + 1) * rq * moment) / k2;
       rq *= r2;
       factor *= shrink;
-      kPower *= k2;
     }
+    // Oscillating half: ½ Σ_{n>K} cos(nθ) f(n) for both summands; Euler's transformation needs about as many
+    // differences as it takes the ratio (3 + j)/(K|1 − e^{iθ}|) of its terms to bring them to rounding.
+    const eulerTerms = Math.min(EULER_TERMS, Math.max(8, Math.ceil(960 / (k * gap)) + 6));
+    for (let i = 0; i <= eulerTerms; i++) {
+      const n = n0 + i;
+      const u = 1 / (n * n - c2);
+      sigmaValues[i] = (c2 * u) / n;
+      curvatureValues[i] = n * u * u;
+    }
+    s += 0.5 * oscillatingTail(sigmaValues.subarray(0, eulerTerms + 1), n0, theta);
+    d += 0.5 * oscillatingTail(curvatureValues.subarray(0, eulerTerms + 1), n0, theta);
     sigma[j] = s / beta;
     curvature[j] = d / (beta * beta * beta);
   }
