@@ -1,4 +1,4 @@
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { solveLongitudinalCell } from '../../../src/numerics/groove-cell.js';
 import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../../../src/physics/groove-duct.js';
@@ -78,7 +78,7 @@ describe('longitudinal slip core against independent references', () => {
   });
 
   const freefem = new URL('../../../fixtures/slip-core/longitudinal.json', import.meta.url);
-  it.runIf(existsSync(freefem))('matches the FreeFEM references (fixtures/slip-core/generate_longitudinal.py) over the range: b within 5e-4, shear ratio and local slips within 3e-3', () => {
+  it('matches the FreeFEM references (fixtures/slip-core/generate_longitudinal.py) over the range: b within 2e-4, shear ratio and mean local slip within 2e-3, centre local slip and flux within 5e-4', () => {
     const fixture = JSON.parse(readFileSync(freefem, 'utf8')) as {
       cases: {
         fraction: number;
@@ -90,6 +90,7 @@ describe('longitudinal slip core against independent references', () => {
         interfacialShearRatioUncertainty: number;
         localSlipAtCentre: number;
         localSlipAtCentreUncertainty: number;
+        meanInterfaceVelocity: number;
         lubricantFlux: number;
       }[];
     };
@@ -97,10 +98,13 @@ describe('longitudinal slip core against independent references', () => {
     for (const c of fixture.cases) {
       const r = longitudinalGrooveSlip({ pitch: 1, grooveWidth: c.fraction, grooveDepth: c.depthOverWidth * c.fraction, viscosityRatio: c.viscosityRatio });
       const label = JSON.stringify([c.fraction, c.depthOverWidth, c.viscosityRatio]);
-      expect(Math.abs(r.slipLength - c.slipLength), label).toBeLessThanOrEqual(5e-4 * c.slipLength + 2 * c.slipLengthUncertainty);
-      expect(Math.abs(r.interfacialShearRatio - c.interfacialShearRatio), label).toBeLessThanOrEqual(3e-3 * c.interfacialShearRatio + 2 * c.interfacialShearRatioUncertainty);
-      expect(Math.abs((r.localSlipAtCentre as number) - c.localSlipAtCentre), label).toBeLessThanOrEqual(3e-3 * c.localSlipAtCentre + 2 * c.localSlipAtCentreUncertainty);
-      expect(relative(r.lubricantFlux, c.lubricantFlux), label).toBeLessThan(1e-3);
+      expect(Math.abs(r.slipLength - c.slipLength), label).toBeLessThanOrEqual(2e-4 * c.slipLength + 2 * c.slipLengthUncertainty);
+      expect(Math.abs(r.interfacialShearRatio - c.interfacialShearRatio), label).toBeLessThanOrEqual(2e-3 * c.interfacialShearRatio + 2 * c.interfacialShearRatioUncertainty);
+      expect(Math.abs((r.localSlipAtCentre as number) - c.localSlipAtCentre), label).toBeLessThanOrEqual(5e-4 * c.localSlipAtCentre + 2 * c.localSlipAtCentreUncertainty);
+      expect(relative(r.lubricantFlux, c.lubricantFlux), label).toBeLessThan(5e-4);
+      // Mean local slip = mean interface velocity / mean interfacial shear (τ = μ_w = 1): the shear's uncertainty carries over.
+      const meanLocal = c.meanInterfaceVelocity / c.interfacialShearRatio;
+      expect(relative(r.meanLocalSlip as number, meanLocal), label).toBeLessThan(2e-3 + 2 * c.interfacialShearRatioUncertainty / c.interfacialShearRatio);
     }
   });
 
