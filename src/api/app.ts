@@ -34,6 +34,11 @@ function keyMatches(given: string, keys: readonly string[]): boolean {
   });
 }
 
+/** Routes that need an API key when keys are configured: everything under /v1. */
+export function isProtectedRoute(routeUrl: string | undefined): boolean {
+  return routeUrl !== undefined && (routeUrl === '/v1' || routeUrl.startsWith('/v1/'));
+}
+
 export async function buildApp(config: ServiceConfig, options: { logStream?: NodeJS.WritableStream } = {}): Promise<FastifyInstance> {
   const app = Fastify({
     logger: {
@@ -42,6 +47,11 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
       ...(options.logStream ? { stream: options.logStream } : {}),
     },
     bodyLimit: config.bodyLimit,
+    // Slow clients: headers, the whole request and an idle keep-alive connection each have a limit;
+    // Node checks the first two every connectionsCheckingInterval (30 s by default, far too coarse).
+    http: { headersTimeout: config.headersTimeoutMs, connectionsCheckingInterval: Math.min(1000, config.headersTimeoutMs) },
+    requestTimeout: config.requestTimeoutMs,
+    keepAliveTimeout: config.keepAliveTimeoutMs,
     // A client's request id is kept when it is safe to log; otherwise a fresh one.
     genReqId: (req) => {
       const given = req.headers['x-request-id'];
@@ -61,14 +71,19 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   const pool = createSolverPool({
     threads: config.workerThreads,
     maxQueued: config.maxQueuedSolves,
-    timeoutMs: config.solveTimeoutMs,
+    queueTimeoutMs: config.queueTimeoutMs,
+    solveTimeoutMs: config.solveTimeoutMs,
+    workerMemoryMb: config.workerMemoryMb,
     inline: computeSafely,
+    onThreadError: (error) => app.log.error({ err: error }, 'solver thread failed'),
   });
   app.decorate('solverPool', pool);
   app.addHook('onClose', async () => pool.close());
 
   app.addHook('onSend', async (request, reply, payload) => {
     reply.header('x-request-id', request.id);
+    // Draining: a keep-alive client gets its answer and then the connection is closed, so it reconnects elsewhere.
+    if (app.draining) reply.header('connection', 'close');
     return payload;
   });
 
@@ -80,7 +95,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     await app.register(rateLimit, {
       max: config.rateLimitPerMinute,
       timeWindow: '1 minute',
-      allowList: (request) => ['/healthz', '/readyz', '/metrics'].includes(request.url),
+      allowList: (request) => ['/healthz', '/readyz', '/metrics'].includes(request.routeOptions.url ?? ''),
       errorResponseBuilder: (_request, context) => {
         const err = new Error(`Rate limit of ${context.max} requests per ${context.after} exceeded; retry in ${context.after}.`) as Error & { statusCode: number };
         err.statusCode = 429;
@@ -88,12 +103,17 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
       },
     });
   }
-  await app.register(metricsPlugin, { queueDepth: () => pool.queueDepth() });
+  await app.register(metricsPlugin, { poolStats: () => pool.stats() });
   await app.register(healthPlugin);
+  void pool.ready().then(() => {
+    app.solversReady = true;
+  });
 
   if (config.apiKeys.length > 0) {
     app.addHook('onRequest', async (request, reply) => {
-      if (!request.url.startsWith('/v1/')) return;
+      // The route the router matched (after it decoded %76, ignored a trailing slash, mapped HEAD to GET),
+      // not the raw URL: every route under /v1 needs a key, whatever spelling reached it.
+      if (!isProtectedRoute(request.routeOptions.url)) return;
       const key = request.headers['x-api-key'];
       if (typeof key !== 'string' || !keyMatches(key, config.apiKeys)) {
         return sendProblem(reply, problem(401, 'unauthorized', 'Missing or wrong API key', 'Send a valid key in the x-api-key header.'), {

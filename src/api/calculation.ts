@@ -39,18 +39,38 @@ export function parseBody<Body extends ZodType>(definition: CalculationDefinitio
   return parsed.data;
 }
 
+/**
+ * Titles by what happened, so a client (or a person) can tell them apart:
+ * the code of a DomainError picks the title; anything else is "physically impossible".
+ */
+const DOMAIN_TITLES: Record<string, string> = {
+  'missing-property': 'A required property is missing',
+  'outside-model-range': 'The input is outside the range of the model',
+  'over-work-limit': 'The calculation would exceed the work limits of the service',
+  'unsupported-flow': 'This calculation does not cover that case',
+  'unknown-surfactant': 'Unknown catalogue entry',
+};
+
+/**
+ * Request path of a field named by the physics: the physics sees the resolved
+ * design as `scenario`, the request has its parts at the top level.
+ */
+function requestPath(field: string | undefined): string {
+  return (field ?? '').replace(/^scenario\./, '');
+}
+
 /** Map anything a calculation can throw to a problem document. Unknown errors are not the client's fault. */
 export function problemFromError(error: unknown): Problem {
   if (error instanceof ProblemError) return error.problem;
   if (error instanceof ConvergenceError) {
     return problem(422, 'not-converged', 'The solver did not converge', error.message, {
       iterations: error.iterations,
-      ...(error.field ? { errors: [{ path: error.field, message: error.message }] } : {}),
+      ...(error.field ? { errors: [{ path: requestPath(error.field), message: error.message }] } : {}),
     });
   }
   if (error instanceof DomainError) {
-    return problem(422, error.code, 'The input is physically impossible', error.message, {
-      errors: [{ path: error.field ?? '', message: error.message }],
+    return problem(422, error.code, DOMAIN_TITLES[error.code] ?? 'The input is physically impossible', error.message, {
+      errors: [{ path: requestPath(error.field), message: error.message }],
     });
   }
   return problem(500, 'internal', 'Internal error', 'The calculation failed unexpectedly; the failure was logged.');

@@ -15,15 +15,27 @@ export interface ServiceConfig {
   workerThreads: number;
   /** Queued heavy solves beyond which requests get 503. */
   maxQueuedSolves: number;
-  /** Per-request time budget of a heavy solve, ms. */
+  /** Longest wait of a heavy solve for a worker thread, ms (503 + Retry-After beyond). */
+  queueTimeoutMs: number;
+  /** Compute budget of one heavy solve once a thread runs it, ms (422 beyond). */
   solveTimeoutMs: number;
+  /** Heap limit of one worker thread, MB (the thread dies alone beyond it; its request gets 422). */
+  workerMemoryMb: number;
+  /** After SIGTERM: longest wait for in-flight requests before the process exits anyway, ms. */
+  drainTimeoutMs: number;
+  /** Longest time a client may take to send the request headers, ms. */
+  headersTimeoutMs: number;
+  /** Longest time a client may take to send the whole request (headers and body), ms. */
+  requestTimeoutMs: number;
+  /** Idle keep-alive connections are closed after this long, ms. */
+  keepAliveTimeoutMs: number;
 }
 
-function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
+function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0): number {
   const raw = env[name];
   if (raw === undefined || raw === '') return fallback;
   const n = Number(raw);
-  if (!Number.isInteger(n) || n < 0) throw new Error(`${name} must be a non-negative integer, got "${raw}"`);
+  if (!Number.isInteger(n) || n < min) throw new Error(`${name} must be an integer ≥ ${min}, got "${raw}"`);
   return n;
 }
 
@@ -35,7 +47,7 @@ function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
 }
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig {
-  return {
+  const config: ServiceConfig = {
     port: intFrom(env, 'OILSKIN_PORT', 8080),
     host: env.OILSKIN_HOST ?? '0.0.0.0',
     logLevel: env.OILSKIN_LOG_LEVEL ?? 'info',
@@ -45,8 +57,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     corsOrigins: listFrom(env, 'OILSKIN_CORS_ORIGINS'),
     workerThreads: intFrom(env, 'OILSKIN_WORKERS', 2),
     maxQueuedSolves: intFrom(env, 'OILSKIN_MAX_QUEUE', 64),
-    solveTimeoutMs: intFrom(env, 'OILSKIN_SOLVE_TIMEOUT_MS', 20_000),
+    queueTimeoutMs: intFrom(env, 'OILSKIN_QUEUE_TIMEOUT_MS', 10_000, 1),
+    solveTimeoutMs: intFrom(env, 'OILSKIN_SOLVE_TIMEOUT_MS', 20_000, 1),
+    // Below ~64 MB a thread cannot even load the model code (and piscina stops replacing threads that fail to start).
+    workerMemoryMb: intFrom(env, 'OILSKIN_WORKER_MEMORY_MB', 512, 64),
+    drainTimeoutMs: intFrom(env, 'OILSKIN_DRAIN_TIMEOUT_MS', 10_000, 1),
+    headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
+    requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
+    keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
   };
+  // Node refuses a header limit longer than the whole-request limit.
+  if (config.headersTimeoutMs > config.requestTimeoutMs) {
+    throw new Error(`OILSKIN_HEADERS_TIMEOUT_MS (${config.headersTimeoutMs}) must not exceed OILSKIN_REQUEST_TIMEOUT_MS (${config.requestTimeoutMs})`);
+  }
+  return config;
 }
 
 /** Configuration for tests and the CLI: quiet, no limits that get in the way. */

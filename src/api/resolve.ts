@@ -2,6 +2,7 @@
  * From validated request parts to the resolved SI shapes the physics takes:
  * catalogue look-up of fluids, flow conditions, texture defaults.
  */
+import { checkContinuumScale } from '../physics/continuum.js';
 import { Notes } from '../physics/common.js';
 import { evaluateFlow, type FlowResult } from '../physics/flow.js';
 import type { Scenario, Texture } from '../physics/scenario.js';
@@ -80,6 +81,8 @@ export function resolveDesign(input: DesignInput, notes: Notes, needsTension = t
   const lubricant = resolveFluidInput(input.lubricant, 'lubricant', notes);
   const workingFluid = resolveFluidInput(input.workingFluid, 'workingFluid', notes);
   const texture = resolveTexture(input.texture);
+  // Below molecular size no model applies (422); below 100 nm a caution (src/physics/continuum.ts).
+  checkContinuumScale(texture, notes);
   const flow = resolveFlow(input.flow, workingFluid, notes, texture);
   let interfacialTension: number | undefined;
   let tensionOrigin: string | undefined;

@@ -1,9 +1,18 @@
-/** Worker-thread entry: run one calculation's compute step; failures come back as data. */
+/** Solver-thread side of the pool: run one calculation's compute step; failures come back as data. */
 import { computeChecked, problemFromError, type ComputeFailure } from './calculation.js';
 import type { CalculationOutput } from './envelope.js';
+import type { SolverTask, TaskSkipped } from './pool.js';
 import { calculationByName } from './routes/index.js';
 
-export default function runInWorker(task: { name: string; input: unknown }): CalculationOutput | ComputeFailure {
+export default function runInWorker(task: SolverTask): CalculationOutput | ComputeFailure | TaskSkipped {
+  // Given up while it waited (queue budget, client gone): nothing to compute.
+  if (task.cancelled && Atomics.load(task.cancelled, 0) === 1) {
+    task.started?.close();
+    return { skipped: true };
+  }
+  // Tell the pool the compute budget starts now (the time before was queue wait).
+  task.started?.postMessage(0);
+  task.started?.close();
   return computeSafely(task.name, task.input);
 }
 

@@ -82,8 +82,18 @@ export const ZEPPIERI_2001: Reference = {
   key: 'zeppieri2001',
   citation:
     'S. Zeppieri, J. Rodríguez, A. L. López de Ramos (2001), Interfacial tension of alkane + water ' +
-    'systems, J. Chem. Eng. Data 46, 1086–1088.',
+    'systems, J. Chem. Eng. Data 46, 1086–1088: hexane to dodecane against water by the emergent-drop method, ' +
+    '10–60 °C, with a correlation in temperature and carbon number (first page read; tables not read).',
   doi: '10.1021/je000245r',
+};
+
+export const WU_HORNOF_1999: Reference = {
+  key: 'wu-hornof1999',
+  citation:
+    'D. Wu, V. Hornof (1999), Dynamic interfacial tension in hexadecane/water systems containing ready-made ' +
+    'and in-situ-formed surfactants, Chem. Eng. Commun. 172, 85–106: for pure hexadecane/water, with hexadecane ' +
+    'as the drop phase, the measured interfacial tension was very close to the published value, 53.5 mN/m ' +
+    '(abstract read).',
 };
 
 const PERRY_2008 =
@@ -110,32 +120,163 @@ export const PERRY_HEAT_CAPACITY: Reference = {
   citation: `${PERRY_2008}, Table 2-153: heat capacities of inorganic and organic liquids (DIPPR Eq. 100).`,
 };
 
+/**
+ * The open-source transcription through which several handbook tables below
+ * were read (the printed pages were not available); digits were compared
+ * with the catalogue's coefficients one by one.
+ */
+const VIA_CHEMICALS =
+  'as transcribed in the open-source chemicals library (C. Bell et al., Chemical Engineering Design Library), ' +
+  'not re-checked against the printed page';
+
 export const PDMS_FLUID_DATA: Reference = {
   key: 'pdms-fluid-datasheet',
   citation:
-    'Typical properties of linear polydimethylsiloxane fluids by nominal viscosity grade, as printed in ' +
-    "suppliers' product information for 200-series / PMX-200-class silicone fluids (values at 25 °C).",
+    'Typical properties of linear trimethylsiloxy-terminated polydimethylsiloxane fluids by nominal ' +
+    "viscosity grade, as printed in silicone suppliers' product information (values at 25 °C; recalled, " +
+    'not re-read).',
+};
+
+export const MELINDER_2010: Reference = {
+  key: 'melinder2010',
+  citation:
+    'Å. Melinder (2010), Properties of Secondary Working Fluids for Indirect Systems, IIF-IIR, Paris: ' +
+    'polydimethylsiloxane heat-transfer fluid no. 1 (about 3 mm²/s at 25 °C), density, heat capacity, ' +
+    'viscosity and thermal conductivity from −80 to 100 °C; fit coefficients as transcribed in the CoolProp ' +
+    'incompressible-liquid library (I. H. Bell, J. Wronski et al.), not re-checked against the printed page.',
+};
+
+export const DARHUBER_2003: Reference = {
+  key: 'darhuber2003',
+  citation:
+    'Surface tension of liquid polydimethylsiloxane, empirical fit to available data γ = 21.5 − 0.06·t mN/m ' +
+    '(t in °C, 0–100 °C) attributed to A. A. Darhuber et al. (2003) in G. Karniadakis, A. Beskok, N. Aluru ' +
+    '(2005), Microflows and Nanoflows: Fundamentals and Simulation, Springer, Interdisciplinary Applied ' +
+    'Mathematics 29, section on surface tension (that passage read). Which 2003 paper of Darhuber and ' +
+    'co-workers holds the fit is not confirmed: Darhuber, Davis, Troian & Reisner, Thermocapillary actuation ' +
+    'of liquid flow on chemically patterned surfaces, Phys. Fluids 15 (2003) (manuscript found; volume from ' +
+    'memory), or Darhuber, Valentino, Troian & Wagner, J. Microelectromech. Syst. 12, 873 (2003) (from memory).',
 };
 
 export const PFPE_FLUID_DATA: Reference = {
   key: 'pfpe-fluid-datasheet',
   citation:
-    "Typical properties of a perfluoropolyether oil of the Krytox GPL-103 class (viscosity grade ≈ 80 cSt " +
-    "at 20 °C), as printed in the supplier's product information and used for slippery liquid-infused " +
-    'surfaces by T.-S. Wong et al. (2011), Nature 477, 443–447.',
+    'Typical properties of a poly(hexafluoropropylene oxide) perfluoropolyether oil of about 80 mm²/s at ' +
+    "20 °C, as printed in suppliers' product information (recalled, not re-read); the lubricant class used " +
+    'for slippery liquid-infused porous surfaces by T.-S. Wong et al. (2011), Nature 477, 443–447.',
   doi: '10.1038/nature10447',
+};
+
+export const PACANSKY_WALTMAN_1997: Reference = {
+  key: 'pacansky-waltman1997',
+  citation:
+    'J. Pacansky, R. J. Waltman (1997), The effect of Lewis-acid catalysis on the decomposition of CF3OCF3 to ' +
+    'COF2 and CF4, J. Fluorine Chem. 83, 41–45: the catalytically enhanced degradation of perfluorinated ether ' +
+    'lubricants on aluminium fluoride, products carbonyl fluoride and tetrafluoromethane (abstract read).',
 };
 
 export const PERFLUORODECALIN_DATA: Reference = {
   key: 'perfluorodecalin-data',
   citation:
-    "Perfluorodecalin (C10F18, mixture of cis and trans isomers): typical properties from the chemical " +
-    "suppliers' catalogue data and the CRC Handbook (95th ed., 2014) physical-constants table.",
+    "Perfluorodecalin (C10F18, mixture of cis and trans isomers): typical properties from chemical suppliers' " +
+    'catalogue data (recalled, not re-read).',
 };
 
 export const MINERAL_OIL_DATA: Reference = {
   key: 'mineral-oil-light-data',
   citation:
     "Light white mineral oil (paraffinum liquidum, light grade): typical properties from suppliers' " +
-    'product specifications (density at 25 °C; kinematic viscosity grade).',
+    'product specifications (density at 25 °C; kinematic viscosity grade; recalled, not re-read).',
+};
+
+const CRC_2014 = 'W. M. Haynes (ed.) (2014), CRC Handbook of Chemistry and Physics, 95th ed., CRC Press';
+
+export const CRC_ORGANIC_CONSTANTS: Reference = {
+  key: 'crc2014-organic-constants',
+  citation: `${CRC_2014}, Section 3, Physical Constants of Organic Compounds (melting and normal boiling points), ${VIA_CHEMICALS}.`,
+};
+
+export const CRC_INORGANIC_CONSTANTS: Reference = {
+  key: 'crc2014-inorganic-constants',
+  citation: `${CRC_2014}, Section 4, Physical Constants of Inorganic Compounds (melting point, boiling point, solid density), ${VIA_CHEMICALS}.`,
+};
+
+export const CRC_MOLTEN_DENSITY: Reference = {
+  key: 'crc2014-molten-density',
+  citation: `${CRC_2014}, Section 4, density of molten elements, ρ = ρ_m − k (T − T_m), ${VIA_CHEMICALS}.`,
+};
+
+export const JANAF_1998: Reference = {
+  key: 'janaf1998',
+  citation:
+    `M. W. Chase Jr. (1998), NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data Monograph 9: ` +
+    `gallium, liquid phase, heat capacity table, ${VIA_CHEMICALS}.`,
+};
+
+/**
+ * The open-source transcription through which the liquid-metal reference correlations below were read:
+ * the thermolib package (liquid_metal module: density, viscosity and thermal-conductivity coefficient
+ * tables). Its mercury viscosity coefficients (a₁ = 0.2561, a₂ = 132.29 K) agree with an independent
+ * reading of Table 5 of Assael et al. (2012), which supports the transcription of that table.
+ */
+const VIA_THERMOLIB =
+  'coefficients and temperature ranges as transcribed in the open-source thermolib package (liquid_metal module), ' +
+  'not re-checked against the printed tables';
+
+export const ASSAEL_2012: Reference = {
+  key: 'assael2012-liquid-metals',
+  citation:
+    'M. J. Assael, I. J. Armyra, J. Brillo, S. V. Stankus, J. Wu, W. A. Wakeham (2012), Reference data for the ' +
+    'density and viscosity of liquid cadmium, cobalt, gallium, indium, mercury, silicon, thallium, and zinc, ' +
+    'J. Phys. Chem. Ref. Data 41, 033101: gallium density ρ = 6077 − 0.611 (T − 302.914 K) kg/m³ (303–1500 K, ' +
+    'uncertainty 0.4 %) and viscosity log₁₀(η/mPa·s) = −0.4465 + 204.03 K/T (Eq. 2, Table 5; 304–800 K, ' +
+    `uncertainty 13.5 %), ${VIA_THERMOLIB}. Title, authors, year, journal, DOI and the uncertainties were read in ` +
+    'the catalogue record of the paper; volume 41 and article number 033101 are from memory.',
+  doi: '10.1063/1.4729873',
+};
+
+export const ASSAEL_2017: Reference = {
+  key: 'assael2017-liquid-metal-conductivity',
+  citation:
+    'M. J. Assael, A. Chatzimichailidis, K. D. Antoniadis, W. A. Wakeham, M. L. Huber, H. Fukuyama (2017), ' +
+    'Reference correlations for the thermal conductivity of liquid copper, gallium, indium, iron, lead, nickel ' +
+    'and tin, High Temp. High Press. 46, 391–416 (NIST author manuscript, PubMed Central PMC5772911): gallium ' +
+    'λ = 28.403 + 0.071896 (T − 302.914 K) W/(m·K), 303–850 K, uncertainty 15.9 % at 95 % confidence, ' +
+    `${VIA_THERMOLIB}.`,
+};
+
+export const GALLIUM_OXIDE_SKIN: Reference = {
+  key: 'xu2012-gallium-oxide',
+  citation:
+    'Q. Xu, N. Oudalov, Q. Guo, H. M. Jaeger, E. Brown (2012), Effect of oxidation on the mechanical ' +
+    'properties of liquid gallium and eutectic gallium-indium, arXiv:1201.4828 (title, authors and abstract ' +
+    'read); published in Phys. Fluids 24, 063101 (journal volume and article number from memory: not found ' +
+    'in the searched bibliographies): in air or neutral water an oxide skin gives a yield stress and a ' +
+    'surface stress that mimics surface tension, so apparent surface tensions and contact angles depend on ' +
+    'the oxidation state.',
+};
+
+export const IEC_60079_20_1: Reference = {
+  key: 'iec60079-20-1-2010',
+  citation:
+    'IEC 60079-20-1:2010, Explosive atmospheres – Part 20-1: Material characteristics for gas and vapour ' +
+    `classification – Test methods and data (flash points), ${VIA_CHEMICALS}.`,
+};
+
+export const SERAT_2017: Reference = {
+  key: 'serat2017',
+  citation:
+    'F. Z. Serat, A. M. Benkouider, A. Yahiaoui, F. Bagui (2017), Nonlinear group contribution model for ' +
+    'the prediction of flash points using normal boiling points, Fluid Phase Equilib. 449, 52–59: its ' +
+    `DIPPR-evaluated experimental flash points, ${VIA_CHEMICALS}.`,
+  doi: '10.1016/j.fluid.2017.06.008',
+};
+
+export const ASTM_D7094_DODECANE: Reference = {
+  key: 'astm-d7094-dodecane',
+  citation:
+    'ASTM D7094, Standard test method for flash point by modified continuously closed cup (MCCCFP) tester, ' +
+    'Table X1.1: n-dodecane 78.6 °C; as quoted in a flash-point study record of a REACH registration dossier ' +
+    '(European Chemicals Agency, registered dossier 30749, section 4.12), whose Pensky–Martens closed-cup check ' +
+    'of n-dodecane (ASTM D93) gave 77.5 °C. The standard itself was not read.',
 };

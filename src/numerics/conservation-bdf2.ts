@@ -47,6 +47,7 @@ export interface ChainIntegrationOptions {
   /** Newton stops when the largest update is below this (state units). */
   newtonTolerance?: number;
   maxNewtonIterations?: number;
+  /** Budget of step attempts, accepted and rejected alike, so that the work is bounded before the integration starts (default 200 000). */
   maxSteps?: number;
   /** Called after every accepted step with the time, state and cumulative loss. */
   onStep?: (time: number, y: Float64Array, cumulativeLoss: number) => void;
@@ -126,7 +127,7 @@ export function integrateConservationChain(
   let newtonTotal = 0;
   const trial = new Float64Array(n);
 
-  while (t < t1 && steps < maxSteps) {
+  while (t < t1 && steps + rejected < maxSteps) {
     if (t + h > t1) h = t1 - t;
     const first = hPrev === 0;
     const omega = first ? 0 : h / hPrev;
@@ -239,7 +240,7 @@ export function integrateConservationChain(
   if (t < t1) {
     return {
       converged: false,
-      reason: `step budget of ${maxSteps} exhausted at t = ${t}`,
+      reason: `budget of ${maxSteps} step attempts exhausted at t = ${t} (${steps} accepted, ${rejected} rejected)`,
       time: t,
       y,
       steps,

@@ -83,3 +83,92 @@ export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Int
     },
   };
 }
+
+/**
+ * Four-point Lagrange stencil on a uniform grid x_i = start + i·step, i = 0 … count − 1 (count ≥ 4):
+ * the first of the four nodes and their weights, so that f(x) ≈ Σ_q weights[q]·f(x_{first+q}).
+ * Cubic interpolation, error O(step⁴ f'''') (Abramowitz & Stegun 1964, Handbook of Mathematical
+ * Functions, 25.2.13; from memory). x outside the grid is clamped to its ends (`clamped` tells which);
+ * the caller decides how to treat such points.
+ */
+export interface UniformStencil {
+  first: number;
+  weights: [number, number, number, number];
+  clamped: 'below' | 'above' | null;
+}
+
+export function uniformCubicStencil(start: number, step: number, count: number, x: number): UniformStencil {
+  if (!(count >= 4) || !(step > 0)) throw new RangeError('uniformCubicStencil needs at least four nodes and a positive step');
+  const last = start + (count - 1) * step;
+  const clamped = x < start ? 'below' : x > last ? 'above' : null;
+  const t = (Math.min(Math.max(x, start), last) - start) / step;
+  const first = Math.min(Math.max(Math.floor(t) - 1, 0), count - 4);
+  const u = t - first; // position in units of step from node `first`, 0 ≤ u ≤ 3
+  const weights: [number, number, number, number] = [
+    (-(u - 1) * (u - 2) * (u - 3)) / 6,
+    (u * (u - 2) * (u - 3)) / 2,
+    (-u * (u - 1) * (u - 3)) / 2,
+    (u * (u - 1) * (u - 2)) / 6,
+  ];
+  return { first, weights, clamped };
+}
+
+/** Applies a stencil to tabulated rows of equal length: out[k] = Σ_q w_q rows[first + q][k]. */
+export function applyStencil(stencil: UniformStencil, rows: readonly ArrayLike<number>[], out?: Float64Array): Float64Array {
+  const a = rows[stencil.first];
+  const b = rows[stencil.first + 1];
+  const c = rows[stencil.first + 2];
+  const d = rows[stencil.first + 3];
+  const [wa, wb, wc, wd] = stencil.weights;
+  const result = out ?? new Float64Array(a.length);
+  for (let k = 0; k < a.length; k++) result[k] = wa * a[k] + wb * b[k] + wc * c[k] + wd * d[k];
+  return result;
+}
+
+/**
+ * Largest |p(t)| on [0, 1] of the polynomial interpolating `values` at the Chebyshev–Lobatto points
+ * t_k = (1 − cos(πk/n))/2, k = 0 … n, evaluated by the barycentric formula (weights (−1)^k, halved
+ * at both ends; Berrut & Trefethen 2004, SIAM Rev. 46, 501, eq. 5.2; from memory): a scan at 8n
+ * points, then golden-section refinement around the best one. Returns the value and its position t.
+ */
+export function maxAbsChebyshevLobatto(values: ArrayLike<number>): { value: number; at: number } {
+  const n = values.length - 1;
+  if (n < 1) return { value: Math.abs(values[0] ?? 0), at: 0 };
+  const nodes = new Float64Array(n + 1);
+  for (let k = 0; k <= n; k++) nodes[k] = (1 - Math.cos((Math.PI * k) / n)) / 2;
+  const evaluate = (t: number): number => {
+    let num = 0;
+    let den = 0;
+    for (let k = 0; k <= n; k++) {
+      const diff = t - nodes[k];
+      if (diff === 0) return values[k];
+      const w = (k % 2 === 0 ? 1 : -1) * (k === 0 || k === n ? 0.5 : 1);
+      num += (w * values[k]) / diff;
+      den += w / diff;
+    }
+    return num / den;
+  };
+  const samples = 8 * n;
+  let bestT = 0;
+  let best = -1;
+  for (let q = 0; q <= samples; q++) {
+    const t = q / samples;
+    const v = Math.abs(evaluate(t));
+    if (v > best) {
+      best = v;
+      bestT = t;
+    }
+  }
+  let lo = Math.max(0, bestT - 1 / samples);
+  let hi = Math.min(1, bestT + 1 / samples);
+  const ratio = (Math.sqrt(5) - 1) / 2;
+  for (let iteration = 0; iteration < 40; iteration++) {
+    const a = hi - ratio * (hi - lo);
+    const b = lo + ratio * (hi - lo);
+    if (Math.abs(evaluate(a)) >= Math.abs(evaluate(b))) hi = b;
+    else lo = a;
+  }
+  const t = 0.5 * (lo + hi);
+  const refined = Math.abs(evaluate(t));
+  return refined >= best ? { value: refined, at: t } : { value: best, at: bestT };
+}

@@ -4,10 +4,18 @@
  * the tridiagonal (Thomas) algorithm (Golub & Van Loan §4.3).
  */
 
-/** Solve A x = b in place for a dense row-major n×n matrix; returns x, or null if singular. */
+/** Solve A x = b for a dense row-major n×n matrix (inputs untouched); returns x, or null if singular. */
 export function solveDense(matrix: Float64Array | number[], rhs: Float64Array | number[], n: number): Float64Array | null {
-  const a = Float64Array.from(matrix);
   const x = Float64Array.from(rhs);
+  return solveDenseInPlace(Float64Array.from(matrix), x, n) ? x : null;
+}
+
+/**
+ * Solve A x = b by Gaussian elimination with partial pivoting, overwriting
+ * `matrix` with its factors and `rhs` with x (no allocation, for solvers that
+ * reuse one workspace every iteration). Returns false if singular.
+ */
+export function solveDenseInPlace(a: Float64Array, x: Float64Array, n: number): boolean {
   for (let k = 0; k < n; k++) {
     let pivot = k;
     let max = Math.abs(a[k * n + k]);
@@ -18,7 +26,7 @@ export function solveDense(matrix: Float64Array | number[], rhs: Float64Array | 
         pivot = i;
       }
     }
-    if (max === 0 || !Number.isFinite(max)) return null;
+    if (max === 0 || !Number.isFinite(max)) return false;
     if (pivot !== k) {
       for (let j = 0; j < n; j++) {
         const t = a[k * n + j];
@@ -43,7 +51,7 @@ export function solveDense(matrix: Float64Array | number[], rhs: Float64Array | 
     for (let j = i + 1; j < n; j++) s -= a[i * n + j] * x[j];
     x[i] = s / a[i * n + i];
   }
-  return x;
+  return true;
 }
 
 /**
@@ -67,5 +75,58 @@ export function solveTridiagonal(
     x[i] = (rhs[i] - lower[i] * x[i - 1]) / beta;
   }
   for (let i = n - 2; i >= 0; i--) x[i] -= c[i + 1] * x[i + 1];
+  return x;
+}
+
+/**
+ * Solve a general tridiagonal system (same layout as {@link solveTridiagonal})
+ * by Gaussian elimination with partial pivoting, which adds one
+ * super-diagonal of fill (Golub & Van Loan 2013, §4.3); no diagonal
+ * dominance needed. Returns null if singular.
+ */
+export function solveTridiagonalPivoting(
+  lower: ArrayLike<number>,
+  diag: ArrayLike<number>,
+  upper: ArrayLike<number>,
+  rhs: ArrayLike<number>,
+): Float64Array | null {
+  const n = diag.length;
+  const d = Float64Array.from(diag);
+  const du = new Float64Array(n);
+  const du2 = new Float64Array(n);
+  const dl = new Float64Array(n);
+  const x = Float64Array.from(rhs);
+  for (let i = 0; i < n - 1; i++) du[i] = upper[i];
+  for (let i = 1; i < n; i++) dl[i] = lower[i];
+  for (let i = 0; i < n - 1; i++) {
+    // Row i holds d[i], du[i], du2[i]; row i+1 holds dl[i+1], d[i+1], du[i+1].
+    if (Math.abs(dl[i + 1]) > Math.abs(d[i])) {
+      const f = d[i] / dl[i + 1];
+      const a0 = dl[i + 1];
+      const a1 = d[i + 1];
+      const a2 = i + 1 < n - 1 ? du[i + 1] : 0;
+      const b1 = du[i];
+      const b2 = du2[i];
+      d[i] = a0;
+      du[i] = a1;
+      du2[i] = a2;
+      d[i + 1] = b1 - f * a1;
+      if (i + 1 < n - 1) du[i + 1] = b2 - f * a2;
+      const t = x[i];
+      x[i] = x[i + 1];
+      x[i + 1] = t - f * x[i + 1];
+    } else {
+      if (d[i] === 0) return null;
+      const f = dl[i + 1] / d[i];
+      d[i + 1] -= f * du[i];
+      if (i + 1 < n - 1) du[i + 1] -= f * du2[i];
+      x[i + 1] -= f * x[i];
+    }
+  }
+  if (d[n - 1] === 0 || !Number.isFinite(d[n - 1])) return null;
+  x[n - 1] /= d[n - 1];
+  if (n > 1) x[n - 2] = (x[n - 2] - du[n - 2] * x[n - 1]) / d[n - 2];
+  for (let i = n - 3; i >= 0; i--) x[i] = (x[i] - du[i] * x[i + 1] - du2[i] * x[i + 2]) / d[i];
+  for (let i = 0; i < n; i++) if (!Number.isFinite(x[i])) return null;
   return x;
 }

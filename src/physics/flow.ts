@@ -3,7 +3,7 @@
  * on a smooth, no-slip wall: plane channel, circular pipe, flat plate, or a
  * wall shear stress given directly. All inputs and outputs SI.
  */
-import { Notes, outcome, type Outcome, type Reference } from './common.js';
+import { DomainError, Notes, outcome, type Outcome, type Reference } from './common.js';
 import type { FlowKind, FlowRegime, FlowState, Texture } from './scenario.js';
 import { safeNewton } from '../numerics/roots.js';
 
@@ -199,6 +199,10 @@ export function evaluateFlow(fluid: FlowFluid, spec: FlowSpec, texture?: Texture
       const re = (spec.bulkVelocity * spec.diameter) / nu;
       const roughness = spec.roughness ?? 0;
       const relRough = roughness / spec.diameter;
+      // Roughness elements as tall as the radius would close the pipe (and Colebrook has no root for ε/D ≳ 3.7).
+      if (!(relRough < 0.5)) {
+        throw new DomainError(`pipe roughness ${fmt(roughness)} m is not smaller than the pipe radius ${fmt(spec.diameter / 2)} m`, { field: 'flow.roughness' });
+      }
       let fD: number;
       let regime: FlowRegime;
       if (re < PIPE_LAMINAR_LIMIT) {

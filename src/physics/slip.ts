@@ -15,6 +15,7 @@ import {
 } from '../numerics/groove-cell.js';
 import { ConvergenceError, DomainError, Notes, outcome, type Outcome } from './common.js';
 import { GROOVE_DUCT_REFERENCES } from './groove-duct.js';
+import { planGrooveCellSolve, WorkLimitError, type GrooveCellPlan } from './solver-budget.js';
 import type { Scenario } from './scenario.js';
 import {
   SLIP_DRAG_REFERENCES,
@@ -271,13 +272,24 @@ interface FieldRun {
  * ConvergenceError, impossible geometry to DomainError; any other failure of one
  * direction is recorded so that direction falls back to the closed form with a warning.
  */
-function runFieldSolver(input: GrooveCellInput): FieldRun {
+function runFieldSolver(input: GrooveCellInput, explicit: boolean): FieldRun {
   const start = performance.now();
   const run: FieldRun = { failures: [], wallTimeMs: 0 };
+  // Work bound before any solve (src/physics/solver-budget.ts): asked for explicitly, a geometry beyond it is
+  // a 422 naming the field and the limit; under 'auto' the closed form stands in, with a warning.
+  let plan: GrooveCellPlan;
+  try {
+    plan = planGrooveCellSolve(input);
+  } catch (error) {
+    if (explicit || !(error instanceof WorkLimitError)) throw error;
+    run.failures.push(error.message);
+    return run;
+  }
+  const bounded = { ...input, grooveDepth: plan.solvedDepth };
   for (const direction of ['longitudinal', 'transverse'] as const) {
     const solve = direction === 'longitudinal' ? solveLongitudinalCell : solveTransverseCell;
     try {
-      run[direction] = solve(input);
+      run[direction] = solve(bounded);
     } catch (error) {
       if (error instanceof SolverDivergence) {
         throw new ConvergenceError(`groove-cell ${direction} solver did not converge`, error.iterations, error.residual, 'method');
@@ -384,7 +396,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
       cellsPerPitch: input.grid?.cellsPerPitch,
       maxCells: input.grid?.maxCells,
       domainHeight: input.grid?.domainHeight,
-    });
+    }, method === 'field');
     if (field.failures.length > 0) {
       notes.warn(
         'field-solver-unavailable',

@@ -1,79 +1,65 @@
 /**
  * Interface solvers for surfactant-laden slip (the numerical part beyond the
- * scaling theory of surfactant-scaling.ts).
+ * scaling theory of surfactant-scaling.ts). This module holds the transverse
+ * grating solver; the long-wave model along finite streamwise grooves is in
+ * surfactant-groove.ts and the shared transport pieces in
+ * surfactant-transport.ts (both re-exported here).
  *
- * 1. Transverse grating, one period P, gap of width w = φP, half-space of
- *    working fluid above, lubricant (or gas) below the gap.
- *    - Water side: Stokes flow in the half-space. Writing the flow as the
- *      no-slip shear flow γ̇y plus a periodic perturbation driven by the
- *      interface velocity u(x), Fourier mode k of u with amplitude û_k
- *      changes the wall shear by −2μ|k|û_k (stream function (B y) e^{−|k|y}
- *      with zero normal velocity at y = 0; derived here, standard Stokes
- *      result). Hence τ(x) = μγ̇ − 2μ(|∂|u)(x).
- *    - Lubricant: local drag μ u / b_local (b_local the lubricant's local
- *      slip length; zero drag for gas).
- *    - Ridges: no slip, u = 0.
- *    - Gap stress balance: τ = μ u/b_local − dσ/dx, σ by the Szyszkowski
- *      equation σ = σ0 + nRTΓ_m ln(1 − Γ/Γ_m).
- *    - Surface transport: d(uΓ)/dx − D_I d²Γ/dx² = J with zero total flux at
- *      the contact lines and Langmuir exchange J = κ_a c_s(Γ_m − Γ) − κ_d Γ,
- *      where the sublayer concentration follows the bulk-diffusion closure
- *      J = D (c0 − c_s)/δ with the Lévêque-type layer δ of Landel et al.
- *      (2020, eqs. 3.20–3.22). Eliminating c_s:
- *      J = [K c0 (Γ_m − Γ) − Γ] / (1/κ_d + K δ (Γ_m − Γ)/D)
- *      (1/κ_d → 0 for diffusion-controlled exchange).
- *    Discretisation (ours): N uniform cells per period, the gap made of
- *    whole cells; |∂| as the circulant trigonometric-interpolation matrix
- *    (spectral collocation); finite volumes for the transport with the
- *    exponentially fitted (Scharfetter–Gummel / Il'in) flux, exact for
- *    constant coefficients and stable at any cell Péclet number
- *    (Scharfetter & Gummel 1969, IEEE Trans. Electron Devices 16, 64–77,
- *    doi:10.1109/T-ED.1969.16566, DOI from memory). The linear problem (linearised about the
- *    uniform equilibrium Γ_eq) is solved first; the full nonlinear problem
- *    then by Newton's method (dense, difference Jacobian), with continuation
- *    in the Marangoni number when the direct Newton fails, so stagnant caps
- *    (Γ far from uniform) are resolved.
+ * Transverse grating, one period P, gap of width w = φP, half-space of
+ * working fluid above, lubricant (or gas) below the gap.
+ * - Water side: Stokes flow in the half-space. Writing the flow as the
+ *   no-slip shear flow γ̇y plus a periodic perturbation driven by the
+ *   interface velocity u(x), Fourier mode k of u with amplitude û_k changes
+ *   the wall shear by −2μ|k|û_k (stream function (B y) e^{−|k|y} with zero
+ *   normal velocity at y = 0; derived here, standard Stokes result). Hence
+ *   τ(x) = μγ̇ − 2μ(|∂|u)(x).
+ * - Lubricant: local drag μ u / b_local (b_local the lubricant's local slip
+ *   length; zero drag for gas). Ridges: no slip, u = 0.
+ * - Gap stress balance: τ = μ u/b_local − dσ/dx, σ by the Szyszkowski
+ *   equation σ = σ0 + nRTΓ_m ln(1 − Γ/Γ_m).
+ * - Surface transport: d(uΓ)/dx − D_I d²Γ/dx² = J with zero total flux at
+ *   the contact lines and the exchange J of surfactant-transport.ts.
  *
- * 2. Streamwise grooves of finite length L_g: long-wave (L_g ≫ P) 1-D model
- *    along the groove (ours). Across the groove the Stokes problem is linear
- *    in the shear deficit, so a Marangoni stress τ_M(x) that varies slowly
- *    along the groove gives a groove-mean interface velocity
- *    U(x) = U_c (1 − τ_M/τ_w) with U_c = γ̇ b_∥/φ the clean groove-mean
- *    velocity. Transport d(UΓ)/dx − D_I Γ'' = J with zero flux at both
- *    ends; the retained longitudinal slip is the groove-mean of U/U_c,
- *    equal to 1 − (σ(0) − σ(L_g))/(τ_w L_g) in the continuum.
+ * Discretisation (ours): N uniform cells per period, the gap made of whole
+ * cells; |∂| as the circulant trigonometric-interpolation matrix (spectral
+ * collocation); finite volumes with the fitted flux for the transport.
+ *
+ * Solution method (ours). The momentum balance is linear in the interface
+ * velocity and, written in the tension variable v of surfactant-transport.ts,
+ * linear in v too: u = u_c − (Ma s_eq) G v with u_c the clean velocity and
+ * G = M⁻¹D (M the gap operator 2|∂| + drag, D the tension-gradient
+ * stencil), both computed once per grid and cached. The velocity is
+ * eliminated, leaving N_g transport equations in v, solved by Newton's
+ * method with the analytic Jacobian and a line search, from a warm start
+ * (a neighbouring concentration) and then from the linearised solution; if
+ * Newton fails from both, by pseudo-transient continuation from the warm
+ * start and then from the undisturbed interface: the interface evolves in
+ * pseudo time as it would from that state once the flow is switched on, and
+ * the time step grows until the iteration is Newton's
+ * (numerics/steady-state.ts). Steps are projected so no cell's surface
+ * excess turns negative. Convergence is judged relative to the size of each cell's transport terms,
+ * so the stiff coupling at large Marangoni numbers (Ma·s_eq up to ~10⁴ in
+ * realistic designs) does not leave a residual floor above the tolerance.
+ * The linearised problem (about the uniform equilibrium Γ_eq) is solved as
+ * well and reported.
  *
  * Non-convergence throws ConvergenceError with the iteration count.
  */
-import { solveDense } from '../numerics/linalg.js';
-import { solveDenseNewton } from '../numerics/newton-dense.js';
+import { solveDense, solveDenseInPlace } from '../numerics/linalg.js';
+import { invertSymmetricToeplitz } from '../numerics/toeplitz.js';
+import { relativeResidual, solveSteadyState, type SteadyStateProblem, type SteadyStateResult } from '../numerics/steady-state.js';
 import { ConvergenceError, DomainError, GAS_CONSTANT } from './common.js';
-import { LANDEL_FIT } from './surfactant-scaling.js';
-import type { ResolvedSurfactant } from '../materials/surfactants.js';
+import {
+  diffusiveLayerThickness,
+  exchangeState,
+  transportProblem,
+  type ExchangeState,
+  type InterfaceProfile,
+  type SurfactantSolveConditions,
+} from './surfactant-transport.js';
 
-/** Exponentially fitted flux weight B(z) = z/(e^z − 1), B(0) = 1. */
-function fittedWeight(z: number): number {
-  if (Math.abs(z) < 1e-8) return 1 - z / 2;
-  if (z > 700) return 0;
-  return z / Math.expm1(z);
-}
-
-/** Lévêque-type diffusive sublayer on an interface of length g (Landel et al. 2020, eqs. 3.20–3.22), m. */
-export function diffusiveLayerThickness(length: number, shearRate: number, bulkDiffusivity: number): number {
-  return length * LANDEL_FIT.delta0 * Math.pow(1 + (LANDEL_FIT.delta1 * shearRate * length * length) / bulkDiffusivity, -1 / 3);
-}
-
-/** Surfactant, its bulk state and the Newton controls shared by both interface solvers. */
-export interface SurfactantSolveConditions {
-  surfactant: ResolvedSurfactant;
-  /** c0, mol/m³. */
-  bulkConcentration: number;
-  /** T, K. */
-  temperature: number;
-  /** Newton tolerance on the dimensionless residual, ∞-norm (default 1e-10). */
-  tolerance?: number;
-  maxIterations?: number;
-}
+export { diffusiveLayerThickness, type InterfaceProfile, type SurfactantSolveConditions } from './surfactant-transport.js';
+export { solveLongWaveGroove, type LongWaveInput, type LongWaveSolution } from './surfactant-groove.js';
 
 export interface TransverseSolverInput extends SurfactantSolveConditions {
   /** P, m. */
@@ -88,27 +74,29 @@ export interface TransverseSolverInput extends SurfactantSolveConditions {
   localSlipLength?: number;
   /** Requested cells per period (default 256; the solver picks N ≥ this so the gap is whole cells). */
   cells?: number;
+  /**
+   * States of earlier solves on the same grid (e.g. neighbouring concentrations, or a prediction from
+   * them) to start from; each is tried as the same profile of v and as the same tension profile, and
+   * Newton starts from the candidate with the smallest residual.
+   */
+  warmStart?: InterfaceState | InterfaceState[];
+  /** Solve and report the linearised problem (default true); false skips it unless Newton needs it as a start. */
+  reportLinearised?: boolean;
 }
 
-export interface InterfaceProfile {
-  /** Positions along the flow, m (gap from 0 to w, or groove from 0 to L_g). */
-  position: number[];
-  /** Interface velocity, m/s. */
-  velocity: number[];
-  /** Clean interface velocity on the same grid, m/s. */
-  cleanVelocity: number[];
-  /** Γ, mol/m². */
-  surfaceExcess: number[];
-  /** −dσ/dx, Pa (positive = opposing the flow). */
-  marangoniStress: number[];
-  /** σ(x) − σ_eq, N/m. */
-  tensionChange: number[];
+/** Tension-variable profile v on the gap cells (see surfactant-transport.ts); opaque to callers. */
+export interface InterfaceState {
+  cells: number;
+  gapCells: number;
+  tension: Float64Array;
+  /** s_eq = ln(1 + K c0) of that solve. */
+  equilibriumTension: number;
 }
 
 export interface InterfaceSolution {
   /** b_surfactant/b_clean on the same grid. */
   slipRetained: number;
-  /** Same from the linearised problem. */
+  /** Same from the linearised problem (NaN only when `reportLinearised: false` and it was not needed). */
   linearSlipRetained: number;
   /** Clean slip length of the discrete problem, m (compare with Philip). */
   cleanSlipLength: number;
@@ -117,8 +105,9 @@ export interface InterfaceSolution {
   /** Mean Marangoni stress over the interface, Pa. */
   meanMarangoniStress: number;
   profile: InterfaceProfile;
-  /** Newton iterations of the nonlinear solve (all continuation steps). */
+  /** Linear solves of the nonlinear solve (Newton iterations plus pseudo time steps). */
   iterations: number;
+  /** Relative residual max_i |R_i|/(magnitude of cell i's terms) at the solution. */
   residual: number;
   tolerance: number;
   cells: number;
@@ -126,7 +115,10 @@ export interface InterfaceSolution {
   /** Gas fraction as resolved by the grid (whole cells). */
   gasFractionResolved: number;
   stagnantCap: boolean;
+  /** Pseudo time steps of the continuation (0 when Newton converged directly). */
   continuationSteps: number;
+  /** For a warm start of a neighbouring solve. */
+  state: InterfaceState;
 }
 
 /** Circulant matrix entries c_d of |∂| on a unit period sampled at N points (trigonometric interpolation). */
@@ -154,375 +146,312 @@ function chooseGrid(requested: number, phi: number): { N: number; Ng: number } {
   return { N: best.N, Ng: best.Ng };
 }
 
-function exchangeParameters(s: ResolvedSurfactant, c0: number, delta: number): { k: number; geq: number; inverseDesorption: number; sublayer: number } {
-  const k = s.langmuirConstant * c0;
+/** Gap operator of one grid and drag: clean velocity u_c = M⁻¹1 and G = M⁻¹D (velocity per unit tension gradient). */
+interface GapOperator {
+  N: number;
+  Ng: number;
+  h: number;
+  clean: Float64Array;
+  cleanSum: number;
+  /** Row-major Ng×Ng. */
+  green: Float64Array;
+  /** Face averages of `green`, row-major (Ng−1)×Ng. */
+  faceGreen: Float64Array;
+}
+
+const OPERATORS = new Map<string, GapOperator>();
+const OPERATOR_CACHE_SIZE = 12;
+
+/** The clamped central difference (S_r − S_l)/(2h) of cell i, as (left, right, weight). */
+function gradientStencil(i: number, Ng: number, h: number): [number, number, number] {
+  return [Math.max(i - 1, 0), Math.min(i + 1, Ng - 1), 1 / (2 * h)];
+}
+
+function gapOperator(N: number, Ng: number, drag: number): GapOperator {
+  const key = `${N}:${Ng}:${drag}`;
+  const cached = OPERATORS.get(key);
+  if (cached) {
+    OPERATORS.delete(key);
+    OPERATORS.set(key, cached);
+    return cached;
+  }
+  const h = 1 / N;
+  const stencil = absoluteDerivativeStencil(N);
+  // M = 2|∂| + drag on the gap is symmetric Toeplitz and positive definite: its inverse in O(Ng²).
+  const firstRow = new Float64Array(Ng);
+  for (let k = 0; k < Ng; k++) firstRow[k] = 2 * stencil[k] + (k === 0 ? drag : 0);
+  const inverse = invertSymmetricToeplitz(firstRow);
+  if (!inverse) throw new ConvergenceError('clean interface system is singular', 0, Infinity);
+  const clean = new Float64Array(Ng);
+  let cleanSum = 0;
+  for (let i = 0; i < Ng; i++) {
+    let acc = 0;
+    for (let j = 0; j < Ng; j++) acc += inverse[i * Ng + j];
+    clean[i] = acc;
+    cleanSum += acc;
+  }
+  // G = M⁻¹D with D the sparse gradient stencil: column by column from the columns of M⁻¹.
+  const green = new Float64Array(Ng * Ng);
+  for (let k = 0; k < Ng; k++) {
+    const [l, r, wgt] = gradientStencil(k, Ng, h);
+    for (let i = 0; i < Ng; i++) {
+      const m = inverse[i * Ng + k] * wgt;
+      green[i * Ng + r] += m;
+      green[i * Ng + l] -= m;
+    }
+  }
+  const faceGreen = new Float64Array((Ng - 1) * Ng);
+  for (let a = 0; a < Ng - 1; a++) for (let j = 0; j < Ng; j++) faceGreen[a * Ng + j] = 0.5 * (green[a * Ng + j] + green[(a + 1) * Ng + j]);
+  const op = { N, Ng, h, clean, cleanSum, green, faceGreen };
+  OPERATORS.set(key, op);
+  if (OPERATORS.size > OPERATOR_CACHE_SIZE) OPERATORS.delete(OPERATORS.keys().next().value as string);
+  return op;
+}
+
+/** Linearised problem about the uniform equilibrium (central fluxes, q = Γ/Γ_eq): returns q. */
+function solveLinearised(op: GapOperator, Ma: number, eps: number, ex: ExchangeState, timeScale: number): Float64Array | null {
+  const { Ng, h, clean, faceGreen } = op;
+  const coupling = Ma * ex.k; // Ma·Γ_eq/(Γ_m − Γ_eq)
+  // Exchange linearised with its denominator at the uniform state: rate = denomFixed·(1 − q).
+  const denomFixed = (timeScale * (1 + ex.k)) / (ex.inverseDesorption + ex.sublayer * (1 - ex.equilibriumCoverage));
+  const A = new Float64Array(Ng * Ng);
+  const b = new Float64Array(Ng);
+  const addFace = (a: number, sign: number, row: number): void => {
+    // sign·F_a into row; F_a = ufc_a − coupling Σ Gf q − (ε/h)(q_{a+1} − q_a)
+    b[row] -= sign * 0.5 * (clean[a] + clean[a + 1]);
+    for (let j = 0; j < Ng; j++) A[row * Ng + j] -= sign * coupling * faceGreen[a * Ng + j];
+    A[row * Ng + a + 1] -= (sign * eps) / h;
+    A[row * Ng + a] += (sign * eps) / h;
+  };
+  for (let i = 0; i < Ng; i++) {
+    if (i < Ng - 1) addFace(i, 1, i);
+    if (i > 0) addFace(i - 1, -1, i);
+    A[i * Ng + i] += h * denomFixed;
+    b[i] += h * denomFixed;
+  }
+  return solveDense(A, b, Ng);
+}
+
+/** The transport equations in v with the velocity eliminated (module comment). */
+function transverseProblem(op: GapOperator, marangoni: number, eps: number, ex: ExchangeState, timeScale: number): SteadyStateProblem & { velocity(v: Float64Array): Float64Array } {
+  const { Ng, h, clean, green, faceGreen } = op;
+  const velocity = (v: Float64Array): Float64Array => {
+    const u = new Float64Array(Ng);
+    for (let i = 0; i < Ng; i++) {
+      let acc = 0;
+      const row = i * Ng;
+      for (let j = 0; j < Ng; j++) acc += green[row + j] * v[j];
+      u[i] = clean[i] - marangoni * acc;
+    }
+    return u;
+  };
+  const transport = transportProblem({
+    volume: new Float64Array(Ng).fill(h),
+    spacing: () => h,
+    faceVelocity(v, a) {
+      let acc = 0;
+      const row = a * Ng;
+      for (let j = 0; j < Ng; j++) acc += faceGreen[row + j] * v[j];
+      return 0.5 * (clean[a] + clean[a + 1]) - marangoni * acc;
+    },
+    diffusivity: eps,
+    exchange: ex,
+    timeScale,
+  });
+  const J = new Float64Array(Ng * Ng); // Jacobian workspace, reused every iteration
   return {
-    k,
-    geq: k / (1 + k),
-    inverseDesorption: s.desorptionRate !== undefined ? 1 / s.desorptionRate : 0,
-    sublayer: (s.langmuirConstant * s.maximumSurfaceExcess * delta) / s.bulkDiffusivity,
+    ...transport,
+    velocity,
+    solveLinearised(v, shift, rhs) {
+      J.fill(0);
+      const dU = transport.localJacobian(v, shift, (i, j, value) => {
+        J[i * Ng + j] += value;
+      });
+      // Face velocity U_a = U_c,a − Ma s_eq Σ_j Gf_aj v_j: a dense coupling through the half-space.
+      for (let a = 0; a < Ng - 1; a++) {
+        const w = -marangoni * dU[a];
+        if (w === 0) continue;
+        const fg = a * Ng;
+        for (let j = 0; j < Ng; j++) {
+          const t = w * faceGreen[fg + j];
+          J[a * Ng + j] += t;
+          J[(a + 1) * Ng + j] -= t;
+        }
+      }
+      const step = Float64Array.from(rhs);
+      return solveDenseInPlace(J, step, Ng) ? step : null;
+    },
   };
 }
 
 /**
- * Solve the transverse-grating interface problem (module comment, part 1).
+ * Solve the transverse-grating interface problem (module comment).
  * Validity: Stokes flow, half-space (channel height ≫ P), flat interface,
- * bulk concentration below the CMC. Throws ConvergenceError if Newton
- * (with continuation) does not reach the tolerance.
+ * bulk concentration below the CMC. Throws ConvergenceError if neither
+ * Newton nor the pseudo-transient continuation reaches the tolerance.
  */
 export function solveTransverseInterface(input: TransverseSolverInput): InterfaceSolution {
   const { pitch: P, grooveWidth: w, shearRate, viscosity: mu, surfactant: s, bulkConcentration: c0, temperature: T } = input;
   if (!(w > 0 && w < P)) throw new DomainError('groove width must lie between 0 and the pitch', { field: 'texture.grooveWidth' });
   if (!(shearRate > 0)) throw new DomainError('wall shear rate must be positive', { field: 'scenario.flow.wallShearStress' });
   const tol = input.tolerance ?? 1e-10;
-  const maxIterations = input.maxIterations ?? 40;
+  const budget = Math.max(1, Math.round(input.maxIterations ?? 400));
   const phi = w / P;
   const { N, Ng } = chooseGrid(Math.max(16, Math.round(input.cells ?? 256)), phi);
-  const h = 1 / N;
-  const stencil = absoluteDerivativeStencil(N);
   const drag = input.localSlipLength !== undefined && Number.isFinite(input.localSlipLength) && input.localSlipLength > 0 ? P / input.localSlipLength : 0;
-  // Dense momentum operator on the gap: 2|∂| + drag.
-  const Mop = new Float64Array(Ng * Ng);
-  for (let i = 0; i < Ng; i++) for (let j = 0; j < Ng; j++) Mop[i * Ng + j] = 2 * stencil[Math.abs(i - j)] + (i === j ? drag : 0);
-  const ones = new Float64Array(Ng).fill(1);
-  const clean = solveDense(Mop, ones, Ng);
-  if (!clean) throw new ConvergenceError('clean interface system is singular', 0, Infinity);
-  let cleanSum = 0;
-  for (let i = 0; i < Ng; i++) cleanSum += clean[i];
+  const op = gapOperator(N, Ng, drag);
+  const { h, clean, cleanSum } = op;
   const cleanSlip = cleanSum * h * P; // mean of ũ over the period times P (b = ⟨u⟩/γ̇)
 
   const nRTGm = s.gibbsPrefactor * GAS_CONSTANT * T * s.maximumSurfaceExcess;
   const Ma = nRTGm / (mu * shearRate * P);
   const eps = Math.max(s.surfaceDiffusivity, 1e-30) / (shearRate * P * P);
-  const delta = diffusiveLayerThickness(w, shearRate, s.bulkDiffusivity);
-  const ex = exchangeParameters(s, c0, delta);
-  const geq = ex.geq;
-  const invBi = ex.inverseDesorption * shearRate;
-  const beta = ex.sublayer * shearRate;
+  const ex = exchangeState(s, c0, diffusiveLayerThickness(w, shearRate, s.bulkDiffusivity));
+  const timeScale = 1 / shearRate;
+  const marangoni = Ma * ex.equilibriumTension;
 
-  const profileOf = (x: Float64Array): InterfaceProfile => {
+  const profileOf = (v: Float64Array, u: Float64Array): InterfaceProfile => {
     const position: number[] = [];
     const velocity: number[] = [];
     const cleanVelocity: number[] = [];
     const surfaceExcess: number[] = [];
     const marangoniStress: number[] = [];
     const tensionChange: number[] = [];
-    const sEq = Math.log1p(-geq);
     for (let i = 0; i < Ng; i++) {
+      const [l, r, wgt] = gradientStencil(i, Ng, h);
       position.push((i + 0.5) * h * P);
-      velocity.push(x[i] * shearRate * P);
+      velocity.push(u[i] * shearRate * P);
       cleanVelocity.push(clean[i] * shearRate * P);
-      surfaceExcess.push(geq * x[Ng + i] * s.maximumSurfaceExcess);
-      const si = Math.log1p(-geq * x[Ng + i]);
-      const sl = Math.log1p(-geq * x[Ng + Math.max(i - 1, 0)]);
-      const sr = Math.log1p(-geq * x[Ng + Math.min(i + 1, Ng - 1)]);
-      marangoniStress.push((-nRTGm * (sr - sl)) / (2 * h * P));
-      tensionChange.push(nRTGm * (si - sEq));
+      surfaceExcess.push(-Math.expm1(-ex.equilibriumTension * v[i]) * s.maximumSurfaceExcess);
+      marangoniStress.push((nRTGm * ex.equilibriumTension * (v[r] - v[l]) * wgt) / P);
+      tensionChange.push(-nRTGm * ex.equilibriumTension * (v[i] - 1));
     }
     return { position, velocity, cleanVelocity, surfaceExcess, marangoniStress, tensionChange };
   };
+  const base = { cleanSlipLength: cleanSlip, tolerance: tol, cells: N, gapCells: Ng, gasFractionResolved: Ng / N };
 
-  if (c0 === 0 || geq === 0) {
-    const x = new Float64Array(2 * Ng);
-    x.set(clean, 0);
-    x.fill(1, Ng);
+  if (c0 === 0 || ex.k === 0) {
+    const v = new Float64Array(Ng).fill(1);
     return {
+      ...base,
       slipRetained: 1,
       linearSlipRetained: 1,
-      cleanSlipLength: cleanSlip,
       surfaceTensionDrop: 0,
       meanMarangoniStress: 0,
-      profile: profileOf(x),
+      profile: profileOf(v, clean),
       iterations: 0,
       residual: 0,
-      tolerance: tol,
-      cells: N,
-      gapCells: Ng,
-      gasFractionResolved: Ng / N,
       stagnantCap: false,
       continuationSteps: 0,
+      state: { cells: N, gapCells: Ng, tension: v, equilibriumTension: ex.equilibriumTension },
     };
   }
 
-  const mu2 = new Float64Array(Ng);
-  // Residual of the full (linear = false) or linearised problem, Marangoni number scaled by theta.
-  const makeResidual = (theta: number, linear: boolean) => (x: Float64Array, out: Float64Array) => {
-    const MaT = Ma * theta;
-    for (let i = 0; i < Ng; i++) {
-      let acc = 0;
-      const row = i * Ng;
-      for (let j = 0; j < Ng; j++) acc += Mop[row + j] * x[j];
-      mu2[i] = acc;
-    }
-    for (let i = 0; i < Ng; i++) {
-      const qi = x[Ng + i];
-      const ql = x[Ng + Math.max(i - 1, 0)];
-      const qr = x[Ng + Math.min(i + 1, Ng - 1)];
-      let dsdx: number;
-      if (linear) dsdx = (-(geq / (1 - geq)) * (qr - ql)) / (2 * h);
-      else dsdx = (Math.log1p(-geq * qr) - Math.log1p(-geq * ql)) / (2 * h);
-      out[i] = 1 - mu2[i] + MaT * dsdx;
-      // transport, cell i
-      const flux = (a: number): number => {
-        // face between cell a and a+1
-        if (a < 0 || a >= Ng - 1) return 0;
-        const uf = 0.5 * (x[a] + x[a + 1]);
-        const qa = x[Ng + a];
-        const qb = x[Ng + a + 1];
-        if (linear) return uf - (eps * (qb - qa)) / h;
-        const z = (uf * h) / eps;
-        return (eps / h) * (fittedWeight(-z) * qa - fittedWeight(z) * qb);
-      };
-      const g = linear ? geq : geq * qi;
-      const exchange = ((1 + ex.k) * (1 - qi)) / (invBi + beta * (1 - g));
-      out[Ng + i] = (flux(i) - flux(i - 1)) / h - exchange;
-      if (!linear && !(g < 1)) out[Ng + i] = NaN;
-    }
-  };
-  const typical = new Float64Array(2 * Ng);
-  for (let i = 0; i < Ng; i++) {
-    typical[i] = Math.max(0.01, Math.abs(clean[i]));
-    typical[Ng + i] = 1;
-  }
-  // Linear problem: Newton converges in one step (difference Jacobian of a linear map).
-  const guess = new Float64Array(2 * Ng);
-  guess.set(clean, 0);
-  guess.fill(1, Ng);
-  const lin = solveDenseNewton(makeResidual(1, true), guess, { tolerance: tol, maxIterations: 4, typicalSize: typical });
-  const linearX = lin.x;
-  let linSum = 0;
-  for (let i = 0; i < Ng; i++) linSum += linearX[i];
-  const linearSlipRetained = linSum / cleanSum;
+  const problem = transverseProblem(op, marangoni, eps, ex, timeScale);
+  let maxClean = 0;
+  for (let i = 0; i < Ng; i++) maxClean = Math.max(maxClean, clean[i]);
+  const solveOptions = { tolerance: tol, maxNewtonIterations: Math.min(20, budget), maxPseudoSteps: 0, initialPseudoStep: h / Math.max(maxClean, eps / h) };
 
-  // Nonlinear: direct Newton from the linear solution (clipped to admissible Γ), else continuation in Ma.
-  const start = Float64Array.from(linearX);
-  const qMax = (1 - 1e-9) / geq;
-  for (let i = Ng; i < 2 * Ng; i++) start[i] = Math.min(Math.max(start[i], 1e-6), 0.999 * qMax);
-  let iterations = 0;
-  let result = solveDenseNewton(makeResidual(1, false), start, { tolerance: tol, maxIterations, typicalSize: typical });
-  iterations += result.iterations;
-  let continuationSteps = 0;
-  if (!result.converged) {
-    let theta = 0;
-    let dTheta = 0.05;
-    let x: Float64Array = Float64Array.from(guess);
-    const first = solveDenseNewton(makeResidual(0, false), x, { tolerance: tol, maxIterations: Math.max(maxIterations, 10), typicalSize: typical });
-    iterations += first.iterations;
-    if (!first.converged) throw new ConvergenceError('surfactant transport (no Marangoni coupling) did not converge', iterations, first.residualNorm);
-    x = first.x;
-    let last = first;
-    while (theta < 1) {
-      const next = Math.min(1, theta + dTheta);
-      const r = solveDenseNewton(makeResidual(next, false), x, { tolerance: tol, maxIterations: Math.min(25, maxIterations), typicalSize: typical });
-      iterations += r.iterations;
-      continuationSteps++;
-      if (r.converged) {
-        theta = next;
-        x = r.x;
-        last = r;
-        dTheta = Math.min(dTheta * 2, 0.5);
-      } else {
-        dTheta /= 4;
-        if (dTheta < 1e-4 || continuationSteps > 200) {
-          throw new ConvergenceError('surfactant interface Newton continuation stalled', iterations, r.residualNorm);
+  // The linearised problem (about the uniform equilibrium): reported, and a start for Newton.
+  let linearQ: Float64Array | null | undefined;
+  let linearSlipRetained = NaN;
+  const linearised = (): Float64Array | null => {
+    if (linearQ !== undefined) return linearQ;
+    linearQ = solveLinearised(op, Ma, eps, ex, timeScale);
+    if (linearQ) {
+      let sum = 0;
+      for (let i = 0; i < Ng; i++) {
+        let acc = 0;
+        for (let j = 0; j < Ng; j++) acc += op.green[i * Ng + j] * linearQ[j];
+        sum += clean[i] - Ma * ex.k * acc;
+      }
+      linearSlipRetained = sum / cleanSum;
+    }
+    return linearQ;
+  };
+  if (input.reportLinearised !== false) linearised();
+  const linearStart = (): Float64Array | null => {
+    const q = linearised();
+    if (!q) return null;
+    const mapped = new Float64Array(Ng);
+    for (let i = 0; i < Ng; i++) {
+      const coverage = Math.min(Math.max(ex.equilibriumCoverage * q[i], 1e-6 * ex.equilibriumCoverage), 1 - 1e-3 * (1 - ex.equilibriumCoverage));
+      mapped[i] = -Math.log1p(-coverage) / ex.equilibriumTension;
+    }
+    return mapped;
+  };
+
+  // Starts: a warm start on the same grid, taken either as the same profile of v or as the same tension
+  // profile s = v·s_eq (whichever has the smaller residual), then the linearised profile mapped to v with
+  // the coverage kept admissible; Newton from each. Last, the pseudo-time march from the undisturbed
+  // interface, which is the physical start-up of the flow over a freshly equilibrated interface.
+  const starts: Array<() => Float64Array | null> = [];
+  const warm = (Array.isArray(input.warmStart) ? input.warmStart : input.warmStart ? [input.warmStart] : []).filter((w) => w.cells === N && w.gapCells === Ng);
+  if (warm.length > 0) {
+    starts.push(() => {
+      let best: Float64Array | null = null;
+      let bestNorm = Infinity;
+      for (const w of warm) {
+        for (const candidate of [Float64Array.from(w.tension), w.tension.map((x) => (x * w.equilibriumTension) / ex.equilibriumTension)]) {
+          const norm = relativeResidual(problem, candidate);
+          if (norm < bestNorm) {
+            bestNorm = norm;
+            best = candidate;
+          }
         }
       }
-    }
-    result = last;
+      return best;
+    });
   }
-  const x = result.x;
+  starts.push(linearStart);
+  let iterations = 0;
+  let sol: SteadyStateResult | undefined;
+  const tried: Float64Array[] = [];
+  for (const start of starts) {
+    const x0 = start();
+    if (!x0) continue;
+    tried.push(x0);
+    sol = solveSteadyState(problem, x0, solveOptions);
+    iterations += sol.iterations;
+    if (sol.converged || iterations >= budget) break;
+  }
+  // Pseudo-time march: from the warm start if there is one (the interface equilibrated at a neighbouring
+  // concentration is as physical a start as the undisturbed one, and closer), then from the undisturbed one.
+  const marchStarts = [...(warm.length > 0 && tried.length > 0 ? [tried[0]] : []), new Float64Array(Ng).fill(1)];
+  for (const x0 of marchStarts) {
+    if (sol?.converged || iterations >= budget) break;
+    sol = solveSteadyState(problem, x0, { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: Math.max(1, budget - iterations) });
+    iterations += sol.iterations;
+  }
+  if (!sol) sol = solveSteadyState(problem, new Float64Array(Ng).fill(1), { ...solveOptions, maxNewtonIterations: 0, maxPseudoSteps: budget });
+  if (!sol.converged) {
+    throw new ConvergenceError('surfactant interface solver (Newton, then pseudo-transient continuation) did not converge', iterations, sol.residualNorm);
+  }
+  const v = sol.x;
+  const u = problem.velocity(v);
   let sum = 0;
-  for (let i = 0; i < Ng; i++) sum += x[i];
-  const slipRetained = sum / cleanSum;
-  const profile = profileOf(x);
-  const drop = nRTGm * (Math.log1p(-geq * x[Ng]) - Math.log1p(-geq * x[2 * Ng - 1]));
+  for (let i = 0; i < Ng; i++) sum += u[i];
+  const profile = profileOf(v, u);
   let stressSum = 0;
   for (const t of profile.marangoniStress) stressSum += t;
   // Stagnant cap: a downstream stretch (≥ 10 % of the gap) nearly at rest while the upstream part still moves.
-  let restCells = 0;
-  for (let i = Ng - 1; i >= 0 && x[i] < 0.1 * clean[i]; i--) restCells++;
+  // The cell at the contact line is not judged: there u_c → 0 and the ratio u/u_c says nothing.
+  let restCells = 1;
+  for (let i = Ng - 2; i >= 0 && u[i] < 0.1 * clean[i]; i--) restCells++;
+  if (restCells === 1) restCells = 0;
   let maxRatio = 0;
-  for (let i = 0; i < Ng; i++) maxRatio = Math.max(maxRatio, x[i] / clean[i]);
-  const stagnantCap = restCells >= 0.1 * Ng && restCells < Ng && maxRatio > 0.3;
+  for (let i = 0; i < Ng; i++) maxRatio = Math.max(maxRatio, u[i] / clean[i]);
   return {
-    slipRetained,
+    ...base,
+    slipRetained: sum / cleanSum,
     linearSlipRetained,
-    cleanSlipLength: cleanSlip,
-    surfaceTensionDrop: drop,
+    surfaceTensionDrop: nRTGm * ex.equilibriumTension * (v[Ng - 1] - v[0]),
     meanMarangoniStress: stressSum / Ng,
     profile,
     iterations,
-    residual: result.residualNorm,
-    tolerance: tol,
-    cells: N,
-    gapCells: Ng,
-    gasFractionResolved: Ng / N,
-    stagnantCap,
-    continuationSteps,
-  };
-}
-
-export interface LongWaveInput extends SurfactantSolveConditions {
-  /** L_g, m. */
-  grooveLength: number;
-  /** U_c = γ̇ b_∥/φ, clean groove-mean interface velocity, m/s. */
-  cleanInterfaceVelocity: number;
-  shearRate: number;
-  viscosity: number;
-  /** Cells along the groove (default 200). */
-  cells?: number;
-  /** Richardson-extrapolate the retained slip from `cells` and `cells/2` (default true). */
-  extrapolate?: boolean;
-}
-
-export interface LongWaveSolution {
-  /** Groove-mean U/U_c (Richardson-extrapolated unless `extrapolate: false`). */
-  slipRetained: number;
-  /** The same on the finest grid, when extrapolated. */
-  slipRetainedFinestGrid?: number;
-  surfaceTensionDrop: number;
-  profile: InterfaceProfile;
-  iterations: number;
-  residual: number;
-  tolerance: number;
-  cells: number;
-  stagnantCap: boolean;
-}
-
-/**
- * Long-wave model along a streamwise groove of finite length (module
- * comment, part 2; ours). Validity: L_g ≫ P, Stokes flow, below the CMC.
- */
-export function solveLongWaveGroove(input: LongWaveInput): LongWaveSolution {
-  const fine = solveLongWaveOnGrid(input);
-  if (input.extrapolate === false || fine.slipRetained === 1) return fine;
-  // First-order scheme (upwind-like fitted fluxes, clustered cells): Richardson extrapolation
-  // from N and N/2 cells removes the leading error (checked against scipy solve_bvp in the tests).
-  const coarse = solveLongWaveOnGrid({ ...input, cells: Math.max(8, Math.round(fine.cells / 2)) });
-  const extrapolated = Math.min(1, Math.max(0, 2 * fine.slipRetained - coarse.slipRetained));
-  return { ...fine, slipRetained: extrapolated, slipRetainedFinestGrid: fine.slipRetained, iterations: fine.iterations + coarse.iterations };
-}
-
-function solveLongWaveOnGrid(input: LongWaveInput): LongWaveSolution {
-  const { grooveLength: Lg, cleanInterfaceVelocity: Uc, shearRate, viscosity: mu, surfactant: s, bulkConcentration: c0, temperature: T } = input;
-  if (!(Lg > 0)) throw new DomainError('groove length must be positive', { field: 'grooveLength' });
-  const tol = input.tolerance ?? 1e-10;
-  const N = Math.max(8, Math.round(input.cells ?? 200));
-  const nRTGm = s.gibbsPrefactor * GAS_CONSTANT * T * s.maximumSurfaceExcess;
-  const Ma = nRTGm / (mu * shearRate * Lg);
-  const delta = diffusiveLayerThickness(Lg, shearRate, s.bulkDiffusivity);
-  const ex = exchangeParameters(s, c0, delta);
-  const geq = ex.geq;
-  const position = Array.from({ length: N }, (_, i) => ((i + 0.5) / N) * Lg);
-  if (c0 === 0 || geq === 0 || !(Uc > 0)) {
-    return {
-      slipRetained: 1,
-      surfaceTensionDrop: 0,
-      profile: {
-        position,
-        velocity: position.map(() => Uc),
-        cleanVelocity: position.map(() => Uc),
-        surfaceExcess: position.map(() => 0),
-        marangoniStress: position.map(() => 0),
-        tensionChange: position.map(() => 0),
-      },
-      iterations: 0,
-      residual: 0,
-      tolerance: tol,
-      cells: N,
-      stagnantCap: false,
-    };
-  }
-  const eps = Math.max(s.surfaceDiffusivity, 1e-30) / (Uc * Lg);
-  const timeScale = Lg / Uc;
-  // Faces clustered at both ends (tanh stretching), where the cap and the upstream depletion layer sit.
-  const faces = new Float64Array(N + 1);
-  const stretch = 3.5;
-  for (let j = 0; j <= N; j++) faces[j] = 0.5 * (1 + Math.tanh(stretch * ((2 * j) / N - 1)) / Math.tanh(stretch));
-  const centres = new Float64Array(N);
-  const volume = new Float64Array(N);
-  for (let i = 0; i < N; i++) {
-    centres[i] = 0.5 * (faces[i] + faces[i + 1]);
-    volume[i] = faces[i + 1] - faces[i];
-  }
-  const gapTo = (a: number): number => centres[a + 1] - centres[a];
-  const faceVelocity = (q: Float64Array, a: number, theta: number): number =>
-    1 + (Ma * theta * (Math.log1p(-geq * q[a + 1]) - Math.log1p(-geq * q[a]))) / gapTo(a);
-  const makeResidual = (theta: number) => (q: Float64Array, out: Float64Array) => {
-    const flux = (a: number): number => {
-      if (a < 0 || a >= N - 1) return 0;
-      const d = gapTo(a);
-      const uf = faceVelocity(q, a, theta);
-      const z = (uf * d) / eps;
-      return (eps / d) * (fittedWeight(-z) * q[a] - fittedWeight(z) * q[a + 1]);
-    };
-    for (let i = 0; i < N; i++) {
-      const g = geq * q[i];
-      const exchange = (timeScale * (1 + ex.k) * (1 - q[i])) / (ex.inverseDesorption + ex.sublayer * (1 - g));
-      out[i] = g < 1 ? flux(i) - flux(i - 1) - exchange * volume[i] : NaN; // integrated over the cell: well scaled on small cells
-    }
-  };
-  let q: Float64Array = new Float64Array(N).fill(1);
-  let iterations = 0;
-  const maxIterations = input.maxIterations ?? 40;
-  let r = solveDenseNewton(makeResidual(1), q, { tolerance: tol, maxIterations });
-  iterations += r.iterations;
-  if (!r.converged) {
-    let theta = 0;
-    let dTheta = 0.05;
-    let steps = 0;
-    while (theta < 1) {
-      const next = Math.min(1, theta + dTheta);
-      const rr = solveDenseNewton(makeResidual(next), q, { tolerance: tol, maxIterations: Math.min(25, maxIterations) });
-      iterations += rr.iterations;
-      steps++;
-      if (rr.converged) {
-        theta = next;
-        q = rr.x;
-        r = rr;
-        dTheta = Math.min(2 * dTheta, 0.5);
-      } else {
-        dTheta /= 4;
-        if (dTheta < 1e-4 || steps > 200) throw new ConvergenceError('long-wave groove model did not converge', iterations, rr.residualNorm);
-      }
-    }
-  }
-  q = r.x;
-  const velocity: number[] = [];
-  const marangoniStress: number[] = [];
-  const sEq = Math.log1p(-geq);
-  for (let i = 0; i < N; i++) {
-    const left = i > 0 ? faceVelocity(q, i - 1, 1) : undefined;
-    const right = i < N - 1 ? faceVelocity(q, i, 1) : undefined;
-    const ui = left !== undefined && right !== undefined ? 0.5 * (left + right) : (left ?? right ?? 1);
-    velocity.push(ui * Uc);
-    marangoniStress.push((1 - ui) * mu * shearRate);
-  }
-  // Groove-mean of U/U_c: face velocities weighted by the centre-to-centre spacing.
-  let sumU = 0;
-  let span = 0;
-  for (let a = 0; a < N - 1; a++) {
-    sumU += faceVelocity(q, a, 1) * gapTo(a);
-    span += gapTo(a);
-  }
-  const slipRetained = sumU / span;
-  let restLength = 0;
-  for (let i = N - 1; i >= 0 && velocity[i] < 0.1 * Uc; i--) restLength += volume[i];
-  return {
-    slipRetained,
-    surfaceTensionDrop: nRTGm * (Math.log1p(-geq * q[0]) - Math.log1p(-geq * q[N - 1])),
-    profile: {
-      position: Array.from(centres, (x) => x * Lg),
-      velocity,
-      cleanVelocity: velocity.map(() => Uc),
-      surfaceExcess: Array.from(q, (v) => v * geq * s.maximumSurfaceExcess),
-      marangoniStress,
-      tensionChange: Array.from(q, (v) => nRTGm * (Math.log1p(-geq * v) - sEq)),
-    },
-    iterations,
-    residual: r.residualNorm,
-    tolerance: tol,
-    cells: N,
-    stagnantCap: restLength >= 0.05 && restLength < 1,
+    residual: sol.residualNorm,
+    stagnantCap: restCells >= 0.1 * Ng && restCells < Ng && maxRatio > 0.3,
+    continuationSteps: sol.pseudoSteps,
+    state: { cells: N, gapCells: Ng, tension: Float64Array.from(v), equilibriumTension: ex.equilibriumTension },
   };
 }

@@ -17,7 +17,12 @@
  * - along the flow at angle θ to the grooves: b = b_∥ cos²θ + b_⊥ sin²θ
  *   (projection of the slip tensor; common practice, no source).
  * The clean slip lengths are inputs (from the slip model), so c = 0 returns
- * them exactly. The drag change with the reduced slip is computed by the
+ * them exactly. Solves along the points, the concentration curve and the
+ * half-slip root start from their neighbours (surfactant-warm-starts.ts); a
+ * point whose solve finds no steady state within its iteration budget is
+ * answered by the scaling theory with the warning `solver-fallback-scaling`,
+ * never by an error (none in the committed 600-design sweep,
+ * bench/surfactant-sweep.ts). The drag change with the reduced slip is computed by the
  * slip endpoint's drag model from `slipLength` (not here).
  *
  * Regime thresholds (ours; common practice, no source): `clean` when at
@@ -35,7 +40,7 @@
  *     Proc. Natl Acad. Sci. USA 114, 7254–7259, doi:10.1073/pnas.1702469114.
  */
 import { brent } from '../numerics/roots.js';
-import { DomainError, Notes, outcome, type Outcome, type Reference } from './common.js';
+import { ConvergenceError, DomainError, Notes, outcome, type Outcome, type Reference } from './common.js';
 import type { Scenario } from './scenario.js';
 import { SURFACTANT_REFERENCES, type ResolvedSurfactant } from '../materials/surfactants.js';
 import { surfactantEquilibrium, type SurfactantEquilibrium } from './surfactant-equilibrium.js';
@@ -47,6 +52,7 @@ import {
   type SurfactantGroups,
 } from './surfactant-scaling.js';
 import { solveLongWaveGroove, solveTransverseInterface, type InterfaceProfile } from './surfactant-solver.js';
+import { nearestState, transverseStarts, type WarmStarts } from './surfactant-warm-starts.js';
 
 export const SURFACTANT_SLIP_REFERENCES = {
   landel2020: SURFACTANT_REFERENCES.landel2020,
@@ -95,8 +101,8 @@ export interface SurfactantInput {
   cleanTension?: number;
   /** Curve of slip retained against concentration: number of points and range (mol/m³). */
   curve?: { points?: number; minimum?: number; maximum?: number };
-  /** Solver resolution and tolerance. */
-  solver?: { cells?: number; grooveCells?: number; tolerance?: number };
+  /** Solver resolution, tolerance and iteration budget (linear solves per solve, default 400). */
+  solver?: { cells?: number; grooveCells?: number; tolerance?: number; maxIterations?: number };
 }
 
 export interface SurfactantValidity {
@@ -263,7 +269,24 @@ function uniformProfile(pr: Prepared, reduction: number, tauW: number): Interfac
   return { position, velocity, cleanVelocity, surfaceExcess: [], marangoniStress, tensionChange };
 }
 
-function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: Notes, forceMethod?: 'scaling' | 'solver', cellsOverride?: number): SurfactantPoint {
+interface PointRun {
+  forceMethod?: 'scaling' | 'solver';
+  /** Transverse solver cells (default input.solver.cells ?? 256). */
+  cells?: number;
+  warm: WarmStarts;
+  /** Only the slip along the flow is wanted (curve, half-slip root): skip the transverse solve when the flow is along the grooves. */
+  slipOnly?: boolean;
+}
+
+/** The regime the scaling groups point to, in words, for the fallback warning. */
+function scalingRegime(groups: SurfactantGroups, stagnantCapLikely: boolean, dilute: boolean): string {
+  const pe = `Pe_I,g = ${groups.interfacialPecletNumber.toPrecision(3)}`;
+  if (!dilute) return `a concentrated interface (k = K c = ${groups.dimensionlessConcentration.toPrecision(3)} > 1), where the scaling theory underpredicts the slip`;
+  if (stagnantCapLikely) return `the stagnant-cap regime (${pe}, slow exchange), where the scaling theory underpredicts the slip`;
+  return `the uniform-Marangoni regime (${pe}), where the scaling theory holds`;
+}
+
+function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: Notes, run: PointRun): SurfactantPoint {
   const s = input.surfactant;
   const T = input.temperature;
   const tauW = input.scenario.flow.wallShearStress;
@@ -286,13 +309,20 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
     ...(Lg !== undefined ? { longWave: Lg >= 10 * pr.pitch } : {}),
   };
   let method: 'scaling' | 'solver';
-  if (forceMethod) method = forceMethod;
+  if (run.forceMethod) method = run.forceMethod;
   else if (input.method === 'auto') method = validity.dilute && validity.uniformMarangoni ? 'scaling' : 'solver';
   else method = input.method;
 
   const cos2 = Math.cos(pr.theta) ** 2;
   const sin2 = 1 - cos2;
   const cleanFlow = clean.slipLengthLongitudinal * cos2 + clean.slipLengthTransverse * sin2;
+  const scalingAnswer = () => ({
+    bPerp: slipWithMarangoni(clean.slipLengthTransverse, scal.marangoniReduction, pr.halfHeight),
+    bPar: scalLong ? (1 - scalLong.marangoniReduction) * clean.slipLengthLongitudinal : clean.slipLengthLongitudinal,
+    interfaceProfile: uniformProfile(pr, scal.marangoniReduction, tauW),
+    marangoniStress: scal.marangoniReduction * tauW,
+    drop: scal.marangoniReduction * tauW * pr.width,
+  });
   let bPerp: number;
   let bPar: number;
   let interfaceProfile: InterfaceProfile;
@@ -301,60 +331,91 @@ function evaluatePoint(input: SurfactantInput, pr: Prepared, c: number, notes: N
   let marangoniStress: number;
   let drop: number;
   let solverInfo: SurfactantPoint['solver'];
-  if (method === 'scaling') {
-    bPerp = slipWithMarangoni(clean.slipLengthTransverse, scal.marangoniReduction, pr.halfHeight);
-    bPar = scalLong ? (1 - scalLong.marangoniReduction) * clean.slipLengthLongitudinal : clean.slipLengthLongitudinal;
-    interfaceProfile = uniformProfile(pr, scal.marangoniReduction, tauW);
-    marangoniStress = scal.marangoniReduction * tauW;
-    drop = marangoniStress * pr.width;
-    notes.model('landel2020-scaling-4.29');
-  } else {
-    const tol = input.solver?.tolerance ?? 1e-10;
-    const sol = solveTransverseInterface({
-      pitch: pr.pitch,
-      grooveWidth: pr.width,
-      shearRate: pr.shearRate,
-      viscosity: pr.mu,
-      localSlipLength: pr.localSlip,
-      surfactant: s,
-      bulkConcentration: c,
-      temperature: T,
-      cells: cellsOverride ?? input.solver?.cells ?? 256,
-      tolerance: tol,
-    });
-    bPerp = sol.slipRetained * clean.slipLengthTransverse;
-    interfaceProfile = sol.profile;
-    stagnant = sol.stagnantCap;
-    marangoniStress = sol.meanMarangoniStress;
-    drop = sol.surfaceTensionDrop;
-    solverInfo = {
-      iterations: sol.iterations,
-      residual: sol.residual,
-      tolerance: sol.tolerance,
-      cells: sol.cells,
-      linearSlipRetained: sol.linearSlipRetained,
-      continuationSteps: sol.continuationSteps,
-    };
-    bPar = clean.slipLengthLongitudinal;
-    if (Lg !== undefined && cos2 > 1e-12) {
-      const lw = solveLongWaveGroove({
-        grooveLength: Lg,
-        cleanInterfaceVelocity: Ulong,
-        shearRate: pr.shearRate,
-        viscosity: pr.mu,
-        surfactant: s,
-        bulkConcentration: c,
-        temperature: T,
-        cells: input.solver?.grooveCells ?? 200,
-        tolerance: tol,
-      });
-      bPar = lw.slipRetained * clean.slipLengthLongitudinal;
-      grooveProfile = lw.profile;
-      stagnant = stagnant || lw.stagnantCap;
-      solverInfo.longWaveIterations = lw.iterations;
+  if (method === 'solver') {
+    const warmTransverse = c > 0 ? transverseStarts(run.warm, c) : [];
+    const warmGroove = c > 0 ? nearestState(run.warm, c, 'groove') : undefined;
+    const solved: WarmStarts['solved'][number] = { logConcentration: Math.log(c) };
+    if (c > 0) run.warm.solved.push(solved);
+    try {
+      const tol = input.solver?.tolerance ?? 1e-10;
+      let iterations = 0;
+      let residual = 0;
+      let continuationSteps = 0;
+      let linearSlipRetained = 1;
+      let cells = 0;
+      if (run.slipOnly && sin2 < 1e-12) {
+        // Flow along the grooves: the transverse gap does not enter the slip along the flow.
+        bPerp = clean.slipLengthTransverse;
+        interfaceProfile = uniformProfile(pr, 0, tauW);
+        marangoniStress = 0;
+        drop = 0;
+      } else {
+        const sol = solveTransverseInterface({
+          pitch: pr.pitch,
+          grooveWidth: pr.width,
+          shearRate: pr.shearRate,
+          viscosity: pr.mu,
+          localSlipLength: pr.localSlip,
+          surfactant: s,
+          bulkConcentration: c,
+          temperature: T,
+          cells: run.cells ?? input.solver?.cells ?? 256,
+          tolerance: tol,
+          ...(input.solver?.maxIterations !== undefined ? { maxIterations: input.solver.maxIterations } : {}),
+          ...(warmTransverse.length > 0 ? { warmStart: warmTransverse } : {}),
+          ...(run.slipOnly ? { reportLinearised: false } : {}),
+        });
+        solved.transverse = sol.state;
+        bPerp = sol.slipRetained * clean.slipLengthTransverse;
+        interfaceProfile = sol.profile;
+        stagnant = sol.stagnantCap;
+        marangoniStress = sol.meanMarangoniStress;
+        drop = sol.surfaceTensionDrop;
+        ({ iterations, residual, continuationSteps, linearSlipRetained, cells } = sol);
+      }
+      solverInfo = { iterations, residual, tolerance: tol, cells, linearSlipRetained, continuationSteps };
+      bPar = clean.slipLengthLongitudinal;
+      if (Lg !== undefined && cos2 > 1e-12) {
+        const lw = solveLongWaveGroove({
+          grooveLength: Lg,
+          cleanInterfaceVelocity: Ulong,
+          shearRate: pr.shearRate,
+          viscosity: pr.mu,
+          surfactant: s,
+          bulkConcentration: c,
+          temperature: T,
+          cells: input.solver?.grooveCells ?? 200,
+          tolerance: tol,
+          ...(input.solver?.maxIterations !== undefined ? { maxIterations: input.solver.maxIterations } : {}),
+          ...(warmGroove ? { warmStart: warmGroove } : {}),
+        });
+        solved.groove = lw.state;
+        bPar = lw.slipRetained * clean.slipLengthLongitudinal;
+        grooveProfile = lw.profile;
+        stagnant = stagnant || lw.stagnantCap;
+        solverInfo.longWaveIterations = lw.iterations;
+      }
+      notes.model('interface-solver-transverse');
+      if (Lg !== undefined) notes.model('long-wave-groove');
+    } catch (error) {
+      if (!(error instanceof ConvergenceError)) throw error;
+      // Safety net: no steady state reached within the iteration budget. Answer with the scaling theory.
+      method = 'scaling';
+      const regime = scalingRegime(scal.groups, scal.flags.stagnantCapLikely, scal.flags.dilute);
+      notes.warn(
+        'solver-fallback-scaling',
+        `At c = ${c.toPrecision(3)} mol/m³ the interface solver found no steady state (${error.iterations} linear solves, relative residual ${Number.isFinite(error.residual) ? error.residual.toExponential(2) : 'not finite'}); the scaling theory of Landel et al. (2020) answers instead. Its groups place this point in ${regime}.`,
+        'warning',
+      );
+      grooveProfile = undefined;
+      stagnant = false;
+      solverInfo = undefined;
+      ({ bPerp, bPar, interfaceProfile, marangoniStress, drop } = scalingAnswer());
+      notes.model('landel2020-scaling-4.29');
     }
-    notes.model('interface-solver-transverse');
-    if (Lg !== undefined) notes.model('long-wave-groove');
+  } else {
+    ({ bPerp, bPar, interfaceProfile, marangoniStress, drop } = scalingAnswer());
+    notes.model('landel2020-scaling-4.29');
   }
   const slipLength = bPar * cos2 + bPerp * sin2;
   const slipRetained = cleanFlow > 0 ? slipLength / cleanFlow : 1;
@@ -419,7 +480,8 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   if (input.grooveLength !== undefined && input.grooveLength < 10 * pr.pitch) {
     notes.warn('long-wave-short-groove', 'groove length below 10 pitches: the long-wave groove model is outside its range', 'caution');
   }
-  const points = list.map((c) => evaluatePoint(input, pr, c, notes));
+  const warm: WarmStarts = { solved: [] };
+  const points = list.map((c) => evaluatePoint(input, pr, c, notes, { warm }));
   for (const p of points) {
     if (!p.validity.dilute) notes.warn('not-dilute', `K c = ${p.equilibrium.dimensionlessConcentration.toPrecision(3)} > 1: outside the dilute range of the scaling theory`, 'caution');
     if (p.method === 'scaling' && !p.validity.uniformMarangoni) {
@@ -435,8 +497,11 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   const nCurve = Math.max(3, Math.min(101, Math.round(input.curve?.points ?? 21)));
   const quiet = new Notes();
   const curveMethod: 'scaling' | 'solver' | undefined = input.method === 'auto' ? undefined : input.method;
-  const curveCells = Math.min(input.solver?.cells ?? 256, 128);
-  const retainedAt = (c: number): number => evaluatePoint(input, pr, c, quiet, curveMethod, curveCells).slipRetained;
+  // Curve and half-slip root: about 64 cells on the gap (128 per period at φ = 0.5), so their cost does not
+  // grow with the groove fraction; never finer than the points.
+  const curveCells = Math.min(input.solver?.cells ?? 256, Math.max(32, Math.round(64 / pr.phi)));
+  const curveRun: PointRun = { cells: curveCells, warm: { solved: [] }, slipOnly: true, ...(curveMethod ? { forceMethod: curveMethod } : {}) };
+  const retainedAt = (c: number): number => evaluatePoint(input, pr, c, quiet, curveRun).slipRetained;
   const cs: number[] = [];
   const rs: number[] = [];
   for (let i = 0; i < nCurve; i++) {
@@ -451,6 +516,10 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
       if (root.converged) half = Math.pow(10, root.root);
       break;
     }
+  }
+  const curveFallbacks = quiet.warnings.filter((w) => w.code === 'solver-fallback-scaling').length;
+  if (curveFallbacks > 0) {
+    notes.warn('curve-solver-fallback', `${curveFallbacks} point(s) of the concentration curve (or of the half-slip search) come from the scaling theory: the interface solver found no steady state there`, 'warning');
   }
   if (half === null) notes.warn('no-half-slip', 'half of the clean slip is not lost anywhere in the curve range', 'info');
   notes.assume('drag change: recompute with slipLength through the slip endpoint drag model');

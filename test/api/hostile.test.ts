@@ -116,8 +116,11 @@ for (const calc of CALCULATIONS) {
       });
     }
 
-    it('fast-check: random values at every field never give 5xx or non-finite output', async () => {
+    it('fast-check: random values at every field never give 5xx or non-finite output (fixed seed, test/setup-fast-check.ts)', async () => {
       if (paths.length === 0) return;
+      // Regression: this groove width once made the field solver grow to 2.5 GB and abort the process.
+      const grooveWidth = paths.find((p) => p.join('.') === 'texture.grooveWidth');
+      const examples: [string[], fc.JsonValue][] = grooveWidth ? [[grooveWidth, 4.755668529426223e-21]] : [];
       await fc.assert(
         fc.asyncProperty(fc.constantFrom(...paths), fc.jsonValue({ maxDepth: 3 }), async (path, value) => {
           const res = await post(calc.path, JSON.stringify(withValue(calc.example, path, value)));
@@ -125,7 +128,7 @@ for (const calc of CALCULATIONS) {
           expect(hasNoNonFinite(res.body)).toBe(true);
           if (res.statusCode !== 200) expect(String(res.headers['content-type'])).toMatch(/problem\+json/);
         }),
-        { numRuns: 60 },
+        { numRuns: 60, examples },
       );
     });
   });

@@ -62,6 +62,21 @@ describe('POST /v1/waves', () => {
     const wu = body.result.wallUnits;
     expect(wu.inertialCapillaryNumber).toBeCloseTo(wu.grooveWidthPlus * Math.cbrt(wu.frictionCapillaryNumber), 10);
   });
+  it('cheap by default: computed inline, no regime map; the map only when asked for, through the pool, with the same verdict', async () => {
+    const example = wavesCalculation.example as object;
+    expect(typeof wavesCalculation.heavy === 'function' && wavesCalculation.heavy({ ...example } as never)).toBe(false);
+    expect(typeof wavesCalculation.heavy === 'function' && wavesCalculation.heavy({ ...example, map: true } as never)).toBe(true);
+    const plain = (await app.inject({ method: 'POST', url: '/v1/waves', payload: example })).json();
+    expect(plain.result.map).toBeUndefined();
+    const mapped = (await pooled.inject({ method: 'POST', url: '/v1/waves', payload: { ...example, map: true } })).json();
+    expect(mapped.result.map.regimes.length).toBe(24);
+    const resolved = (await pooled.inject({ method: 'POST', url: '/v1/waves', payload: { ...example, mapResolution: 5 } })).json();
+    expect(resolved.result.map.regimes.length).toBe(5);
+    // The map changes nothing else.
+    const { map: _map, ...withoutMap } = mapped.result;
+    expect(withoutMap).toEqual(plain.result);
+    expect(mapped.verdict).toEqual(plain.verdict);
+  });
   it('no interfacial tension and no way to estimate it → 422 naming interfacialTension', async () => {
     const res = await app.inject({
       method: 'POST',

@@ -32,6 +32,21 @@ describe('POST /v1/surfactant', () => {
     const res = await app.inject({ method: 'POST', url: '/v1/surfactant', payload: example });
     expect(res.json().warnings.map((w: { code: string }) => w.code)).toContain('oil-water-constants-missing');
   });
+  it('the interface solver answers where it used to return 422 "did not converge" (SDS at 100 Pa; the nonionic at 0.01 Pa)', async () => {
+    for (const [id, wallShearStress] of [
+      ['sds', 100],
+      ['triton-x-100', 0.01],
+    ] as const) {
+      const payload = { ...example, flow: { kind: 'wall-shear', wallShearStress }, surfactant: { id }, bulkConcentration: '0.001 mM', method: 'solver' };
+      const res = await app.inject({ method: 'POST', url: '/v1/surfactant', payload });
+      expect(res.statusCode).toBe(200);
+      const body = res.json();
+      expect(body.result.points[0].method).toBe('solver');
+      expect(body.result.slipRetained).toBeGreaterThanOrEqual(0);
+      expect(body.result.slipRetained).toBeLessThanOrEqual(1);
+      expect(body.warnings.map((w: { code: string }) => w.code)).not.toContain('solver-fallback-scaling');
+    }
+  });
   it('an unknown surfactant is 422 naming surfactant.id', async () => {
     const res = await app.inject({ method: 'POST', url: '/v1/surfactant', payload: { ...example, surfactant: { id: 'soap-of-mystery' } } });
     expect(res.statusCode).toBe(422);

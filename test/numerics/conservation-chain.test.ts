@@ -91,3 +91,22 @@ describe('flux-form BDF2 on a conservation chain', () => {
     expect(Math.abs(r.y[0] + r.cumulativeLoss - 1)).toBeLessThan(1e-14);
   });
 });
+
+describe('work bound of the integration', () => {
+  it('the step budget counts rejected attempts too, so the work is known before the integration starts', () => {
+    // A step start far too large for the tolerance: most early attempts are rejected.
+    const n = 40;
+    const y0 = new Float64Array(n).map((_, i) => (i < n / 2 ? 1 : 0));
+    const budget = 25;
+    const result = integrateConservationChain(diffusionChain(n, 1, 1 / n), y0, 0, 10, {
+      initialStep: 5,
+      relativeTolerance: 1e-8,
+      absoluteTolerance: 1e-10,
+      maxSteps: budget,
+    });
+    expect(result.converged).toBe(false);
+    expect(result.rejectedSteps).toBeGreaterThan(0);
+    expect(result.steps + result.rejectedSteps).toBeLessThanOrEqual(budget);
+    expect(result.reason).toMatch(/step attempts/);
+  });
+});

@@ -115,7 +115,8 @@ describe('long-wave model along finite streamwise grooves', () => {
       const coarse = solveLongWaveGroove({ ...c, surfactant: sds, temperature: T, cells: 100, extrapolate: false });
       const fine = solveLongWaveGroove({ ...c, surfactant: sds, temperature: T, cells: 200, extrapolate: false });
       const auto = solveLongWaveGroove({ ...c, surfactant: sds, temperature: T, cells: 200 });
-      expect(auto.slipRetained).toBe(Math.min(1, 2 * fine.slipRetained - coarse.slipRetained));
+      // the same Richardson combination, to the solver tolerance (the coarse grid now starts from the fine solution)
+      expect(Math.abs(auto.slipRetained - Math.min(1, 2 * fine.slipRetained - coarse.slipRetained))).toBeLessThan(1e-12);
       expect(Math.abs(fine.slipRetained - c.slipRetained)).toBeLessThan(1.5e-3);
       expect(Math.abs(2 * fine.slipRetained - coarse.slipRetained - c.slipRetained)).toBeLessThan(2e-4);
       expect(Math.abs(fine.surfaceTensionDrop / c.surfaceTensionDrop - 1)).toBeLessThan(0.01);

@@ -115,6 +115,16 @@ describe('evaluateSurfactant', () => {
     const o = evaluateSurfactant(input({ scenario: sc }));
     expect(o.result.slipLength).toBeCloseTo(cleanSlip.slipLengthTransverse, 18);
   });
+  it('a solver that finds no steady state within its budget answers with the scaling theory and a warning naming the regime, not an error', () => {
+    const o = evaluateSurfactant(input({ method: 'solver', bulkConcentration: 1e-3, solver: { cells: 64, maxIterations: 1 }, curve: { points: 3 } }));
+    const p = o.result.points[0];
+    expect(p.method).toBe('scaling');
+    expect(p.solver).toBeUndefined();
+    expect(p.slipRetained).toBe(evaluateSurfactant(input({ method: 'scaling', bulkConcentration: 1e-3, curve: { points: 3 } })).result.slipRetained);
+    const w = o.warnings.find((x) => x.code === 'solver-fallback-scaling');
+    expect(w?.message).toMatch(/regime/);
+    expect(o.warnings.some((x) => x.code === 'curve-solver-fallback')).toBe(true);
+  });
   it('impossible input is a DomainError', () => {
     expect(() => evaluateSurfactant(input({ bulkConcentration: -1 }))).toThrow(DomainError);
     const bad = scenario();

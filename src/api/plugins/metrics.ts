@@ -1,11 +1,12 @@
 /**
  * Prometheus metrics at GET /metrics: request count and duration histogram per
  * route and status, event-loop lag and process metrics (prom-client defaults),
- * and the worker-pool queue.
+ * and the worker pool (queued and running solves, threads lost and replaced).
  */
 import type { FastifyInstance } from 'fastify';
 import fp from 'fastify-plugin';
 import { Counter, Gauge, Histogram, Registry, collectDefaultMetrics } from 'prom-client';
+import type { PoolStats } from '../pool.js';
 
 declare module 'fastify' {
   interface FastifyRequest {
@@ -14,7 +15,7 @@ declare module 'fastify' {
 }
 
 export default fp(
-  async function metricsPlugin(app: FastifyInstance, options: { queueDepth: () => number }) {
+  async function metricsPlugin(app: FastifyInstance, options: { poolStats: () => PoolStats }) {
     const registry = new Registry();
     collectDefaultMetrics({ register: registry, prefix: 'oilskin_', eventLoopMonitoringPrecision: 20 });
     const requests = new Counter({
@@ -35,7 +36,23 @@ export default fp(
       help: 'Heavy solves waiting for a worker thread',
       registers: [registry],
       collect() {
-        this.set(options.queueDepth());
+        this.set(options.poolStats().waiting);
+      },
+    });
+    new Gauge({
+      name: 'oilskin_solver_running',
+      help: 'Heavy solves computing on a worker thread',
+      registers: [registry],
+      collect() {
+        this.set(options.poolStats().running);
+      },
+    });
+    new Gauge({
+      name: 'oilskin_solver_threads_lost',
+      help: 'Worker threads killed (over budget, client gone) or failed and replaced since start',
+      registers: [registry],
+      collect() {
+        this.set(options.poolStats().threadsLost);
       },
     });
 

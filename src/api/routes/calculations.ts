@@ -1,11 +1,22 @@
 /** Registers every calculation as POST <path>; heavy ones go through the worker pool. */
-import type { FastifyInstance } from 'fastify';
+import type { FastifyInstance, FastifyReply } from 'fastify';
 import { parseBody } from '../calculation.js';
 import { envelope } from '../envelope.js';
-import type { SolverPool } from '../pool.js';
+import { ClientGoneError, type SolverPool } from '../pool.js';
 import { computeSafely } from '../worker.js';
 import { ProblemError } from '../problem.js';
 import { CALCULATIONS } from './index.js';
+
+/** An AbortSignal that fires when the client closes its connection before the response is written. */
+function clientGoneSignal(reply: FastifyReply): { signal: AbortSignal; release: () => void } {
+  const controller = new AbortController();
+  const response = reply.raw;
+  const onClose = () => {
+    if (!response.writableFinished) controller.abort();
+  };
+  response.on('close', onClose);
+  return { signal: controller.signal, release: () => response.off('close', onClose) };
+}
 
 export default async function calculationRoutes(app: FastifyInstance, options: { pool: SolverPool }) {
   for (const definition of CALCULATIONS) {
@@ -13,13 +24,26 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
       const input = parseBody(definition, request.body);
       const start = performance.now();
       const heavy = typeof definition.heavy === 'function' ? definition.heavy(input) : definition.heavy;
-      const out = heavy
-        ? await options.pool.run(definition.name, input)
-        : (() => {
-            const r = computeSafely(definition.name, input);
-            if ('failed' in r) throw new ProblemError(r.problem);
-            return r;
-          })();
+      let out;
+      if (heavy) {
+        const gone = clientGoneSignal(reply);
+        try {
+          out = await options.pool.run(definition.name, input, { signal: gone.signal });
+        } catch (error) {
+          if (error instanceof ClientGoneError) {
+            request.log.info('client closed the connection; its solve was cancelled');
+            // Nobody is listening; 499 (client closed request) is only for the logs and metrics.
+            return reply.code(499).send();
+          }
+          throw error;
+        } finally {
+          gone.release();
+        }
+      } else {
+        const r = computeSafely(definition.name, input);
+        if ('failed' in r) throw new ProblemError(r.problem);
+        out = r;
+      }
       reply.header('cache-control', 'no-store');
       return envelope(out, performance.now() - start);
     });

@@ -21,6 +21,13 @@ export interface QuantityDefinition {
   example: number | string;
   /** Whether a unit string is accepted (false: JSON number only). */
   acceptsUnitString?: boolean;
+  /** Added to the message for a unit of the wrong dimension (e.g. how to convert a common mistake). */
+  hint?: string;
+}
+
+/** What a caller may send for a quantity, for the message of a rejected unit. */
+function accepted(def: QuantityDefinition): string {
+  return `give the ${def.quantity} as a number in ${def.unitLabel} or as a string with a unit convertible to ${def.unitLabel}, e.g. "${def.example}"${def.hint ? `; ${def.hint}` : ''}`;
 }
 
 function describe(def: QuantityDefinition): string {
@@ -41,7 +48,7 @@ export function quantity(def: QuantityDefinition) {
         try {
           value = parseQuantity(raw, def.siUnit);
         } catch (error) {
-          ctx.addIssue({ code: 'custom', message: error instanceof UnitError ? error.message : 'unreadable quantity' });
+          ctx.addIssue({ code: 'custom', message: `${error instanceof UnitError ? error.message : 'unreadable quantity'}; ${accepted(def)}` });
           return z.NEVER;
         }
       }
@@ -77,8 +84,9 @@ export const FlowLength = quantity({
   quantity: 'length',
   siUnit: 'm',
   unitLabel: 'm',
-  min: 0,
-  minInclusive: false,
+  // Below a nanometre there is no continuum flow (src/physics/continuum.ts); smaller values also underflow the correlations.
+  min: 1e-9,
+  minInclusive: true,
   max: 1000,
   description: 'A flow dimension (channel height, pipe diameter, distance)',
   example: '10 mm',
@@ -99,8 +107,9 @@ export const Velocity = quantity({
   quantity: 'velocity',
   siUnit: 'm/s',
   unitLabel: 'm/s',
-  min: 0,
-  minInclusive: false,
+  // A picometre per second is at rest for every question here; far smaller values underflow the friction velocity to 0.
+  min: 1e-12,
+  minInclusive: true,
   max: 200,
   description: 'A flow velocity',
   example: '1 m/s',
@@ -110,8 +119,9 @@ export const ShearStress = quantity({
   quantity: 'shear stress',
   siUnit: 'Pa',
   unitLabel: 'Pa',
-  min: 0,
-  minInclusive: false,
+  // As for velocities: a picopascal is a wall at rest; far smaller values underflow the friction velocity to 0.
+  min: 1e-12,
+  minInclusive: true,
   max: 1e5,
   description: 'A shear stress',
   example: '2 Pa',
@@ -259,6 +269,7 @@ export const Concentration = quantity({
   max: 1e4,
   description: 'Molar bulk concentration (1 mM = 1 mol/m³)',
   example: '0.1 mM',
+  hint: 'a mass concentration such as mg/L needs the molar mass: mg/L divided by g/mol gives mol/m³ (= mM)',
 });
 
 export const MassConcentration = quantity({
