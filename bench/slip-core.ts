@@ -15,22 +15,32 @@
  * solveLongitudinalCell at its default graded grid with Richardson) and thermal
  * slip length (b_t, field solver thermalSlipField at 64 and 128 cells per pitch,
  * first-order Richardson 2b₁₂₈ − b₆₄ since it is first order near the lip).
- * The transverse direction plugs in as one more entry of DIRECTIONS (its fast
- * core and field solver) when its module is merged.
+ * Transverse slip length (b_⊥, transverseGrooveSlip): its field values are the
+ * committed field-solver reference (fixtures/slip/transverse_field_reference.json,
+ * solveTransverseCell on 32 and 64 cells per pitch with Richardson; 17–160 s per
+ * case here, so the times shown are those its generator measured); --live-transverse
+ * re-runs the field solver on them (about 20 min).
+ * Two-direction throughput: b_∥ and b_⊥ of every longitudinal case in turn, one
+ * core, in process (the figure issue 12 asks for: ≥ 1 000 per second).
  */
 import { existsSync, readFileSync } from 'node:fs';
 import os from 'node:os';
-import { solveLongitudinalCell } from '../src/numerics/groove-cell.js';
+import { solveLongitudinalCell, solveTransverseCell } from '../src/numerics/groove-cell.js';
+import { transverseGrooveSlip } from '../src/physics/groove-cell-transverse.js';
+import transverseReference from '../fixtures/slip/transverse_field_reference.json' with { type: 'json' };
 import { thermalSlipField } from '../src/physics/heat.js';
 import { longitudinalGrooveSlip } from '../src/physics/slip-core/longitudinal.js';
 import { thermalGrooveSlip } from '../src/physics/slip-core/thermal.js';
 
 const quick = process.argv.includes('--quick');
+const liveTransverse = process.argv.includes('--live-transverse');
 
 interface BenchCase {
   label: string;
   fast: () => number;
   field: () => number;
+  /** Field value and CPU ms measured earlier (committed reference), used unless the field solver is re-run. */
+  recorded?: { value: number; ms: number };
 }
 
 interface BenchDirection {
@@ -96,10 +106,32 @@ function thermalCases(): BenchCase[] {
   return cases;
 }
 
+/**
+ * The 49 transverse cases of the committed field-solver reference; the one below 1e-8 P (which the field
+ * solver does not resolve, docs/slip-core-transverse.md) is left out of the differences.
+ */
+function transverseCases(): BenchCase[] {
+  return transverseReference.cases
+    .filter((c) => (c.extrapolated.slipLength as number) > 1e-8)
+    .map((c) => {
+      const input = { pitch: 1, grooveWidth: c.interfaceFraction, grooveDepth: c.depthOverWidth * c.interfaceFraction, viscosityRatio: c.viscosityRatio };
+      return {
+        label: `φ=${c.interfaceFraction} d/w=${c.depthOverWidth} N=${c.viscosityRatio}`,
+        fast: () => transverseGrooveSlip(input).slipLength,
+        field: () => {
+          const coarse = solveTransverseCell({ ...input, cellsPerPitch: 32, extrapolate: false }).slipLength;
+          const fine = solveTransverseCell({ ...input, cellsPerPitch: 64, extrapolate: false }).slipLength;
+          return (4 * fine - coarse) / 3;
+        },
+        ...(liveTransverse ? {} : { recorded: { value: c.extrapolated.slipLength as number, ms: c.seconds * 1000 } }),
+      };
+    });
+}
+
 const DIRECTIONS: BenchDirection[] = [
   { name: 'longitudinal', quantity: 'b_∥/P', cases: longitudinalCases() },
+  { name: 'transverse', quantity: 'b_⊥/P', cases: transverseCases() },
   { name: 'thermal', quantity: 'b_t/P', cases: thermalCases() },
-  // The transverse core: { name: 'transverse', quantity: 'b_⊥/P', cases: [...] } with transverseGrooveSlip and solveTransverseCell.
 ];
 
 /** CPU time per call (ms): the fastest of a few batches, each long enough to time (shared machine: the minimum is the least disturbed). */
@@ -151,7 +183,10 @@ for (const direction of DIRECTIONS) {
     fastTimes.push(ms);
     let fieldValue = Number.NaN;
     let fieldMs = Number.NaN;
-    if (!quick) {
+    if (c.recorded) {
+      fieldValue = c.recorded.value;
+      fieldMs = c.recorded.ms;
+    } else if (!quick) {
       try {
         const f = fieldTime(c.field);
         fieldValue = f.value;
@@ -181,6 +216,33 @@ for (const direction of DIRECTIONS) {
       `throughput ${((calls / elapsed) * 1000).toFixed(0)} evaluations/s over the set; ` +
       (differences.length ? `|fast − field|/field median ${median(differences).toExponential(2)}, max ${Math.max(...differences).toExponential(2)}` : 'field solver skipped') +
       '\n',
+  );
+}
+
+// Two-direction throughput: b_∥ and b_⊥ of each longitudinal bench case in turn (N = 0 included), one core.
+{
+  const inputs = FRACTIONS.flatMap((phi) => DEPTHS.flatMap((aspect) => RATIOS.map((ratio) => ({ pitch: 1, grooveWidth: phi, grooveDepth: aspect * phi, viscosityRatio: ratio }))));
+  for (const input of inputs) {
+    longitudinalGrooveSlip(input);
+    transverseGrooveSlip(input);
+  }
+  let pairs = 0;
+  const c0 = process.cpuUsage();
+  const t0 = performance.now();
+  let elapsed = 0;
+  while (elapsed < 2000) {
+    for (const input of inputs) {
+      longitudinalGrooveSlip(input);
+      transverseGrooveSlip(input);
+    }
+    pairs += inputs.length;
+    const c1 = process.cpuUsage(c0);
+    elapsed = (c1.user + c1.system) / 1000;
+  }
+  const wall = performance.now() - t0;
+  console.log(
+    `## two-direction throughput (${inputs.length} cases: w/P ${FRACTIONS.join(', ')} × d/w ${DEPTHS.join(', ')} × N ${RATIOS.join(', ')}): ` +
+      `${((pairs / elapsed) * 1000).toFixed(0)} exact (b_∥, b_⊥) evaluations per CPU second on one core (${((pairs / wall) * 1000).toFixed(0)} per wall second)\n`,
   );
 }
 
