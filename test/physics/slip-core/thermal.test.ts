@@ -1,4 +1,4 @@
-import { existsSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { thermalSlipField } from '../../../src/physics/heat.js';
 import { longitudinalGrooveSlip } from '../../../src/physics/slip-core/longitudinal.js';
@@ -83,7 +83,7 @@ describe('thermal slip core against independent references', () => {
   });
 
   const freefem = new URL('../../../fixtures/slip-core/thermal.json', import.meta.url);
-  it.runIf(existsSync(freefem))('matches the FreeFEM references (fixtures/slip-core/generate_thermal.py): 0.5 percent, or 1e-5 P where b_t is near zero', () => {
+  it('matches the FreeFEM references (fixtures/slip-core/generate_thermal.py): 0.3 percent, or 6e-6 P where |b_t| < 2e-3 P (the documented bound)', () => {
     const fixture = JSON.parse(readFileSync(freefem, 'utf8')) as {
       cases: {
         fraction: number;
@@ -99,7 +99,7 @@ describe('thermal slip core against independent references', () => {
     expect(fixture.cases.length).toBeGreaterThanOrEqual(20);
     for (const c of fixture.cases) {
       const r = thermalGrooveSlip(wall(c.fraction, c.depthOverWidth, c.substrateOverPitch, c.lubricantConductivity, c.solidConductivity, c.workingConductivity));
-      const allowed = Math.max(5e-3 * Math.abs(c.thermalSlipLength), 1e-5) + 2 * c.uncertainty;
+      const allowed = Math.max(3e-3 * Math.abs(c.thermalSlipLength), 6e-6) + 2 * c.uncertainty;
       expect(Math.abs(r.thermalSlipLength - c.thermalSlipLength), JSON.stringify(c)).toBeLessThanOrEqual(allowed);
     }
   });
