@@ -6,8 +6,8 @@
  * duration 3 L₀/V_s. Error: largest |L_FV(t) − L_lumped(t)|/L₀ over the timeline.
  */
 import os from 'node:os';
-import { lumpedRetainedLength, solveDrainage } from '../src/physics/drainage.js';
-import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../src/physics/groove-duct.js';
+import { lumpedRetainedLength, solveDrainage } from '../src/physics/retention/drainage.js';
+import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../src/physics/groove/groove-duct.js';
 
 const w = 50e-6;
 const d = 50e-6;

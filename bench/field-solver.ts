@@ -10,7 +10,7 @@
  */
 import os from 'node:os';
 import { solveCellDiffusion } from '../src/numerics/cell-diffusion.js';
-import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/numerics/groove-cell.js';
+import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/physics/groove/groove-cell.js';
 import { sumOdd } from '../src/numerics/series.js';
 
 const quick = process.argv.includes('--quick');

@@ -5,16 +5,13 @@
  */
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
-import { resolveFluid } from '../src/materials/resolve.js';
-import { evaluateFlow } from '../src/physics/flow.js';
-import {
-  evaluateHeat,
-  rectangularDuctLaminar,
-  solveHeatCrossSection,
-  thermalSlipAdiabaticGrooves,
-  thermalSlipField,
-  type HeatInput,
-} from '../src/physics/heat.js';
+import { DesignSchema } from '../src/api/schemas/design.js';
+import { catalogue } from '../src/materials/lookup.js';
+import { DesignContext } from '../src/physics/design/context.js';
+import { evaluateHeat, type HeatInput } from '../src/physics/heat/heat.js';
+import { solveHeatCrossSection, thermalSlipField } from '../src/physics/heat/conduction-field.js';
+import { rectangularDuctLaminar } from '../src/physics/heat/ducts.js';
+import { thermalSlipAdiabaticGrooves } from '../src/physics/heat/thermal-slip.js';
 
 const time = <R>(f: () => R): [R, number] => {
   const t0 = performance.now();
@@ -23,51 +20,22 @@ const time = <R>(f: () => R): [R, number] => {
 };
 console.log(`node ${process.version}, ${os.cpus().length} cores (shared), ${os.cpus()[0]?.model ?? ''}`);
 
-// Minimal unit reader for the strings used in the example file (the API has the full parser).
-const UNIT: Record<string, number> = {
-  um: 1e-6, mm: 1e-3, m: 1, 'm/s': 1, 'kg/m^3': 1, 'mPa*s': 1e-3, 'Pa*s': 1, 'W/(m*K)': 1, 'J/(kg*K)': 1, 'mN/m': 1e-3,
-};
-const si = (s: string): number => {
-  const [value, unit] = s.split(' ');
-  if (unit === 'degC') return Number(value) + 273.15;
-  const f = UNIT[unit];
-  if (f === undefined) throw new Error(`unit ${unit}`);
-  return Number(value) * f;
-};
-const example = JSON.parse(readFileSync(new URL('../examples/heat-worked-example.json', import.meta.url), 'utf8'));
-const water = resolveFluid({ fluid: 'water', temperature: si(example.workingFluid.temperature) }, 'workingFluid');
-const lubricant = resolveFluid(
-  {
-    density: si(example.lubricant.density),
-    viscosity: si(example.lubricant.viscosity),
-    thermalConductivity: si(example.lubricant.thermalConductivity),
-    specificHeat: si(example.lubricant.specificHeat),
-    interfacialTensionWater: si(example.lubricant.interfacialTensionWater),
-    temperature: si(example.workingFluid.temperature),
-  },
-  'lubricant',
-);
-const texture = {
-  grooveWidth: si(example.texture.grooveWidth),
-  pitch: si(example.texture.pitch),
-  grooveDepth: si(example.texture.grooveDepth),
-  flowAngle: 0,
-};
-const flow = evaluateFlow(water, {
-  kind: 'channel',
-  height: si(example.flow.height),
-  bulkVelocity: si(example.flow.bulkVelocity),
-  texturedWalls: example.flow.texturedWalls,
-}).result;
+// The worked example as the service reads it: unit strings converted by the design schema, fluids from the catalogue.
+const document = DesignSchema.parse(JSON.parse(readFileSync(new URL('../examples/heat-worked-example.json', import.meta.url), 'utf8')));
+const ctx = new DesignContext(document, catalogue);
+const scenario = ctx.scenario('heat', 'optional');
+const water = scenario.workingFluid;
+const flow = scenario.flow;
+const lubricant = scenario.lubricant;
 const base: HeatInput = {
-  scenario: { texture, lubricant, workingFluid: water, flow },
-  solid: { thermalConductivity: si(example.solid.thermalConductivity), substrateThickness: si(example.solid.substrateThickness) },
-  heating: example.heating,
-  heatedWalls: example.heatedWalls,
-  lubricantMotion: example.lubricantMotion,
-  method: example.method,
+  scenario,
+  solid: document.solid!,
+  heating: document.heating?.condition ?? 'uniform-flux',
+  heatedWalls: document.heating?.heatedWalls ?? 'both',
+  lubricantMotion: 'co-flowing',
+  method: document.options?.method ?? 'auto',
   slip: { slipLengthLongitudinal: 0 },
-  sensitivity: example.sensitivity,
+  ...(document.options?.sensitivity ? { sensitivity: document.options.sensitivity } : {}),
 };
 console.log('\n1. Worked example (examples/heat-worked-example.json)');
 console.log(`water k = ${water.thermalConductivity} W/(m K), cp = ${water.specificHeat} J/(kg K), Re_H = ${flow.reynoldsNumber?.toFixed(2)}, regime ${flow.regime}`);
@@ -78,17 +46,17 @@ for (const [name, r, ms] of [['field (auto)', field, fieldMs], ['closed-form', c
   const x = r.result;
   console.log(
     `${name}: b_t = ${(x.thermalSlipLength * 1e6).toFixed(3)} um, b = ${(x.slipLength * 1e6).toFixed(4)} um, Nu = ${x.nusselt?.toFixed(4)}, ` +
-      `Nu0 = ${x.nusseltSmooth.toFixed(4)}, ratio = ${x.heatTransferRatio?.toFixed(4)}, overall = ${x.overallConductanceRatio.toFixed(4)}, ` +
-      `friction = ${x.frictionRatio.toFixed(5)}, closedFormError = ${x.closedFormError?.toExponential(3) ?? 'n/a'}, Pe_g = ${x.groovePecletNumber.toExponential(2)}, ${ms.toFixed(0)} ms`,
+      `Nu0 = ${x.nusseltSmooth.toFixed(4)}, ratio = ${x.nusseltRatio?.toFixed(4)}, overall = ${x.heatFluxRatio.toFixed(4)}, ` +
+      `friction = ${x.frictionRatio.toFixed(5)}, closedFormError = ${x.closedFormError?.nusselt.value.toExponential(3) ?? 'n/a'}, Pe_g = ${x.groovePecletNumber.toExponential(2)}, ${ms.toFixed(0)} ms`,
   );
   console.log(`   warnings: ${r.warnings.map((w) => w.code).join(', ') || 'none'}`);
 }
 const s = field.result.sensitivity!;
 console.log('   sensitivity (k_o W/(m K) : Nu/Nu0 : overall)');
 for (let i = 0; i < s.lubricantConductivity.length; i++) {
-  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.heatTransferRatio[i]?.toFixed(4)}\t${s.overallConductanceRatio[i]?.toFixed(4)}`);
+  console.log(`   ${s.lubricantConductivity[i].toPrecision(3)}\t${s.nusseltRatio[i]?.toFixed(4)}\t${s.heatFluxRatio[i]?.toFixed(4)}`);
 }
-console.log(`   best k_o = ${s.bestLubricantConductivity.toPrecision(3)} (overall ${s.bestOverallConductanceRatio.toFixed(4)})`);
+console.log(`   best k_o = ${s.bestLubricantConductivity.toPrecision(3)} (overall ${s.bestHeatFluxRatio.toFixed(4)})`);
 
 console.log('\n2. Conduction cell b_t vs grid (adiabatic-groove extreme against Philip 1972; demo wall)');
 const extreme = { pitch: 20e-6, grooveWidth: 10e-6, grooveDepth: 5e-6, substrateThickness: 10e-6, workingConductivity: 0.6, lubricantConductivity: 1e-7, solidConductivity: 1e5 };

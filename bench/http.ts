@@ -40,7 +40,7 @@ const app = await buildApp(testConfig({ logLevel: 'silent', rateLimitPerMinute: 
 await app.listen({ port: 0, host: '127.0.0.1' });
 const appUrl = `http://127.0.0.1:${(app.server.address() as { port: number }).port}/v1/flow`;
 const body = JSON.stringify({
-  workingFluid: { fluid: 'water', temperature: '20 degC' },
+  workingFluid: { id: 'water', temperature: '20 degC' },
   flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
   texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
 });

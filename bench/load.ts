@@ -51,18 +51,18 @@ const { base, child } = service;
 
 const design = {
   texture: { grooveWidth: '20 um', pitch: '40 um', grooveDepth: '20 um' },
-  lubricant: { fluid: 'silicone-oil-5cst', temperature: '25 degC' },
-  workingFluid: { fluid: 'water', temperature: '25 degC' },
+  lubricant: { id: 'silicone-oil-5cst', temperature: '25 degC' },
+  workingFluid: { id: 'water', temperature: '25 degC' },
   flow: { kind: 'channel', height: '5 mm', bulkVelocity: '0.6 m/s' },
 };
 const post = (path: string, body: unknown) => ({ method: 'POST' as const, path, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
 const MIXES = {
   cheap: [
     post('/v1/flow', { workingFluid: design.workingFluid, flow: design.flow, texture: design.texture }),
-    post('/v1/waves', { ...design, lubricant: { fluid: 'n-dodecane', temperature: '25 degC' } }),
-    post('/v1/slip', { ...design, method: 'closed-form' }),
+    post('/v1/waves', { ...design, lubricant: { id: 'n-dodecane', temperature: '25 degC' } }),
+    post('/v1/slip', { ...design, options: { method: 'closed-form' } }),
   ],
-  heavy: [post('/v1/slip', { ...design, method: 'field' }), post('/v1/slip', { ...design, lubricant: { fluid: 'n-hexadecane', temperature: '25 degC' }, method: 'auto' })],
+  heavy: [post('/v1/slip', { ...design, options: { method: 'field' } }), post('/v1/slip', { ...design, lubricant: { id: 'n-hexadecane', temperature: '25 degC' }, options: { method: 'auto' } })],
 };
 
 async function run(name: 'cheap' | 'heavy', connections: number) {

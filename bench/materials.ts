@@ -4,7 +4,8 @@
  * Run: npx tsx bench/materials.ts
  */
 import os from 'node:os';
-import { catalogueListing, resolveFluid, type FluidSpec } from '../src/materials/index.js';
+import { catalogueListing, resolveFluid } from '../src/materials/index.js';
+import type { FluidSpec } from '../src/core/catalogue.js';
 
 function timeIt(label: string, iterations: number, run: () => unknown): void {
   for (let i = 0; i < Math.min(1000, iterations); i++) run();
@@ -16,10 +17,10 @@ function timeIt(label: string, iterations: number, run: () => unknown): void {
 
 console.log(`node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown'}), shared machine`);
 const cases: Array<[string, FluidSpec]> = [
-  ['water 80 °C', { fluid: 'water', temperature: 353.15 }],
-  ['seawater 35 g/kg 20 °C', { fluid: 'seawater', temperature: 293.15 }],
-  ['seawater 10 g/kg 20 °C (records rebuilt)', { fluid: 'seawater', temperature: 293.15, salinity: 10 }],
-  ['n-hexadecane 25 °C', { fluid: 'n-hexadecane', temperature: 298.15 }],
+  ['water 80 °C', { id: 'water', temperature: 353.15 }],
+  ['seawater 35 g/kg 20 °C', { id: 'seawater', temperature: 293.15 }],
+  ['seawater 10 g/kg 20 °C (records rebuilt)', { id: 'seawater', temperature: 293.15, salinity: 10 }],
+  ['n-hexadecane 25 °C', { id: 'n-hexadecane', temperature: 298.15 }],
   ['custom fluid', { density: 900, viscosity: 0.01 }],
 ];
 for (const [label, spec] of cases) timeIt(`resolveFluid ${label}`, 200_000, () => resolveFluid(spec));

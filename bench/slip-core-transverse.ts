@@ -1,6 +1,6 @@
 /**
- * Transverse slip core benchmark: the fast Galerkin method (src/physics/groove-cell-transverse.ts) against
- * the groove-cell field solver (src/numerics/groove-cell.ts) on the committed grid of cases
+ * Transverse slip core benchmark: the fast Galerkin method (src/physics/groove/groove-cell-transverse.ts) against
+ * the groove-cell field solver (src/physics/groove/groove-cell.ts) on the committed grid of cases
  * (fixtures/slip/transverse_field_reference.json: 49 cases over w/P 0.02–0.98, d/w 0.01–10, N 1e-4–1e4),
  * plus the FreeFEM whole-cell reference (fixtures/slip/transverse_cell_freefem.json) for the secondary
  * quantities.
@@ -13,9 +13,9 @@
  * (evaluations per second on one core, all cases in a loop) and the error summary.
  */
 import os from 'node:os';
-import { solveTransverseCell } from '../src/numerics/groove-cell.js';
-import { transverseGrooveSlip } from '../src/physics/groove-cell-transverse.js';
-import { belyaevVinogradovaSlipLengthTransverse, grooveLocalSlipLengths } from '../src/physics/stripe-slip.js';
+import { solveTransverseCell } from '../src/physics/groove/groove-cell.js';
+import { transverseGrooveSlip } from '../src/physics/groove/groove-cell-transverse.js';
+import { belyaevVinogradovaSlipLengthTransverse, grooveLocalSlipLengths } from '../src/physics/slip/stripe-slip.js';
 import reference from '../fixtures/slip/transverse_field_reference.json' with { type: 'json' };
 import freefem from '../fixtures/slip/transverse_cell_freefem.json' with { type: 'json' };
 
@@ -62,7 +62,7 @@ for (const c of reference.cases) {
   }
   const difference = value / field - 1;
   // Below 1e-8 P the field solver does not resolve b_⊥ (a difference of two numbers of order H = 4P); the
-  // witness there is the large-N cavity limit (test/physics/groove-cell-transverse.test.ts).
+  // witness there is the large-N cavity limit (test/physics/groove/groove-cell-transverse.test.ts).
   const resolved = field > 1e-8;
   if (resolved) differences.push(difference);
   fieldTotal += msField;

@@ -3,18 +3,18 @@
  * lid-sheared-duct mean local slip; transverse via Asmolov–Vinogradova with the
  * shallow-groove recirculation slip) against the groove-cell field solver, over
  * interface fraction φ, depth ratio d/w and viscosity ratio N. Prints one row per
- * case and the time per field solve. The `auto` rule in src/physics/slip.ts is
+ * case and the time per field solve. The `auto` rule in src/physics/slip/slip.ts is
  * read off this table.
  *
  * Run: npx tsx bench/slip-error-map.ts [cellsPerPitch]
  */
 import os from 'node:os';
-import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/numerics/groove-cell.js';
+import { solveLongitudinalCell, solveTransverseCell, type GrooveCellInput, type GrooveCellResult } from '../src/physics/groove/groove-cell.js';
 import {
   belyaevVinogradovaSlipLengthLongitudinal,
   belyaevVinogradovaSlipLengthTransverse,
   grooveLocalSlipLengths,
-} from '../src/physics/stripe-slip.js';
+} from '../src/physics/slip/stripe-slip.js';
 
 type Solver = (input: GrooveCellInput) => GrooveCellResult;
 

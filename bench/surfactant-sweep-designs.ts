@@ -5,14 +5,15 @@
  * slip from the closed-form slip model (the slip core is timed elsewhere) and
  * the interface solver forced (method "solver"), including the 21-point
  * concentration curve and the half-slip root. Shared by bench/surfactant-sweep.ts
- * (all designs) and test/physics/surfactant-sweep.test.ts (a subset).
+ * (all designs) and test/physics/surfactant/sweep.test.ts (a subset).
  */
 import { readFileSync } from 'node:fs';
-import { resolveSurfactant, type ResolvedSurfactant } from '../src/materials/surfactants.js';
-import { ConvergenceError } from '../src/physics/common.js';
+import { resolveSurfactant } from '../src/materials/surfactants.js';
+import type { ResolvedSurfactant } from '../src/core/surfactant.js';
+import { ConvergenceError } from '../src/core/errors.js';
 import type { Scenario } from '../src/physics/scenario.js';
-import { evaluateSlip } from '../src/physics/slip.js';
-import { evaluateSurfactant, type SurfactantMethod, type SurfactantResult } from '../src/physics/surfactant.js';
+import { evaluateSlip } from '../src/physics/slip/slip.js';
+import { evaluateSurfactant, type SurfactantMethod, type SurfactantResult } from '../src/physics/surfactant/surfactant.js';
 
 export interface SweepDesign {
   id: number;

@@ -4,9 +4,9 @@
  */
 import { readFileSync } from 'node:fs';
 import { resolveSurfactant } from '../src/materials/surfactants.js';
-import { solveLongWaveGroove, solveTransverseInterface } from '../src/physics/surfactant-solver.js';
-import { marangoniScaling, philipTransverse } from '../src/physics/surfactant-scaling.js';
-import { evaluateSurfactant } from '../src/physics/surfactant.js';
+import { solveLongWaveGroove, solveTransverseInterface } from '../src/physics/surfactant/solver.js';
+import { marangoniScaling, philipTransverse } from '../src/physics/surfactant/scaling.js';
+import { evaluateSurfactant } from '../src/physics/surfactant/surfactant.js';
 
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });
 const T = 298.15;

@@ -6,9 +6,18 @@
  */
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
-import { evaluateWaves, type WavesInput } from '../src/physics/waves.js';
+import { DesignSchema } from '../src/api/schemas/design.js';
+import { catalogue } from '../src/materials/lookup.js';
+import { DesignContext } from '../src/physics/design/context.js';
+import { evaluateWaves, type WavesInput } from '../src/physics/waves/waves.js';
 
-const input = JSON.parse(readFileSync(new URL('../examples/waves-worked-example.json', import.meta.url), 'utf8')) as WavesInput;
+// The worked example as the service reads it (unit strings converted, fluids from the catalogue).
+const ctx = new DesignContext(DesignSchema.parse(JSON.parse(readFileSync(new URL('../examples/waves-worked-example.json', import.meta.url), 'utf8'))), catalogue);
+const input: WavesInput = {
+  scenario: ctx.scenario('waves', 'required'),
+  slipLengthLongitudinal: ctx.slip('waves', 'closed-form').result.slipLengthLongitudinal,
+  gravity: { inclination: 0, facing: 'up' },
+};
 console.log(`node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? 'unknown'}), shared machine`);
 console.log('input: examples/waves-worked-example.json');
 for (let i = 0; i < 30; i++) evaluateWaves({ ...input, mapResolution: 8 }); // JIT warm-up

@@ -3,7 +3,12 @@
  * (inline or in the worker pool), from the CLI, and in the OpenAPI document.
  */
 import type { ZodType, output } from 'zod';
-import { ConvergenceError, DomainError } from '../physics/common.js';
+import { ConvergenceError, DomainError, MissingInputError } from '../core/errors.js';
+import { catalogue } from '../materials/lookup.js';
+import { DesignContext } from '../physics/design/context.js';
+import type { Question } from '../physics/design/document.js';
+import { QUESTIONS } from '../physics/design/questions.js';
+import { DesignSchema } from './schemas/design.js';
 import { envelope, findNonFinite, type CalculationOutput, type Envelope } from './envelope.js';
 import { problem, ProblemError, validationProblem, zodFieldErrors, type Problem } from './problem.js';
 
@@ -16,7 +21,7 @@ export interface CalculationDefinition<Body extends ZodType = ZodType> {
   description: string;
   /** Request body schema: validation, TypeScript type and OpenAPI in one. */
   body: Body;
-  /** Response envelope schema (OpenAPI only). */
+  /** Response envelope schema: OpenAPI document, fastify serialisation and the tests' parse. */
   response: ZodType;
   /** Heavy solves run in the worker-thread pool; closed forms inline. A function decides per request. */
   heavy: boolean | ((input: output<Body>) => boolean);
@@ -27,6 +32,18 @@ export interface CalculationDefinition<Body extends ZodType = ZodType> {
 
 export function defineCalculation<Body extends ZodType>(definition: CalculationDefinition<Body>): CalculationDefinition<Body> {
   return definition;
+}
+
+/**
+ * A calculation that answers one question about the design document: the body
+ * is the design schema, the compute step is that question of the composition
+ * layer on a fresh design context.
+ */
+export function designCalculation(
+  definition: Omit<CalculationDefinition<typeof DesignSchema>, 'body' | 'compute'> & { question: Question },
+): CalculationDefinition<typeof DesignSchema> {
+  const { question, ...rest } = definition;
+  return { ...rest, body: DesignSchema, compute: (input) => QUESTIONS[question](new DesignContext(input, catalogue)) };
 }
 
 /** Validate a request body against the calculation's schema; throws a 422 ProblemError naming every bad field. */
@@ -67,6 +84,9 @@ export function problemFromError(error: unknown): Problem {
       iterations: error.iterations,
       ...(error.field ? { errors: [{ path: requestPath(error.field), message: error.message }] } : {}),
     });
+  }
+  if (error instanceof MissingInputError) {
+    return problem(422, 'missing-property', DOMAIN_TITLES['missing-property']!, error.message, { errors: [{ path: error.field ?? '', message: error.message }] });
   }
   if (error instanceof DomainError) {
     return problem(422, error.code, DOMAIN_TITLES[error.code] ?? 'The input is physically impossible', error.message, {

@@ -4,8 +4,9 @@
  * responses.
  */
 import { createHash } from 'node:crypto';
-import type { Reference, Warning } from '../physics/common.js';
-import { z } from './schemas/zod.js';
+import type { ModelId } from '../core/models.js';
+import type { Reference } from '../core/references.js';
+import type { Warning } from '../core/notes.js';
 
 export const SERVICE_NAME = 'oilskin';
 export const SERVICE_VERSION = '0.1.0';
@@ -69,11 +70,11 @@ export interface CalculationOutput {
   warnings: readonly Warning[];
   assumptions: readonly string[];
   references: readonly Reference[];
-  models: readonly string[];
+  models: readonly ModelId[];
 }
 
 export interface Envelope extends Omit<CalculationOutput, 'models'> {
-  provenance: { service: string; version: string; models: readonly string[]; inputsHash: string; computeMs: number };
+  provenance: { service: string; version: string; models: readonly ModelId[]; inputsHash: string; computeMs: number };
 }
 
 export function envelope(output: CalculationOutput, computeMs: number): Envelope {
@@ -93,41 +94,4 @@ export function envelope(output: CalculationOutput, computeMs: number): Envelope
       computeMs: Math.round(computeMs * 1000) / 1000,
     },
   };
-}
-
-export const WarningSchema = z
-  .object({
-    code: z.string().openapi({ description: 'Stable machine-readable code' }),
-    severity: z.enum(['info', 'caution', 'warning']),
-    message: z.string(),
-  })
-  .openapi('Warning');
-
-export const ReferenceSchema = z
-  .object({ key: z.string(), citation: z.string(), doi: z.string().optional() })
-  .openapi('Reference');
-
-export const ProvenanceSchema = z
-  .object({
-    service: z.string(),
-    version: z.string(),
-    models: z.array(z.string()).openapi({ description: 'Identifiers of the models that produced the result' }),
-    inputsHash: z.string().openapi({ description: 'SHA-256 of the canonical JSON of the normalised inputs' }),
-    computeMs: z.number().openapi({ description: 'Compute time of the calculation, ms' }),
-  })
-  .openapi('Provenance');
-
-/** Response schema of a calculation, for the OpenAPI document. */
-export function envelopeSchema(name: string, inputs: z.ZodType, result: z.ZodType, verdict?: z.ZodType) {
-  return z
-    .object({
-      inputs: inputs.openapi({ description: 'The inputs after unit conversion and catalogue look-up, SI' }),
-      result,
-      ...(verdict ? { verdict } : {}),
-      warnings: z.array(WarningSchema),
-      assumptions: z.array(z.string()),
-      references: z.array(ReferenceSchema),
-      provenance: ProvenanceSchema,
-    })
-    .openapi(name);
 }

@@ -8,6 +8,7 @@ import { z } from './schemas/zod.js';
 import { ProblemSchema } from './problem.js';
 import { SERVICE_VERSION } from './envelope.js';
 import { CALCULATIONS } from './routes/index.js';
+import { FluidsResponse, SurfactantsResponse } from './schemas/responses/catalogue.js';
 
 const problemContent = { 'application/problem+json': { schema: ProblemSchema } };
 
@@ -48,10 +49,10 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     path: '/v1/fluids',
     operationId: 'listFluids',
     summary: 'The built-in fluid catalogue',
-    description: 'Every fluid with each property value at its reference temperature, unit, valid temperature range and source.',
+    description: 'Every fluid with each property value at its reference temperature, unit, valid temperature range and source key, and the references those keys name.',
     tags: ['catalogues'],
     responses: {
-      200: { description: 'The catalogue', content: { 'application/json': { schema: z.object({ fluids: z.array(z.record(z.string(), z.unknown())) }) } } },
+      200: { description: 'The catalogue', content: { 'application/json': { schema: FluidsResponse } } },
       429: errorResponses[429],
     },
   });
@@ -67,7 +68,7 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     responses: {
       200: {
         description: 'The catalogue',
-        content: { 'application/json': { schema: z.object({ surfactants: z.array(z.record(z.string(), z.unknown())), references: z.array(z.record(z.string(), z.unknown())) }) } },
+        content: { 'application/json': { schema: SurfactantsResponse } },
       },
       429: errorResponses[429],
     },

@@ -10,7 +10,6 @@ import { alkaneMolarMass, dipprDensity105, dipprPolynomial100, dipprViscosity101
 import {
   ASTM_D7094_DODECANE,
   CRC_ORGANIC_CONSTANTS,
-  FOWKES_1964,
   IEC_60079_20_1,
   JASPER_1972,
   PERRY_CONDUCTIVITY,
@@ -21,7 +20,7 @@ import {
   WU_HORNOF_1999,
   ZEPPIERI_2001,
 } from './references.js';
-import type { Reference } from '../physics/common.js';
+import { REFERENCES, type Reference } from '../core/references.js';
 import { FROM_MEMORY, around, constant, linearInCelsius, type Range } from './records.js';
 import type { CatalogueFluid } from './types.js';
 
@@ -102,7 +101,7 @@ function alkane(data: AlkaneData): CatalogueFluid {
       surfaceTension: tension,
       surfaceTensionDispersive: {
         ...tension,
-        source: FOWKES_1964,
+        source: REFERENCES.fowkes1964,
         note: 'Equal to the total surface tension for saturated hydrocarbons (Fowkes 1964); values from Jasper (1972).',
       },
       interfacialTensionWater: constant(

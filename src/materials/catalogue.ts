@@ -5,12 +5,11 @@
  * confirmed against that source during writing carries `note: 'from memory …'`.
  * Temperatures are kelvin, values SI.
  */
-import type { Reference } from '../physics/common.js';
+import { REFERENCES, type Reference } from '../core/references.js';
 import { N_DECANE, N_DODECANE, N_HEXADECANE } from './alkanes.js';
 import { GALLIUM, MINERAL_OIL_LIGHT, PERFLUORODECALIN, PFPE_GENERIC } from './lubricants.js';
 import { constant, around, type Range } from './records.js';
 import {
-  FOWKES_1964,
   IAPWS_CONDUCTIVITY_2011,
   IAPWS_SR6_08,
   IAPWS_SURFACE_TENSION_2014,
@@ -29,7 +28,8 @@ import {
   seawaterViscosity,
 } from './seawater.js';
 import { SILICONE_OILS } from './silicones.js';
-import type { CatalogueFluid, FluidPropertyName, PropertyRecord } from './types.js';
+import type { CatalogueFluid, PropertyRecord } from './types.js';
+import type { FluidPropertyName } from '../core/fluid.js';
 import { PROPERTY_UNITS } from './types.js';
 import {
   WATER_SURFACE_TENSION_DISPERSIVE,
@@ -68,7 +68,7 @@ const WATER: CatalogueFluid = {
       source: IAPWS_SURFACE_TENSION_2014,
       note: 'Against the saturated vapour; taken as the value against air (common practice, no source).',
     },
-    surfaceTensionDispersive: constant(WATER_SURFACE_TENSION_DISPERSIVE, around(20, 5), FOWKES_1964, 'at 20 °C only'),
+    surfaceTensionDispersive: constant(WATER_SURFACE_TENSION_DISPERSIVE, around(20, 5), REFERENCES.fowkes1964, 'at 20 °C only'),
     thermalConductivity: {
       at: waterThermalConductivity,
       validRange: { min: 273.16, max: WATER_LIQUID_RANGE.max },
@@ -161,13 +161,17 @@ export function getFluid(id: string): CatalogueFluid | undefined {
   return BY_ID.get(id);
 }
 
-/** One property of one fluid as listed by `GET /v1/fluids`. */
+/**
+ * One property of one fluid as listed by `GET /v1/fluids`: the catalogue's
+ * sourced-value shape, shared with the surfactant listing.
+ */
 export interface PropertyListing {
   /** Value at the fluid's reference temperature, SI. */
   value: number;
   unit: string;
+  /** Key of the source in the listing's `references`. */
+  source: string;
   validRange: { min: number; max: number };
-  source: { key: string; citation: string; doi?: string };
   note?: string;
 }
 
@@ -186,17 +190,18 @@ export interface FluidListing {
   properties: Partial<Record<FluidPropertyName, PropertyListing>>;
 }
 
-/** JSON-ready description of every catalogue fluid, for `GET /v1/fluids`. */
-export function catalogueListing(): FluidListing[] {
-  return FLUIDS.map((fluid) => {
+/** JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references its values cite. */
+export function catalogueListing(): { fluids: FluidListing[]; references: Reference[] } {
+  const references = new Map<string, Reference>();
+  const fluids = FLUIDS.map((fluid) => {
     const properties: Partial<Record<FluidPropertyName, PropertyListing>> = {};
     for (const [name, record] of Object.entries(fluid.properties) as [FluidPropertyName, PropertyRecord][]) {
-      const { key, citation, doi } = record.source;
+      references.set(record.source.key, record.source);
       properties[name] = {
         value: record.at(fluid.referenceTemperature),
         unit: PROPERTY_UNITS[name],
+        source: record.source.key,
         validRange: { min: record.validRange.min, max: record.validRange.max },
-        source: doi === undefined ? { key, citation } : { key, citation, doi },
         ...(record.note === undefined ? {} : { note: record.note }),
       };
     }
@@ -212,6 +217,7 @@ export function catalogueListing(): FluidListing[] {
       properties,
     };
   });
+  return { fluids, references: [...references.values()] };
 }
 
 /** References every seawater evaluation also rests on (salinity scale). */

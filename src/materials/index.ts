@@ -5,3 +5,4 @@ export * from './water.js';
 export * from './seawater.js';
 export * from './catalogue.js';
 export * from './resolve.js';
+export * from './lookup.js';

@@ -3,13 +3,13 @@
  * light mineral oil, and liquid gallium, the catalogue's conductive
  * lubricant for heat transfer.
  */
+import { REFERENCES } from '../core/references.js';
 import {
   ASSAEL_2012,
   ASSAEL_2017,
   CRC_INORGANIC_CONSTANTS,
   CRC_MOLTEN_DENSITY,
   CRC_ORGANIC_CONSTANTS,
-  FOWKES_1964,
   GALLIUM_OXIDE_SKIN,
   JANAF_1998,
   MINERAL_OIL_DATA,
@@ -105,7 +105,7 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
     surfaceTensionDispersive: constant(
       30e-3,
       around(25, 5),
-      FOWKES_1964,
+      REFERENCES.fowkes1964,
       `equal to the total for saturated hydrocarbons (Fowkes 1964); total ${FROM_MEMORY}`,
     ),
   },

@@ -3,7 +3,7 @@
  * families (alkanes, silicones, other lubricants). Temperatures in kelvin,
  * values SI.
  */
-import type { Reference } from '../physics/common.js';
+import type { Reference } from '../core/references.js';
 import type { PropertyRecord } from './types.js';
 
 export const CELSIUS_ZERO = 273.15;

@@ -1,8 +1,10 @@
 /**
- * Sources of the catalogue's property values. One entry per publication; the
- * `key` is what `FluidState.origins` and the listing report.
+ * Sources of the catalogue's values (fluid properties and surfactant
+ * adsorption data). One entry per publication; the `key` is what
+ * `FluidState.origins` and the listings report. The literature of the models
+ * lives in src/core/references.ts; no key is defined in both.
  */
-import type { Reference } from '../physics/common.js';
+import type { Reference } from '../core/references.js';
 
 export const IAPWS_SR6_08: Reference = {
   key: 'iapws-sr6-08',
@@ -38,12 +40,6 @@ export const IAPWS_SURFACE_TENSION_2014: Reference = {
     'N. B. Vargaftik, B. N. Volkov, L. D. Voljak (1983), International tables of the surface tension of ' +
     'water, J. Phys. Chem. Ref. Data 12, 817–820.',
   doi: '10.1063/1.555688',
-};
-
-export const FOWKES_1964: Reference = {
-  key: 'fowkes1964',
-  citation: 'F. M. Fowkes (1964), Attractive forces at interfaces, Ind. Eng. Chem. 56(12), 40–52.',
-  doi: '10.1021/ie50660a008',
 };
 
 export const UNESCO_EOS80: Reference = {
@@ -279,4 +275,29 @@ export const ASTM_D7094_DODECANE: Reference = {
     'Table X1.1: n-dodecane 78.6 °C; as quoted in a flash-point study record of a REACH registration dossier ' +
     '(European Chemicals Agency, registered dossier 30749, section 4.12), whose Pensky–Martens closed-cup check ' +
     'of n-dodecane (ASTM D93) gave 77.5 °C. The standard itself was not read.',
+};
+
+export const CHANG_FRANSES_1995: Reference = {
+  key: 'chang1995',
+  citation:
+    'Chang, C.-H. & Franses, E. I. (1995). Adsorption dynamics of surfactants at the air/water interface: a critical review of mathematical models, data, and mechanisms. Colloids and Surfaces A 100, 1–45.',
+  doi: '10.1016/0927-7757(94)03061-4',
+};
+
+export const PROSSER_FRANSES_2001: Reference = {
+  key: 'prosser2001',
+  citation:
+    'Prosser, A. J. & Franses, E. I. (2001). Adsorption and surface tension of ionic surfactants at the air–water interface: review and evaluation of equilibrium models. Colloids and Surfaces A 178, 1–40.',
+  doi: '10.1016/S0927-7757(00)00706-8',
+};
+
+export const MUKERJEE_MYSELS_1971: Reference = {
+  key: 'mukerjee1971',
+  citation:
+    'Mukerjee, P. & Mysels, K. J. (1971). Critical Micelle Concentrations of Aqueous Surfactant Systems. NSRDS-NBS 36, U.S. National Bureau of Standards, Washington DC.',
+};
+
+export const ROSEN_KUNJAPPU_2012: Reference = {
+  key: 'rosen2012',
+  citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
 };

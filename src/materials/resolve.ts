@@ -2,8 +2,10 @@
  * From a request's fluid description (catalogue id and/or explicit values) to
  * a resolved {@link FluidState} at one temperature.
  */
-import { DomainError, Notes } from '../physics/common.js';
-import type { Reference } from '../physics/common.js';
+import { DomainError } from '../core/errors.js';
+import { Notes } from '../core/notes.js';
+import type { Reference } from '../core/references.js';
+import type { FluidSpec } from '../core/catalogue.js';
 import {
   SEAWATER_EXTRA_REFERENCES,
   SEAWATER_SALINITY_RANGES,
@@ -12,27 +14,8 @@ import {
   seawaterRecords,
 } from './catalogue.js';
 import { DEFAULT_SEAWATER_SALINITY, seawaterFreezingPoint } from './seawater.js';
-import type { CatalogueFluid, FluidPropertyName, FluidPropertySet, FluidState, PropertyRecord } from './types.js';
-
-/** What a request may say about a fluid. SI units; temperature in K; salinity in g/kg. */
-export interface FluidSpec {
-  /** Catalogue id (see `fluidIds()`); omit to describe a custom fluid by its values. */
-  fluid?: string;
-  /** K. Default: the catalogue fluid's reference temperature, or 293.15 K for a custom fluid. */
-  temperature?: number;
-  /**
-   * Absolute salinity, g/kg (TEOS-10 convention, e.g. 35 for open-ocean water);
-   * used by `seawater` only, default 35 g/kg.
-   */
-  salinity?: number;
-  density?: number;
-  viscosity?: number;
-  surfaceTension?: number;
-  surfaceTensionDispersive?: number;
-  interfacialTensionWater?: number;
-  thermalConductivity?: number;
-  specificHeat?: number;
-}
+import type { CatalogueFluid, PropertyRecord } from './types.js';
+import type { FluidPropertyName, FluidPropertySet, FluidState } from '../core/fluid.js';
 
 const PROPERTY_NAMES: readonly FluidPropertyName[] = [
   'density',
@@ -68,7 +51,7 @@ function checkPositive(value: number | undefined, path: string, what: string): v
  * catalogue (origin `input`); every other value comes from the catalogue with
  * its source key as origin and its reference in `references`.
  *
- * Throws DomainError (field path in `field`) for: an unknown id (`.fluid`); a
+ * Throws DomainError (field path in `field`) for: an unknown id (`.id`); a
  * custom fluid without density or viscosity (`.density`, `.viscosity`); a
  * non-positive or non-finite value (`.<property>`, `.temperature`,
  * `.salinity`); a temperature at or below the freezing point or above the
@@ -78,6 +61,23 @@ function checkPositive(value: number | undefined, path: string, what: string): v
  * `property-extrapolated` warning.
  */
 export function resolveFluid(spec: FluidSpec, field = 'fluid'): FluidState {
+  const { kinematicViscosity, ...rest } = spec;
+  if (kinematicViscosity === undefined) return resolveDynamic(rest, field);
+  checkPositive(kinematicViscosity, `${field}.kinematicViscosity`, 'kinematicViscosity');
+  if (rest.viscosity !== undefined) {
+    throw new DomainError('give viscosity or kinematicViscosity, not both', { field: `${field}.kinematicViscosity` });
+  }
+  // ν → μ with the density the fluid has: given, else the catalogue's at this temperature.
+  const density = rest.density ?? (rest.id === undefined ? undefined : resolveDynamic(rest, field).density);
+  if (density === undefined) {
+    throw new DomainError('a kinematic viscosity needs the density: give density or a catalogue id', { field: `${field}.density` });
+  }
+  const state = resolveDynamic({ ...rest, viscosity: kinematicViscosity * density }, field);
+  state.origins.viscosity = 'input (kinematic viscosity × density)';
+  return state;
+}
+
+function resolveDynamic(spec: Omit<FluidSpec, 'kinematicViscosity'>, field: string): FluidState {
   for (const name of PROPERTY_NAMES) checkPositive(spec[name], `${field}.${name}`, name);
   checkPositive(spec.temperature, `${field}.temperature`, 'temperature');
   if (spec.salinity !== undefined) {
@@ -88,7 +88,7 @@ export function resolveFluid(spec: FluidSpec, field = 'fluid'): FluidState {
       );
     }
   }
-  const state = spec.fluid === undefined ? resolveCustom(spec, field) : resolveCatalogue(spec.fluid, spec, field);
+  const state = spec.id === undefined ? resolveCustom(spec, field) : resolveCatalogue(spec.id, spec, field);
   const { surfaceTension, surfaceTensionDispersive } = state;
   if (surfaceTension !== undefined && surfaceTensionDispersive !== undefined && surfaceTensionDispersive > surfaceTension) {
     throw new DomainError(
@@ -133,7 +133,7 @@ function resolveCustom(spec: FluidSpec, field: string): FluidState {
 function resolveCatalogue(id: string, spec: FluidSpec, field: string): FluidState {
   const fluid = getFluid(id);
   if (fluid === undefined) {
-    throw new DomainError(`unknown fluid "${id}"; known fluids: ${fluidIds().join(', ')}`, { field: `${field}.fluid` });
+    throw new DomainError(`unknown fluid "${id}"; known fluids: ${fluidIds().join(', ')}`, { field: `${field}.id` });
   }
   const notes = new Notes();
   let records: CatalogueFluid['properties'] = fluid.properties;

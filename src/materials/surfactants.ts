@@ -10,9 +10,14 @@
  * rate constant m³/(mol·s), desorption rate constant 1/s, diffusivities
  * m²/s, concentrations mol/m³ (1 mol/m³ = 1 mM).
  */
-import { DomainError, type Reference, type Warning } from '../physics/common.js';
+import type { SurfactantParameters } from '../core/catalogue.js';
+import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
+import { DomainError } from '../core/errors.js';
+import type { Warning } from '../core/notes.js';
+import { REFERENCES, type Reference } from '../core/references.js';
+import { CHANG_FRANSES_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
 
-export type InterfaceType = 'air-water' | 'oil-water';
+
 
 /** One catalogue number with its witness. */
 export interface SourcedValue {
@@ -50,36 +55,15 @@ export interface CatalogueSurfactant {
   interfaces: Partial<Record<InterfaceType, InterfaceAdsorptionData>>;
 }
 
-export const SURFACTANT_REFERENCES = {
-  chang1995: {
-    key: 'chang1995',
-    citation:
-      'Chang, C.-H. & Franses, E. I. (1995) Adsorption dynamics of surfactants at the air/water interface: a critical review of mathematical models, data, and mechanisms. Colloids and Surfaces A 100, 1–45.',
-    doi: '10.1016/0927-7757(94)03061-4',
-  },
-  prosser2001: {
-    key: 'prosser2001',
-    citation:
-      'Prosser, A. J. & Franses, E. I. (2001) Adsorption and surface tension of ionic surfactants at the air–water interface: review and evaluation of equilibrium models. Colloids and Surfaces A 178, 1–40.',
-    doi: '10.1016/S0927-7757(00)00706-8',
-  },
-  landel2020: {
-    key: 'landel2020',
-    citation:
-      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020) A theory for the slip and drag of superhydrophobic surfaces with surfactant. Journal of Fluid Mechanics 883, A18 (arXiv:1904.01194; DOI 10.1017/jfm.2019.857 from memory).',
-  },
-  mukerjee1971: {
-    key: 'mukerjee1971',
-    citation:
-      'Mukerjee, P. & Mysels, K. J. (1971) Critical Micelle Concentrations of Aqueous Surfactant Systems. NSRDS-NBS 36, U.S. National Bureau of Standards, Washington DC.',
-  },
-  rosen2012: {
-    key: 'rosen2012',
-    citation: 'Rosen, M. J. & Kunjappu, J. T. (2012) Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
-  },
-} satisfies Record<string, Reference>;
+/** The sources the surfactant entries cite. */
+const R = {
+  chang1995: CHANG_FRANSES_1995,
+  prosser2001: PROSSER_FRANSES_2001,
+  landel2020: REFERENCES.landel2020,
+  mukerjee1971: MUKERJEE_MYSELS_1971,
+  rosen2012: ROSEN_KUNJAPPU_2012,
+};
 
-const R = SURFACTANT_REFERENCES;
 
 export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   {
@@ -199,47 +183,8 @@ export function surfactantListing(): {
   return { surfactants, references: [...refs.values()] };
 }
 
-/** Surfactant parameters resolved for one interface, ready for the physics (SI). */
-export interface ResolvedSurfactant {
-  /** Catalogue id, or "custom". */
-  id: string;
-  name: string;
-  interfaceType: InterfaceType;
-  /** Γ_m, mol/m². */
-  maximumSurfaceExcess: number;
-  /** K, m³/mol. */
-  langmuirConstant: number;
-  /** κ_a, m³/(mol·s); absent = diffusion-controlled (instantaneous) exchange. */
-  adsorptionRate?: number;
-  /** κ_d, 1/s; absent = diffusion-controlled (instantaneous) exchange. */
-  desorptionRate?: number;
-  /** D, m²/s. */
-  bulkDiffusivity: number;
-  /** D_I, m²/s. */
-  surfaceDiffusivity: number;
-  /** n, dimensionless. */
-  gibbsPrefactor: number;
-  /** CMC, mol/m³, when known. */
-  criticalMicelleConcentration?: number;
-  /** Where each value came from: a reference key, "input" or "derived". */
-  origins: Record<string, string>;
-  references: Reference[];
-  warnings: Warning[];
-}
-
-/** Request-supplied values (SI); any of them overrides the catalogue. */
-export interface SurfactantParameters {
-  maximumSurfaceExcess?: number;
-  langmuirConstant?: number;
-  adsorptionRate?: number;
-  desorptionRate?: number;
-  bulkDiffusivity?: number;
-  surfaceDiffusivity?: number;
-  gibbsPrefactor?: number;
-  criticalMicelleConcentration?: number;
-}
-
-export interface SurfactantSpec {
+/** What the catalogue resolver takes: an id and/or parameters, for one interface type. */
+export interface SurfactantResolveSpec {
   /** Catalogue id; omit to give every parameter explicitly. */
   id?: string;
   interfaceType: InterfaceType;
@@ -256,10 +201,10 @@ export interface SurfactantSpec {
  * Missing required values (Γ_m, K, D, n) throw DomainError; a missing
  * surface diffusivity falls back to the bulk diffusivity (assumption, warned).
  */
-export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
+export function resolveSurfactant(spec: SurfactantResolveSpec, field = 'surfactant'): ResolvedSurfactant {
   const entry = spec.id !== undefined ? getSurfactant(spec.id) : undefined;
   if (spec.id !== undefined && !entry) {
-    throw new DomainError(`unknown surfactant "${spec.id}"`, { field: 'surfactant.id', code: 'unknown-surfactant' });
+    throw new DomainError(`unknown surfactant "${spec.id}"`, { field: `${field}.id`, code: 'unknown-surfactant' });
   }
   const data = entry?.interfaces[spec.interfaceType];
   const p = spec.parameters ?? {};
@@ -270,7 +215,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
     const given = p[name];
     if (given !== undefined) {
       if (!Number.isFinite(given) || given <= 0) {
-        throw new DomainError(`${name} must be a positive finite number`, { field: `surfactant.${name}` });
+        throw new DomainError(`${name} must be a positive finite number`, { field: `${field}.${name}` });
       }
       origins[name] = 'input';
       return given;
@@ -291,7 +236,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
   };
   if (entry && !data && Object.keys(p).length === 0) {
     throw new DomainError(`no ${spec.interfaceType} adsorption data for ${entry.name}; give the parameters explicitly`, {
-      field: 'surfactant.parameters',
+      field,
       code: 'missing-interface-data',
     });
   }
@@ -316,7 +261,7 @@ export function resolveSurfactant(spec: SurfactantSpec): ResolvedSurfactant {
   for (const [name, value] of required) {
     if (value === undefined) {
       throw new DomainError(`${name} is not known for this surfactant and interface; give it explicitly`, {
-        field: `surfactant.${name}`,
+        field: `${field}.${name}`,
         code: 'missing-surfactant-parameter',
       });
     }

@@ -3,27 +3,9 @@
  * value recalled but not confirmed against its source says so in `note`
  * (`from memory`). Temperatures are kelvin, everything else SI.
  */
-import type { Reference, Warning } from '../physics/common.js';
+import type { FluidPropertyName } from '../core/fluid.js';
+import type { Reference } from '../core/references.js';
 
-/** Thermophysical properties the calculations use, SI units. */
-export interface FluidPropertySet {
-  /** kg/m³ */
-  density: number;
-  /** Pa·s */
-  viscosity: number;
-  /** Surface tension against air, N/m. */
-  surfaceTension?: number;
-  /** Dispersive (London) component of the surface tension, N/m (for the Fowkes estimate). */
-  surfaceTensionDispersive?: number;
-  /** Interfacial tension against water, N/m (lubricants only). */
-  interfacialTensionWater?: number;
-  /** W/(m·K) */
-  thermalConductivity?: number;
-  /** J/(kg·K) */
-  specificHeat?: number;
-}
-
-export type FluidPropertyName = keyof FluidPropertySet;
 
 export const PROPERTY_UNITS: Record<FluidPropertyName, string> = {
   density: 'kg/m^3',
@@ -63,16 +45,4 @@ export interface CatalogueFluid {
   properties: Partial<Record<FluidPropertyName, PropertyRecord>>;
   /** Handling and safety notes for the docs (flammability, data sheet advice). */
   safety?: string;
-}
-
-/** A fluid resolved at one temperature, with explicit overrides applied. */
-export interface FluidState extends FluidPropertySet {
-  /** Catalogue id, or "custom" when every value was given explicitly. */
-  id: string;
-  name: string;
-  temperature: number;
-  /** Where each property value came from: catalogue source key, or "input". */
-  origins: Partial<Record<FluidPropertyName, string>>;
-  references: Reference[];
-  warnings: Warning[];
 }

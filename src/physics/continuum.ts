@@ -25,7 +25,11 @@
  * 2. Hansen J.S., Dyre J.C., Daivis P., Todd B.D., Bruus H. (2015) Continuum
  *    nanofluidics. Langmuir 31, 13275–13289.
  */
-import { DomainError, type Notes, type Reference } from './common.js';
+import { DomainError } from '../core/errors.js';
+import type { Notes } from '../core/notes.js';
+import { REFERENCES } from '../core/references.js';
+
+
 
 export const CONTINUUM_LIMITS = {
   /** Smallest texture length any model here accepts, m. */
@@ -33,18 +37,6 @@ export const CONTINUUM_LIMITS = {
   /** Texture lengths below this get the `continuum-limit` warning, m. */
   cautionLength: 1e-7,
 } as const;
-
-export const CONTINUUM_REFERENCES: Record<'garajeu2013' | 'hansen2015', Reference> = {
-  garajeu2013: {
-    key: 'garajeu2013',
-    citation: 'Gărăjeu, M., Gouin, H., Saccomandi, G. (2013). Scaling Navier–Stokes equation in nanotubes. Physics of Fluids 25, 082003.',
-    doi: '10.1063/1.4818159',
-  },
-  hansen2015: {
-    key: 'hansen2015',
-    citation: 'Hansen, J. S., Dyre, J. C., Daivis, P., Todd, B. D., Bruus, H. (2015). Continuum nanofluidics. Langmuir 31, 13275–13289.',
-  },
-};
 
 /**
  * Refuse texture lengths below molecular size and warn below 100 nm (see the
@@ -78,6 +70,6 @@ export function checkContinuumScale(texture: { grooveWidth: number; grooveDepth:
         `The smallest texture length is ${(smallest * 1e9).toPrecision(3)} nm, below 100 nm: molecular layering, wall slip and the size of the lubricant molecules start to matter, and the continuum results are rough estimates.`,
         'caution',
       )
-      .cite(CONTINUUM_REFERENCES.garajeu2013, CONTINUUM_REFERENCES.hansen2015);
+      .cite(REFERENCES.garajeu2013, REFERENCES.hansen2015);
   }
 }

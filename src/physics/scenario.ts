@@ -3,7 +3,7 @@
  * and catalogue look-up. Physics modules take these resolved shapes; the API
  * layer builds them from requests.
  */
-import type { FluidState } from '../materials/types.js';
+import type { FluidState } from '../core/fluid.js';
 
 /** Streamwise-groove texture. Lengths in metres, angle in degrees. */
 export interface Texture {
@@ -20,7 +20,7 @@ export interface Texture {
 export type FlowKind = 'channel' | 'pipe' | 'plate' | 'wall-shear';
 export type FlowRegime = 'laminar' | 'transitional' | 'turbulent';
 
-/** Flow conditions at the wall, from {@link import('./flow.js').evaluateFlow}. */
+/** Flow conditions at the wall, from {@link import('./flow/flow.js').evaluateFlow}. */
 export interface FlowState {
   kind: FlowKind;
   /** τ_w, Pa, on a smooth no-slip wall. */

@@ -34,7 +34,7 @@ afterAll(async () => {
   await withCors.close();
 });
 
-const flowBody = JSON.stringify({ workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
+const flowBody = JSON.stringify({ workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
 
 /** One request with the path sent byte for byte as given. */
 function send(method: string, path: string, options: { key?: string; body?: string; headers?: Record<string, string>; to?: number } = {}): Promise<{ status: number; body: string }> {

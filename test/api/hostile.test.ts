@@ -2,7 +2,7 @@
  * Bad input on every calculation route: the contract is a 4xx problem+json
  * that names the offending field, never a 5xx, never NaN/Infinity.
  * Generated from each route's own example and schema (fast-check) plus
- * hand-written hostile cases (quality.md, "Bad input and faults").
+ * hand-written hostile cases.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { FastifyInstance } from 'fastify';

@@ -9,7 +9,7 @@ import type { FastifyInstance } from 'fastify';
 import { readFileSync } from 'node:fs';
 import { makeApp } from './helpers.js';
 import { problemFromError } from '../../src/api/calculation.js';
-import { ConvergenceError } from '../../src/physics/common.js';
+import { ConvergenceError } from '../../src/core/errors.js';
 import { slipCalculation } from '../../src/api/routes/slip.js';
 import { runCli } from '../../src/cli/main.js';
 
@@ -27,11 +27,11 @@ async function post(url: string, payload: unknown) {
 }
 
 const slipExample = slipCalculation.example as Record<string, Record<string, unknown>>;
-const withGrooveWidth = (grooveWidth: unknown, method = 'auto') => ({ ...slipExample, texture: { ...slipExample.texture, grooveWidth }, method });
+const withGrooveWidth = (grooveWidth: unknown, method = 'auto') => ({ ...slipExample, texture: { ...slipExample.texture, grooveWidth }, options: { method } });
 
 describe('problem titles say what happened and paths name the request field', () => {
   it('a pipe roughness larger than the diameter: physically impossible, naming flow.roughness (was a non-finite result with an empty path)', async () => {
-    const { status, body } = await post('/v1/flow', { workingFluid: { fluid: 'water' }, flow: { kind: 'pipe', diameter: '10 mm', bulkVelocity: '2 m/s', roughness: '50 mm' } });
+    const { status, body } = await post('/v1/flow', { workingFluid: { id: 'water' }, flow: { kind: 'pipe', diameter: '10 mm', bulkVelocity: '2 m/s', roughness: '50 mm' } });
     expect(status).toBe(422);
     expect(body.title).toBe('The input is physically impossible');
     expect(body.errors?.[0].path).toBe('flow.roughness');
@@ -44,7 +44,7 @@ describe('problem titles say what happened and paths name the request field', ()
       [{ ...channel, height: 1e-300 }, 'flow.height'],
       [{ kind: 'wall-shear', wallShearStress: 1e-300 }, 'flow.wallShearStress'],
     ] as const) {
-      const { status, body } = await post('/v1/flow', { workingFluid: { fluid: 'water' }, flow });
+      const { status, body } = await post('/v1/flow', { workingFluid: { id: 'water' }, flow });
       expect(status, path).toBe(422);
       expect(body.errors?.[0].path).toBe(path);
     }
@@ -53,7 +53,7 @@ describe('problem titles say what happened and paths name the request field', ()
   it('a lubricant without a specific heat for /v1/heat: "A required property is missing", path as in the request', async () => {
     const heat = JSON.parse(readFileSync(new URL('../../examples/heat-worked-example.json', import.meta.url), 'utf8'));
     const { specificHeat: _dropped, ...lubricant } = heat.lubricant;
-    const { status, body } = await post('/v1/heat', { ...heat, lubricant, method: 'closed-form', sensitivity: undefined });
+    const { status, body } = await post('/v1/heat', { ...heat, lubricant, options: { method: 'closed-form' } });
     expect(status).toBe(422);
     expect(body.title).toBe('A required property is missing');
     expect(body.type).toMatch(/missing-property$/);
@@ -78,10 +78,11 @@ describe('problem titles say what happened and paths name the request field', ()
   it('bulkConcentration "1 mg/L" says which units are accepted (molar, with the example and how to convert)', async () => {
     const surfactant = (await import('../../src/api/routes/surfactant.js')).surfactantCalculation.example as object;
     for (const [value, path] of [
-      ['1 mg/L', 'bulkConcentration'],
-      [['0.1 mM', '1 mg/L'], 'bulkConcentration[1]'],
+      ['1 mg/L', 'waterQuality.bulkConcentration'],
+      [['0.1 mM', '1 mg/L'], 'waterQuality.bulkConcentration[1]'],
     ] as const) {
-      const { status, body } = await post('/v1/surfactant', { ...surfactant, bulkConcentration: value });
+      const quality = (surfactant as { waterQuality: object }).waterQuality;
+      const { status, body } = await post('/v1/surfactant', { ...surfactant, waterQuality: { ...quality, bulkConcentration: value } });
       expect(status).toBe(422);
       const error = body.errors?.[0];
       expect(error?.path).toBe(path);
@@ -129,7 +130,7 @@ describe('regression: unbounded work from tiny geometry (the /v1/slip example wi
       const codes = body.warnings?.map((w) => w.code) ?? [];
       expect(codes.includes('continuum-limit'), width).toBe(continuum);
       expect(codes, width).toContain('field-solver-unavailable');
-      expect(body.result?.methodUsed).toBe('closed-form');
+      expect(body.result?.method).toBe('closed-form');
     }
   });
 

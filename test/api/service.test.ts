@@ -43,7 +43,7 @@ describe('service endpoints', () => {
     expect(page.body).toMatch(/swagger/i);
   });
   it('GET /metrics exposes request counts, duration histogram, event-loop lag and process metrics', async () => {
-    await app.inject({ method: 'POST', url: '/v1/flow', payload: { workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } } });
+    await app.inject({ method: 'POST', url: '/v1/flow', payload: { workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } } });
     const text = (await app.inject('/metrics')).body;
     expect(text).toMatch(/oilskin_http_requests_total\{route="\/v1\/flow",method="POST",status_code="200"\} 1/);
     expect(text).toMatch(/oilskin_http_request_duration_seconds_bucket/);
@@ -100,7 +100,7 @@ describe('non-finite guard', () => {
 describe('authentication, rate limit and overload', () => {
   it('with API keys configured, /v1 needs x-api-key; health stays open', async () => {
     const secured = await makeApp({ apiKeys: ['k-123'] });
-    const body = { workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } };
+    const body = { workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } };
     expect((await secured.inject({ method: 'POST', url: '/v1/flow', payload: body })).statusCode).toBe(401);
     expect((await secured.inject({ method: 'POST', url: '/v1/flow', payload: body, headers: { 'x-api-key': 'k-123' } })).statusCode).toBe(200);
     expect((await secured.inject('/healthz')).statusCode).toBe(200);

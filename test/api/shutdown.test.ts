@@ -67,10 +67,10 @@ function request(
   });
 }
 
-const flowBody = JSON.stringify({ workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
+const flowBody = JSON.stringify({ workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
 const heatExample = JSON.parse(readFileSync(new URL('../../examples/heat-worked-example.json', import.meta.url), 'utf8'));
 /** Seconds of compute in a worker thread (field method, 25-point field sweep). */
-const slowHeatBody = JSON.stringify({ ...heatExample, method: 'field', sensitivity: { points: 25 } });
+const slowHeatBody = JSON.stringify({ ...heatExample, options: { method: 'field', sensitivity: { points: 25 } } });
 
 describe('graceful shutdown', () => {
   it('finishes a request that is in flight when SIGTERM arrives, then exits 0', async () => {
@@ -125,7 +125,7 @@ describe('graceful shutdown', () => {
     // Warm the worker thread so the heavy request below computes at once.
     expect((await request(server.port, { method: 'POST', path: '/v1/heat', body: JSON.stringify(heatExample), agent })).status).toBe(200);
     // About a second of compute (field method without a sweep): SIGTERM arrives while it runs.
-    const inFlight = request(server.port, { method: 'POST', path: '/v1/heat', body: JSON.stringify({ ...heatExample, method: 'field' }), agent });
+    const inFlight = request(server.port, { method: 'POST', path: '/v1/heat', body: JSON.stringify({ ...heatExample, options: { method: 'field' } }), agent });
     await new Promise((r) => setTimeout(r, 300));
     server.child.kill('SIGTERM');
     const answer = await inFlight;

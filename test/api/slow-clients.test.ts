@@ -62,7 +62,7 @@ describe('slow clients', () => {
   });
 
   it('a body sent a byte at a time after complete headers is cut off (OILSKIN_REQUEST_TIMEOUT_MS)', async () => {
-    const body = JSON.stringify({ workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
+    const body = JSON.stringify({ workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } });
     const head = `POST /v1/flow HTTP/1.1\r\nHost: 127.0.0.1\r\nContent-Type: application/json\r\nContent-Length: ${body.length}\r\n\r\n`;
     const result = await trickle(head, body);
     expect(result.cutOff).toBe(true);
@@ -70,7 +70,7 @@ describe('slow clients', () => {
   });
 
   it('the same request sent at full speed succeeds (the limits do not hurt normal clients)', async () => {
-    const res = await app.inject({ method: 'POST', url: '/v1/flow', payload: { workingFluid: { fluid: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } } });
+    const res = await app.inject({ method: 'POST', url: '/v1/flow', payload: { workingFluid: { id: 'water' }, flow: { kind: 'wall-shear', wallShearStress: 1 } } });
     expect(res.statusCode).toBe(200);
   });
 

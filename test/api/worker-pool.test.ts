@@ -23,7 +23,7 @@ const heat = calculationByName('heat')!;
 const flow = calculationByName('flow')!;
 const heatExample = JSON.parse(readFileSync(new URL('../../examples/heat-worked-example.json', import.meta.url), 'utf8'));
 /** Seconds of compute: the field method with a 25-point field sweep of the lubricant conductivity. */
-const slowInput = parseBody(heat, { ...heatExample, method: 'field', sensitivity: { points: 25 } });
+const slowInput = parseBody(heat, { ...heatExample, options: { method: 'field', sensitivity: { points: 25 } } });
 /** About a millisecond of compute. */
 const fastInput = parseBody(flow, flow.example);
 
@@ -244,7 +244,7 @@ describe('over HTTP: a client that disconnects cancels its solve', () => {
     try {
       await app.listen({ port: 0, host: '127.0.0.1' });
       const port = (app.server.address() as { port: number }).port;
-      const body = JSON.stringify({ ...heatExample, method: 'field', sensitivity: { points: 25 } });
+      const body = JSON.stringify({ ...heatExample, options: { method: 'field', sensitivity: { points: 25 } } });
       const req = http.request({ host: '127.0.0.1', port, path: '/v1/heat', method: 'POST', headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } });
       req.on('error', () => {});
       req.end(body);
@@ -252,7 +252,7 @@ describe('over HTTP: a client that disconnects cancels its solve', () => {
       req.destroy();
       while (app.solverPool.stats().running > 0) await new Promise((r) => setTimeout(r, 20));
       expect(app.solverPool.stats()).toEqual({ waiting: 0, running: 0, threadsLost: 1 });
-      const next = await app.inject({ method: 'POST', url: '/v1/heat', payload: { ...heatExample, method: 'closed-form' } });
+      const next = await app.inject({ method: 'POST', url: '/v1/heat', payload: { ...heatExample, options: { method: 'closed-form' } } });
       expect(next.statusCode).toBe(200);
     } finally {
       await app.close();

@@ -10,7 +10,7 @@ import { flowCalculation } from '../../src/api/routes/flow.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const scenario = JSON.parse(
-  JSON.stringify({ workingFluid: { fluid: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' } }),
+  JSON.stringify({ workingFluid: { id: 'water', temperature: '20 degC' }, flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' } }),
 );
 
 describe('CLI', () => {

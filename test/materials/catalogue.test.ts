@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../src/physics/common.js';
+import { DomainError } from '../../src/core/errors.js';
 import {
   FLUIDS,
   PROPERTY_UNITS,
@@ -10,8 +10,8 @@ import {
   resolveFluid,
   waterDensity,
   waterViscosity,
-  type FluidPropertyName,
 } from '../../src/materials/index.js';
+import type { FluidPropertyName } from '../../src/core/fluid.js';
 
 function domainError(run: () => unknown): DomainError {
   try {
@@ -175,8 +175,8 @@ describe('catalogue contents', () => {
   });
 
   it('the Fowkes estimate from the catalogue hexadecane/water values falls near 51 mN/m, below the listed measured 52–54 mN/m (physics design check, from memory)', () => {
-    const water = resolveFluid({ fluid: 'water', temperature: 298.15 });
-    const oil = resolveFluid({ fluid: 'n-hexadecane', temperature: 298.15 });
+    const water = resolveFluid({ id: 'water', temperature: 298.15 });
+    const oil = resolveFluid({ id: 'n-hexadecane', temperature: 298.15 });
     const estimate =
       water.surfaceTension! + oil.surfaceTension! - 2 * Math.sqrt(water.surfaceTensionDispersive! * oil.surfaceTensionDispersive!);
     expect(estimate * 1e3).toBeGreaterThan(49);
@@ -187,10 +187,11 @@ describe('catalogue contents', () => {
 });
 
 describe('catalogueListing', () => {
-  const listing = catalogueListing();
+  const { fluids: listing, references } = catalogueListing();
 
   it('describes every fluid and survives a JSON round trip unchanged', () => {
     expect(listing.map((f) => f.id)).toEqual(fluidIds());
+    expect(JSON.parse(JSON.stringify(references))).toEqual(references);
     expect(JSON.parse(JSON.stringify(listing))).toEqual(listing);
   });
 
@@ -203,8 +204,8 @@ describe('catalogueListing', () => {
         expect(property!.value).toBe(record.at(fluid.referenceTemperature));
         expect(property!.unit).toBe(PROPERTY_UNITS[name as FluidPropertyName]);
         expect(property!.validRange).toEqual(record.validRange);
-        expect(property!.source.key).toBe(record.source.key);
-        expect(property!.source.citation).toBe(record.source.citation);
+        expect(property!.source).toBe(record.source.key);
+        expect(references.find((r) => r.key === property!.source)?.citation).toBe(record.source.citation);
       }
     }
   });
@@ -212,14 +213,14 @@ describe('catalogueListing', () => {
   it('lists water at 20 °C with the IAPWS density 998.21 kg/m³ (task value) and a DOI for its source', () => {
     const water = listing.find((f) => f.id === 'water')!;
     expect(water.properties.density!.value).toBeCloseTo(998.21, 2);
-    expect(water.properties.density!.source.doi).toBe('10.1063/1.3043575');
+    expect(references.find((r) => r.key === water.properties.density!.source)?.doi).toBe('10.1063/1.3043575');
     expect(water.freezingPoint).toBe(273.15);
   });
 });
 
 describe('resolveFluid', () => {
   it('resolves water at 80 °C from IAPWS with origins and references', () => {
-    const state = resolveFluid({ fluid: 'water', temperature: 353.15 });
+    const state = resolveFluid({ id: 'water', temperature: 353.15 });
     expect(state.id).toBe('water');
     expect(state.density).toBeCloseTo(971.8, 1); // task value, IAPWS
     expect(state.viscosity).toBe(waterViscosity(353.15));
@@ -231,31 +232,31 @@ describe('resolveFluid', () => {
   });
 
   it('uses the reference temperature when none is given', () => {
-    const state = resolveFluid({ fluid: 'water' });
+    const state = resolveFluid({ id: 'water' });
     expect(state.temperature).toBe(293.15);
     expect(state.density).toBe(waterDensity(293.15));
     expect(state.warnings).toEqual([]);
   });
 
   it('rejects n-hexadecane below its freezing point (18.2 °C) with a DomainError on the temperature', () => {
-    const error = domainError(() => resolveFluid({ fluid: 'n-hexadecane', temperature: 283.15 }, 'lubricant'));
+    const error = domainError(() => resolveFluid({ id: 'n-hexadecane', temperature: 283.15 }, 'lubricant'));
     expect(error.field).toBe('lubricant.temperature');
     expect(error.message).toBe('n-hexadecane freezes at 18.2 °C; requested 10 °C');
   });
 
   it('rejects water above its normal boiling point and below 0 °C', () => {
-    expect(domainError(() => resolveFluid({ fluid: 'water', temperature: 393.15 })).field).toBe('fluid.temperature');
-    expect(domainError(() => resolveFluid({ fluid: 'water', temperature: 270 })).field).toBe('fluid.temperature');
+    expect(domainError(() => resolveFluid({ id: 'water', temperature: 393.15 })).field).toBe('fluid.temperature');
+    expect(domainError(() => resolveFluid({ id: 'water', temperature: 270 })).field).toBe('fluid.temperature');
   });
 
   it('rejects an unknown id naming the fluid field and listing the known ids', () => {
-    const error = domainError(() => resolveFluid({ fluid: 'unobtainium' }, 'workingFluid'));
-    expect(error.field).toBe('workingFluid.fluid');
+    const error = domainError(() => resolveFluid({ id: 'unobtainium' }, 'workingFluid'));
+    expect(error.field).toBe('workingFluid.id');
     expect(error.message).toContain('n-hexadecane');
   });
 
   it('lets explicit values override the catalogue and records them as input', () => {
-    const state = resolveFluid({ fluid: 'n-decane', density: 735, interfacialTensionWater: 0.05 });
+    const state = resolveFluid({ id: 'n-decane', density: 735, interfacialTensionWater: 0.05 });
     expect(state.density).toBe(735);
     expect(state.origins.density).toBe('input');
     expect(state.interfacialTensionWater).toBe(0.05);
@@ -264,7 +265,7 @@ describe('resolveFluid', () => {
   });
 
   it('adds a value the catalogue lacks when given (perfluorodecalin has no listed conductivity)', () => {
-    const state = resolveFluid({ fluid: 'perfluorodecalin', thermalConductivity: 0.06 });
+    const state = resolveFluid({ id: 'perfluorodecalin', thermalConductivity: 0.06 });
     expect(state.thermalConductivity).toBe(0.06);
     expect(state.origins.thermalConductivity).toBe('input');
   });
@@ -279,19 +280,19 @@ describe('resolveFluid', () => {
   });
 
   it('rejects non-positive or non-finite values, naming the field', () => {
-    expect(domainError(() => resolveFluid({ fluid: 'water', density: -1 })).field).toBe('fluid.density');
-    expect(domainError(() => resolveFluid({ fluid: 'water', viscosity: Number.NaN })).field).toBe('fluid.viscosity');
-    expect(domainError(() => resolveFluid({ fluid: 'water', temperature: Infinity })).field).toBe('fluid.temperature');
-    expect(domainError(() => resolveFluid({ fluid: 'seawater', salinity: -3 })).field).toBe('fluid.salinity');
+    expect(domainError(() => resolveFluid({ id: 'water', density: -1 })).field).toBe('fluid.density');
+    expect(domainError(() => resolveFluid({ id: 'water', viscosity: Number.NaN })).field).toBe('fluid.viscosity');
+    expect(domainError(() => resolveFluid({ id: 'water', temperature: Infinity })).field).toBe('fluid.temperature');
+    expect(domainError(() => resolveFluid({ id: 'seawater', salinity: -3 })).field).toBe('fluid.salinity');
   });
 
   it('rejects a dispersive component larger than the surface tension', () => {
-    const error = domainError(() => resolveFluid({ fluid: 'n-decane', surfaceTensionDispersive: 0.03 }));
+    const error = domainError(() => resolveFluid({ id: 'n-decane', surfaceTensionDispersive: 0.03 }));
     expect(error.field).toBe('fluid.surfaceTensionDispersive');
   });
 
   it('warns (property-extrapolated) inside freezing..boiling but outside a valid range, still giving the value', () => {
-    const state = resolveFluid({ fluid: 'n-decane', temperature: 353.15 });
+    const state = resolveFluid({ id: 'n-decane', temperature: 353.15 });
     expect(state.interfacialTensionWater).toBe(52.0e-3);
     const extrapolated = state.warnings.filter((w) => w.code === 'property-extrapolated');
     expect(extrapolated.map((w) => w.message.split(' ')[0])).toEqual(['interfacialTensionWater']);
@@ -299,25 +300,25 @@ describe('resolveFluid', () => {
   });
 
   it('resolves seawater at the default 35 g/kg and at a given salinity, citing the TEOS-10 salinity scale', () => {
-    const standard = resolveFluid({ fluid: 'seawater', temperature: 293.15 });
+    const standard = resolveFluid({ id: 'seawater', temperature: 293.15 });
     expect(standard.density).toBeCloseTo(1024.64, 1); // TEOS-10 (gsw) at S_A = 35 g/kg
     expect(standard.references.map((r) => r.key)).toContain('teos10-2010');
-    const brackish = resolveFluid({ fluid: 'seawater', temperature: 293.15, salinity: 10 });
+    const brackish = resolveFluid({ id: 'seawater', temperature: 293.15, salinity: 10 });
     expect(brackish.density).toBeLessThan(standard.density);
     expect(brackish.name).toContain('10 g/kg');
     // S = 0 reduces EOS-80 to its pure-water term (SMOW), within 0.01 kg/m³ of IAPWS at 20 °C.
-    expect(Math.abs(resolveFluid({ fluid: 'seawater', temperature: 293.15, salinity: 0 }).density - waterDensity(293.15))).toBeLessThan(0.01);
+    expect(Math.abs(resolveFluid({ id: 'seawater', temperature: 293.15, salinity: 0 }).density - waterDensity(293.15))).toBeLessThan(0.01);
   });
 
   it('lets brine freeze lower: 40 g/kg seawater at −2.1 °C resolves, 35 g/kg at −2.1 °C is frozen', () => {
-    expect(resolveFluid({ fluid: 'seawater', temperature: 271.05, salinity: 40 }).temperature).toBe(271.05);
-    expect(domainError(() => resolveFluid({ fluid: 'seawater', temperature: 271.05 })).field).toBe('fluid.temperature');
+    expect(resolveFluid({ id: 'seawater', temperature: 271.05, salinity: 40 }).temperature).toBe(271.05);
+    expect(domainError(() => resolveFluid({ id: 'seawater', temperature: 271.05 })).field).toBe('fluid.temperature');
   });
 
   it('warns when salinity is outside a correlation range and when it is given for a fluid that ignores it', () => {
-    const hyper = resolveFluid({ fluid: 'seawater', temperature: 300, salinity: 60 });
+    const hyper = resolveFluid({ id: 'seawater', temperature: 300, salinity: 60 });
     expect(hyper.warnings.map((w) => w.code)).toContain('salinity-extrapolated');
-    const water = resolveFluid({ fluid: 'water', salinity: 35 });
+    const water = resolveFluid({ id: 'water', salinity: 35 });
     expect(water.warnings.map((w) => w.code)).toContain('salinity-ignored');
   });
 
@@ -325,7 +326,7 @@ describe('resolveFluid', () => {
     fc.assert(
       fc.property(fc.double({ min: 0, max: 999, noNaN: true }), fc.double({ min: 200, max: 380, noNaN: true }), (salinity, temperature) => {
         try {
-          const state = resolveFluid({ fluid: 'seawater', salinity, temperature });
+          const state = resolveFluid({ id: 'seawater', salinity, temperature });
           const numbers = [state.density, state.viscosity, state.surfaceTension, state.thermalConductivity, state.specificHeat];
           return numbers.every((v) => v === undefined || (Number.isFinite(v) && v > 0));
         } catch (error) {
@@ -342,7 +343,7 @@ describe('resolveFluid', () => {
       const high = fluid.boilingPoint ?? 600;
       fc.assert(
         fc.property(fc.double({ min: low, max: high, noNaN: true }), (temperature) => {
-          const state = resolveFluid({ fluid: fluid.id, temperature });
+          const state = resolveFluid({ id: fluid.id, temperature });
           const numbers = [state.density, state.viscosity, state.surfaceTension, state.thermalConductivity, state.specificHeat];
           return numbers.every((v) => v === undefined || (Number.isFinite(v) && v > 0));
         }),

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../src/physics/common.js';
+import { DomainError } from '../../src/core/errors.js';
 import { catalogueListing, getFluid, resolveFluid } from '../../src/materials/index.js';
 
 const celsius = (t: number) => 273.15 + t;
@@ -64,7 +64,7 @@ describe('silicone oils (polydimethylsiloxane grades)', () => {
   it('resolves at 0, 10 and 60 °C (cold sea water, cooling water) without any extrapolation caution', () => {
     for (const t of [0, 10, 60]) {
       for (const grade of [5, 1000]) {
-        const state = resolveFluid({ fluid: `silicone-oil-${grade}cst`, temperature: celsius(t) });
+        const state = resolveFluid({ id: `silicone-oil-${grade}cst`, temperature: celsius(t) });
         expect(state.warnings).toEqual([]);
         expect(state.specificHeat).toBeGreaterThan(0);
       }
@@ -113,7 +113,7 @@ describe('liquid gallium (conductive lubricant)', () => {
   it('refuses a temperature below its melting point, 29.76 °C (CRC; the ITS-90 gallium point 302.9146 K)', () => {
     let error: unknown;
     try {
-      resolveFluid({ fluid: 'gallium', temperature: celsius(20) }, 'lubricant');
+      resolveFluid({ id: 'gallium', temperature: celsius(20) }, 'lubricant');
     } catch (caught) {
       error = caught;
     }
@@ -144,9 +144,9 @@ describe('liquid gallium (conductive lubricant)', () => {
   });
 
   it('conducts heat more than 100 times better than any oil in the catalogue (its reason to be there)', () => {
-    const k = resolveFluid({ fluid: 'gallium', temperature: celsius(35) }).thermalConductivity!;
+    const k = resolveFluid({ id: 'gallium', temperature: celsius(35) }).thermalConductivity!;
     for (const id of ['n-dodecane', 'silicone-oil-1000cst', 'pfpe-generic']) {
-      const oil = resolveFluid({ fluid: id }).thermalConductivity!;
+      const oil = resolveFluid({ id: id }).thermalConductivity!;
       expect(k / oil).toBeGreaterThan(100);
     }
   });
@@ -167,9 +167,9 @@ describe('liquid gallium (conductive lubricant)', () => {
   });
 
   it('resolves at 30 °C with a caution only for the viscosity, whose correlation starts at 304 K', () => {
-    const state = resolveFluid({ fluid: 'gallium', temperature: celsius(30) });
+    const state = resolveFluid({ id: 'gallium', temperature: celsius(30) });
     expect(state.warnings.map((w) => w.message.split(' ')[0])).toEqual(['viscosity']);
-    expect(resolveFluid({ fluid: 'gallium', temperature: celsius(40) }).warnings).toEqual([]);
+    expect(resolveFluid({ id: 'gallium', temperature: celsius(40) }).warnings).toEqual([]);
   });
 });
 

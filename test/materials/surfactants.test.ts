@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { SURFACTANTS, getSurfactant, resolveSurfactant, surfactantListing } from '../../src/materials/surfactants.js';
-import { DomainError } from '../../src/physics/common.js';
+import { DomainError } from '../../src/core/errors.js';
 
 describe('surfactant catalogue', () => {
   it('SDS air–water constants: Γ_m = 3.9e-6 mol/m², κ_a = 89.5 m³/(mol·s), κ_d = 500 1/s, D = 7e-10 m²/s, n = 2 (Chang & Franses 1995 as used by Landel et al. 2020)', () => {

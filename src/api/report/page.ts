@@ -5,7 +5,8 @@
  * prints on A4. Every string that could come from a user is escaped; the
  * plots are SVG from `renderPlot` and are checked before they are inlined.
  */
-import type { Reference, Warning } from '../../physics/common.js';
+import type { Warning } from '../../core/notes.js';
+import type { Reference } from '../../core/references.js';
 import { escapeHtml } from './escape.js';
 import { FONT_STACK, scopeSvgIds } from './render.js';
 

@@ -11,33 +11,33 @@ export interface HeatPlotInput {
   /** Lubricant thermal conductivities, W/(m·K), increasing. */
   lubricantConductivity: readonly number[];
   /** Nu/Nu_smooth at each conductivity (1 = no change); null where undefined. */
-  heatTransferRatio: readonly (number | null)[];
-  /** Heat conducted from the substrate to the bulk over that of the solid-filled wall, where known. */
-  overallConductanceRatio?: readonly (number | null)[];
+  nusseltRatio: readonly (number | null)[];
+  /** q/q₀: heat delivered at the same temperature difference over that of the solid-filled wall, where known. */
+  heatFluxRatio?: readonly (number | null)[];
   /** The design's lubricant conductivity, W/(m·K). */
   designConductivity?: number;
   /** The solid's conductivity, W/(m·K); dotted line where given. */
   solidConductivity?: number;
   /** Minimum heat-transfer ratio (a requirement); dashed line where given. */
-  minHeatTransferRatio?: number;
+  minNusseltRatio?: number;
 }
 
-const SERIES = { nusselt: 'Nu / Nu smooth', overall: 'overall conductance' } as const;
+const SERIES = { nusselt: 'Nu / Nu smooth', overall: 'heat delivered q/q₀' } as const;
 
 /** Vega-Lite specification of plot (d); see {@link plotHeat}. */
 export function heatSpec(input: HeatPlotInput): TopLevelSpec {
   const k = input.lubricantConductivity;
-  requireSameLength('heatTransferRatio', k, input.heatTransferRatio);
-  if (input.overallConductanceRatio) requireSameLength('overallConductanceRatio', k, input.overallConductanceRatio);
+  requireSameLength('nusseltRatio', k, input.nusseltRatio);
+  if (input.heatFluxRatio) requireSameLength('heatFluxRatio', k, input.heatFluxRatio);
   const series = (name: string, ratios: readonly (number | null)[]) =>
     k.flatMap((conductivity, i) => {
       const r = ratios[i];
       return isDrawableOnLog(conductivity) && isDrawable(r) ? [{ k: conductivity, change: r - 1, series: name }] : [];
     });
-  const rows = [...series(SERIES.nusselt, input.heatTransferRatio), ...(input.overallConductanceRatio ? series(SERIES.overall, input.overallConductanceRatio) : [])];
+  const rows = [...series(SERIES.nusselt, input.nusseltRatio), ...(input.heatFluxRatio ? series(SERIES.overall, input.heatFluxRatio) : [])];
   const x = logPosition('lubricant thermal conductivity (W/(m·K))', [...rows.map((r) => r.k), input.designConductivity, input.solidConductivity]);
   const y: SpecPart = { type: 'quantitative', title: 'heat transfer change', axis: { format: '+.2~%' }, scale: { zero: true } };
-  const names = input.overallConductanceRatio ? [SERIES.nusselt, SERIES.overall] : [SERIES.nusselt];
+  const names = input.heatFluxRatio ? [SERIES.nusselt, SERIES.overall] : [SERIES.nusselt];
   const layers: SpecPart[] = [
     ...referenceLineLayers('y', { value: 0, label: 'no change', dashed: false, colour: '#999999' }),
     {
@@ -50,15 +50,15 @@ export function heatSpec(input: HeatPlotInput): TopLevelSpec {
       },
     },
   ];
-  if (isDrawable(input.minHeatTransferRatio)) {
-    layers.push(...referenceLineLayers('y', { value: input.minHeatTransferRatio - 1, label: `required ≥ ${((input.minHeatTransferRatio - 1) * 100).toFixed(0)} %` }));
+  if (isDrawable(input.minNusseltRatio)) {
+    layers.push(...referenceLineLayers('y', { value: input.minNusseltRatio - 1, label: `required ≥ ${((input.minNusseltRatio - 1) * 100).toFixed(0)} %` }));
   }
   if (isDrawableOnLog(input.solidConductivity)) {
     layers.push(...referenceLineLayers('x', { value: input.solidConductivity, label: 'solid', colour: COLOURS.boundary }));
   }
   const design = input.designConductivity;
   if (isDrawableOnLog(design)) {
-    const ratio = interpolateOnLogAxis(k, input.heatTransferRatio, design);
+    const ratio = interpolateOnLogAxis(k, input.nusseltRatio, design);
     if (ratio === null) {
       layers.push(...referenceLineLayers('x', { value: design, label: 'this design', colour: COLOURS.marker }));
     } else {

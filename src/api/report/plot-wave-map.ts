@@ -4,7 +4,7 @@
  * w⁺ = w u_τ/ν, with the calm–wavy boundary and the design's point.
  */
 import type { TopLevelSpec } from 'vega-lite';
-import type { WaveRegime } from '../../physics/waves.js';
+import type { WaveRegime } from '../../physics/waves/criteria.js';
 import { logPosition, markerLayers, type SpecPart } from './layers.js';
 import { cellEdges, isDrawableOnLog } from './plot-data.js';
 import { COLOURS, PLOT_HEIGHT, PLOT_WIDTH, renderPlot, type RenderOptions } from './render.js';

@@ -4,7 +4,7 @@ import { catalogueListing } from '../../materials/index.js';
 import { surfactantListing } from '../../materials/surfactants.js';
 
 export default async function catalogueRoutes(app: FastifyInstance) {
-  const fluids = { fluids: catalogueListing() };
+  const fluids = catalogueListing();
   app.get('/v1/fluids', async (_request, reply) => {
     reply.header('cache-control', 'public, max-age=3600');
     return fluids;

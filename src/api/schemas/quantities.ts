@@ -294,3 +294,81 @@ export const Salinity = quantity({
   example: 35,
   acceptsUnitString: false,
 });
+
+export const WallInclination = quantity({
+  quantity: 'inclination',
+  siUnit: 'deg',
+  unitLabel: 'degrees',
+  min: 0,
+  minInclusive: true,
+  max: 90,
+  description: 'Inclination of the wall from horizontal in degrees (0 = horizontal, 90 = vertical)',
+  example: 30,
+});
+
+export const SurfaceExcess = quantity({
+  quantity: 'surface excess',
+  siUnit: 'mol/m^2',
+  unitLabel: 'mol/m²',
+  min: 0,
+  minInclusive: false,
+  max: 1e-3,
+  description: 'Maximum surface excess Γ_m of a surfactant at the interface',
+  example: '3.9 umol/m^2',
+});
+
+export const LangmuirConstant = quantity({
+  quantity: 'Langmuir constant',
+  siUnit: 'm^3/mol',
+  unitLabel: 'm³/mol',
+  min: 0,
+  minInclusive: false,
+  max: 1e12,
+  description: 'Langmuir equilibrium constant K = κ_a/κ_d',
+  example: '179 L/mol',
+});
+
+export const AdsorptionRate = quantity({
+  quantity: 'adsorption rate constant',
+  siUnit: 'm^3/(mol*s)',
+  unitLabel: 'm³/(mol·s)',
+  min: 0,
+  minInclusive: false,
+  max: 1e12,
+  description: 'Adsorption rate constant κ_a',
+  example: 89.5,
+});
+
+export const DesorptionRate = quantity({
+  quantity: 'desorption rate constant',
+  siUnit: '1/s',
+  unitLabel: '1/s',
+  min: 0,
+  minInclusive: false,
+  max: 1e12,
+  description: 'Desorption rate constant κ_d',
+  example: 500,
+});
+
+export const Diffusivity = quantity({
+  quantity: 'diffusivity',
+  siUnit: 'm^2/s',
+  unitLabel: 'm²/s',
+  min: 0,
+  minInclusive: false,
+  max: 1e-3,
+  description: 'Molecular diffusivity',
+  example: '7e-10 m^2/s',
+});
+
+export const GibbsPrefactor = quantity({
+  quantity: 'Gibbs prefactor',
+  siUnit: '1',
+  unitLabel: '1',
+  min: 1,
+  minInclusive: true,
+  max: 3,
+  description: 'n in σ = σ0 + nRTΓ_m ln(1 − Γ/Γ_m): 1 nonionic, 2 ionic without added salt',
+  example: 2,
+  acceptsUnitString: false,
+});

@@ -126,14 +126,14 @@ describe('(d) heat-transfer change against lubricant conductivity', () => {
   it('both series drawn with a legend; the design marked at its log position (0.1 on decades 0.01…10 → x = W/3)', async () => {
     const svg = await rendered(plotHeat, {
       lubricantConductivity: [0.01, 0.1, 1, 10],
-      heatTransferRatio: [0.9, 1, 1.2, 1.5],
-      overallConductanceRatio: [0.95, 1, 1.1, 1.2],
+      nusseltRatio: [0.9, 1, 1.2, 1.5],
+      heatFluxRatio: [0.95, 1, 1.1, 1.2],
       designConductivity: 0.1,
       solidConductivity: 1,
     });
     expect(markItems(svg, 'line').map((g) => g.length)).toEqual([1, 1]);
     expect(svg).toContain('Nu / Nu smooth');
-    expect(svg).toContain('overall conductance');
+    expect(svg).toContain('heat delivered q/q₀');
     const symbols = markItems(svg, 'symbol');
     const [x] = translation(symbols[symbols.length - 1][0]);
     expect(x).toBeCloseTo(PLOT_WIDTH / 3, 6);

@@ -43,8 +43,8 @@ export const SMALL_WAVE_MAP: WaveMapPlotInput = {
 /** Invented demo design: dodecane in 30 µm grooves under water in a 10 mm channel at 1 m/s. */
 export const DEMO_DESIGN = {
   texture: { grooveWidth: '30 um', pitch: '60 um', grooveDepth: '15 um' },
-  lubricant: { fluid: 'n-dodecane', temperature: '20 degC' },
-  workingFluid: { fluid: 'water', temperature: '20 degC' },
+  lubricant: { id: 'n-dodecane', temperature: '20 degC' },
+  workingFluid: { id: 'water', temperature: '20 degC' },
   flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
 } as const;
 
@@ -68,28 +68,25 @@ export async function sampleInputs(app: FastifyInstance): Promise<SampleInputs> 
   const [retention, slip, waves, surfactant, heat] = await Promise.all([
     post(app, '/v1/retention', {
       ...DEMO_DESIGN,
+      texture: { ...DEMO_DESIGN.texture, grooveLength: '20 mm' },
       contactAngles: { underWorkingFluid: { advancing: 46, receding: 0 } },
-      grooveLength: '20 mm',
-      duration: '2 h',
+      options: { duration: '2 h' },
     }),
-    post(app, '/v1/slip', { ...DEMO_DESIGN, method: 'closed-form' }),
+    post(app, '/v1/slip', { ...DEMO_DESIGN, options: { method: 'closed-form' } }),
     // The regime map is computed only when asked for.
-    post(app, '/v1/waves', { ...DEMO_DESIGN, map: true }),
+    post(app, '/v1/waves', { ...DEMO_DESIGN, options: { map: true } }),
     // Transverse grooves here: along straight streamwise grooves no surfactant gradient builds up and the curve is flat.
     post(app, '/v1/surfactant', {
       ...DEMO_DESIGN,
       texture: { ...DEMO_DESIGN.texture, flowAngle: 90 },
-      surfactant: { id: 'sds' },
-      bulkConcentration: '0.001 mM',
-      method: 'scaling',
-      slipMethod: 'closed-form',
+      waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.001 mM' },
+      options: { method: 'closed-form', surfactantMethod: 'scaling' },
     }),
     post(app, '/v1/heat', {
       ...DEMO_DESIGN,
       flow: { kind: 'channel', height: '200 um', bulkVelocity: '0.05 m/s' },
       solid: { thermalConductivity: '0.2 W/(m*K)', substrateThickness: '20 um' },
-      method: 'closed-form',
-      sensitivity: { points: 21 },
+      options: { method: 'closed-form', sensitivity: { points: 21 } },
     }),
   ]);
   const timeline = retention.result.timeline as { time: number; retainedFraction: number }[];
@@ -124,9 +121,9 @@ export async function sampleInputs(app: FastifyInstance): Promise<SampleInputs> 
     },
     heat: {
       lubricantConductivity: heat.result.sensitivity.lubricantConductivity,
-      heatTransferRatio: heat.result.sensitivity.heatTransferRatio,
-      overallConductanceRatio: heat.result.sensitivity.overallConductanceRatio,
-      designConductivity: heat.inputs.lubricant.thermalConductivity,
+      nusseltRatio: heat.result.sensitivity.nusseltRatio,
+      heatFluxRatio: heat.result.sensitivity.heatFluxRatio,
+      designConductivity: heat.inputs.lubricant.thermalConductivity.value,
       solidConductivity: 0.2,
     },
     designWindow: {

@@ -1,0 +1,125 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { DomainError } from '../../../src/core/errors.js';
+import {
+  grooveLidVelocityCentre,
+  grooveLidVelocityMean,
+  pressureDrivenGrooveFlux,
+  rectangularDuctFrictionReynolds,
+  shearDrivenGrooveFlux,
+  zeroNetFluxPressureGradient,
+} from '../../../src/physics/groove/groove-duct.js';
+
+interface DuctCase {
+  depthOverWidth: number;
+  shearDrivenFlux: number;
+  shearDrivenFluxErrorEstimate: number;
+  lidVelocityMean: number;
+  lidVelocityMeanErrorEstimate: number;
+  lidVelocityCentre: number;
+  lidVelocityCentreErrorEstimate: number;
+  pressureDrivenFlux: number;
+  pressureDrivenFluxErrorEstimate: number;
+}
+const fixture = JSON.parse(readFileSync(new URL('../../../fixtures/slip/groove_duct.json', import.meta.url), 'utf8')) as {
+  cases: DuctCase[];
+};
+
+/** |actual − expected| within 3× the reference's own extrapolation-error estimate (floor 1e-7 absolute). */
+function expectWithin(actual: number, expected: number, errorEstimate: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(Math.max(3 * errorEstimate, 1e-7));
+}
+
+describe('lid-sheared groove (exact series)', () => {
+  it('d/w = ½ gives mean lid velocity w/4 exactly (Σ_odd tanh(nπ/2)/n³ = π³/32, exact identity)', () => {
+    expect(grooveLidVelocityMean(1, 0.5)).toBeCloseTo(0.25, 14);
+    expect(grooveLidVelocityMean(2e-5, 1e-5)).toBeCloseTo(0.5e-5, 18);
+  });
+  it('shallow limit: mean and centre lid velocity → d (Couette flow u = τy/μ, exact limit)', () => {
+    // Side-wall correction is O(d/w): relative deviation must shrink with d/w.
+    const dev = (d: number) => Math.abs(grooveLidVelocityMean(1, d) / d - 1);
+    expect(dev(1e-3)).toBeLessThan(2e-3);
+    expect(dev(1e-4)).toBeLessThan(2e-4);
+    expect(grooveLidVelocityCentre(1, 1e-4) / 1e-4).toBeCloseTo(1, 7);
+  });
+  it('deep limit: mean → (8/π³)(7ζ(3)/8) w = 0.2713773 w; centre → (4G/π²) w = 0.3712269 w (exact limits; ζ(3), Catalan G)', () => {
+    expect(grooveLidVelocityMean(1, 20)).toBeCloseTo((7 * 1.2020569031595942) / Math.PI ** 3, 12);
+    expect(grooveLidVelocityCentre(1, 20)).toBeCloseTo((4 * 0.915965594177219) / Math.PI ** 2, 12);
+  });
+  it('shear-driven flux: shallow → w d²/2, deep → w³/12 (exact limits)', () => {
+    expect(shearDrivenGrooveFlux(1, 1e-4) / (1e-8 / 2)).toBeCloseTo(1, 3);
+    expect(shearDrivenGrooveFlux(1, 30) * 12).toBeCloseTo(1, 12);
+  });
+  it('matches the scipy finite-difference reference (fixtures/slip/generate_groove_duct.py, Richardson-extrapolated)', () => {
+    for (const c of fixture.cases) {
+      expectWithin(shearDrivenGrooveFlux(1, c.depthOverWidth), c.shearDrivenFlux, c.shearDrivenFluxErrorEstimate);
+      expectWithin(grooveLidVelocityMean(1, c.depthOverWidth), c.lidVelocityMean, c.lidVelocityMeanErrorEstimate);
+      expectWithin(grooveLidVelocityCentre(1, c.depthOverWidth), c.lidVelocityCentre, c.lidVelocityCentreErrorEstimate);
+    }
+  });
+  it('scales with the groove size: Q̂_s ∝ length³, lid velocity ∝ length (dimensional analysis)', () => {
+    expect(shearDrivenGrooveFlux(3e-6, 1.5e-6) / shearDrivenGrooveFlux(1, 0.5)).toBeCloseTo(27e-18, 28);
+    expect(grooveLidVelocityMean(3e-6, 6e-6) / grooveLidVelocityMean(1, 2)).toBeCloseTo(3e-6, 18);
+  });
+});
+
+describe('pressure-driven groove with a stress-free lid', () => {
+  it('matches the scipy finite-difference reference (fixtures/slip/generate_groove_duct.py)', () => {
+    for (const c of fixture.cases) {
+      expectWithin(pressureDrivenGrooveFlux(1, c.depthOverWidth), c.pressureDrivenFlux, c.pressureDrivenFluxErrorEstimate);
+    }
+  });
+  it('the two series expansions agree where they meet (2d = w) and both limits hold: shallow w d³/3, deep d w³/12', () => {
+    const below = pressureDrivenGrooveFlux(1, 0.5 * (1 - 1e-12));
+    const above = pressureDrivenGrooveFlux(1, 0.5 * (1 + 1e-12));
+    expect(Math.abs(above - below) / below).toBeLessThan(1e-10);
+    expect(pressureDrivenGrooveFlux(1, 1e-3) / (1e-9 / 3)).toBeCloseTo(1, 2);
+    expect(pressureDrivenGrooveFlux(1, 1e3) / (1e3 / 12)).toBeCloseTo(1, 3);
+  });
+  it('zero-net-flux gradient G = τQ̂_s/Q̂_p → 3τ/(2d) shallow, τ/d deep (derived limits, module comment)', () => {
+    const d = 1e-4;
+    expect(zeroNetFluxPressureGradient(1, d, 2) * d).toBeCloseTo(3, 3);
+    expect(zeroNetFluxPressureGradient(1, 1e5, 2) * 1e5).toBeCloseTo(2, 4);
+  });
+});
+
+describe('rectangular duct f·Re', () => {
+  // Shah & London (1978), Laminar Flow Forced Convection in Ducts, rectangular-duct table (values from memory).
+  const table: [number, number][] = [
+    [1, 14.227],
+    [0.5, 15.548],
+    [0.25, 18.233],
+    [0.125, 20.585],
+  ];
+  for (const [alpha, fRe] of table) {
+    it(`aspect ${alpha}: f·Re = ${fRe} (Shah & London 1978, from memory)`, () => {
+      expect(rectangularDuctFrictionReynolds(alpha)).toBeCloseTo(fRe, 3);
+    });
+  }
+  it('parallel plates: f·Re → 24 as α → 0 (exact plane Poiseuille flow); α and 1/α are the same duct', () => {
+    expect(rectangularDuctFrictionReynolds(1e-5)).toBeCloseTo(24, 2);
+    expect(rectangularDuctFrictionReynolds(4)).toBe(rectangularDuctFrictionReynolds(0.25));
+  });
+});
+
+describe('impossible input', () => {
+  it('non-positive or non-finite dimensions throw DomainError naming the field', () => {
+    expect(() => shearDrivenGrooveFlux(0, 1)).toThrow(DomainError);
+    expect(() => pressureDrivenGrooveFlux(1, -1)).toThrow(DomainError);
+    expect(() => grooveLidVelocityMean(1, Number.NaN)).toThrow(DomainError);
+    expect(() => rectangularDuctFrictionReynolds(0)).toThrow(DomainError);
+    try {
+      grooveLidVelocityCentre(1, 0);
+    } catch (e) {
+      expect((e as DomainError).field).toBe('grooveDepth');
+    }
+  });
+  it('extreme but meaningful ratios stay finite', () => {
+    for (const d of [1e-9, 1e-6, 1e3, 1e6]) {
+      for (const f of [shearDrivenGrooveFlux, pressureDrivenGrooveFlux, grooveLidVelocityMean, grooveLidVelocityCentre]) {
+        const v = f(1, d);
+        expect(Number.isFinite(v) && v > 0).toBe(true);
+      }
+    }
+  });
+});
