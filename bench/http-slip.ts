@@ -65,9 +65,12 @@ try {
   const quantile = (sorted: number[], q: number): number => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
   const measure = async (path: string) => {
     const times: number[] = [];
-    const instance = autocannon({ url: service.base, connections: 1, amount, requests: requests(path), timeout: 60 });
-    instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => times.push(responseTime));
-    const r = await instance;
+    const r = await new Promise<autocannon.Result>((resolve, reject) => {
+      const instance = autocannon({ url: service.base, connections: 1, amount, requests: requests(path), timeout: 60 }, (error: unknown, result: autocannon.Result) =>
+        error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve(result),
+      );
+      instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => times.push(responseTime));
+    });
     const failed = r.non2xx + r.errors + r.timeouts;
     if (failed > 0) throw new Error(`${path}: ${failed} failed requests`);
     times.sort((a, b) => a - b);

@@ -13,8 +13,8 @@
  *
  * Rows: longitudinal slip length (b_∥, groove cell, field solver
  * solveLongitudinalCell at its default graded grid with Richardson) and thermal
- * slip length (b_t, field solver thermalSlipField at 64 and 128 cells per pitch,
- * first-order Richardson 2b₁₂₈ − b₆₄ since it is first order near the lip).
+ * slip length (b_t, field solver thermalSlipField on its edge-graded mesh at 64 and
+ * 128 cells per pitch, Richardson (4b₁₂₈ − b₆₄)/3 since it is close to second order).
  * Transverse slip length (b_⊥, transverseGrooveSlip): its field values are the
  * committed field-solver reference (fixtures/slip/transverse_field_reference.json,
  * solveTransverseCell on 32 and 64 cells per pitch with Richardson; 17–160 s per
@@ -25,12 +25,12 @@
  */
 import { existsSync, readFileSync } from 'node:fs';
 import os from 'node:os';
-import { solveLongitudinalCell, solveTransverseCell } from '../src/numerics/groove-cell.js';
-import { transverseGrooveSlip } from '../src/physics/groove-cell-transverse.js';
+import { solveLongitudinalCell, solveTransverseCell } from '../src/physics/groove/groove-cell.js';
+import { transverseGrooveSlip } from '../src/physics/groove/groove-cell-transverse.js';
 import transverseReference from '../fixtures/slip/transverse_field_reference.json' with { type: 'json' };
-import { thermalSlipField } from '../src/physics/heat.js';
-import { longitudinalGrooveSlip } from '../src/physics/slip-core/longitudinal.js';
-import { thermalGrooveSlip } from '../src/physics/slip-core/thermal.js';
+import { thermalSlipField } from '../src/physics/heat/conduction-field.js';
+import { longitudinalGrooveSlip } from '../src/physics/groove/groove-cell-longitudinal.js';
+import { thermalGrooveSlip } from '../src/physics/heat/thermal-core.js';
 
 const quick = process.argv.includes('--quick');
 const liveTransverse = process.argv.includes('--live-transverse');
@@ -99,7 +99,7 @@ function thermalCases(): BenchCase[] {
       cases.push({
         label: `φ=${phi} d/w=${aspect} s/P=${s} k=${kw}/${ko}/${ks}`,
         fast: () => thermalGrooveSlip(wall).thermalSlipLength,
-        field: () => 2 * thermalSlipField(wall, 128).thermalSlipLength - thermalSlipField(wall, 64).thermalSlipLength,
+        field: () => (4 * thermalSlipField(wall, 128).thermalSlipLength - thermalSlipField(wall, 64).thermalSlipLength) / 3,
       });
     }
   });

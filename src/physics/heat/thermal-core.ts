@@ -50,9 +50,10 @@ import { extrapolateToInfiniteResolution } from '../../numerics/extrapolation.js
 import { layerModeTransform, twoPhaseLayerModes, type TwoPhaseLayerModes } from '../../numerics/layer-modes.js';
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums, type WindowSums } from '../../numerics/window-fourier.js';
-import { ConvergenceError, DomainError, type Warning } from '../common.js';
-import { type WallCell } from '../heat.js';
-import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import type { Warning } from '../../core/notes.js';
+import { type WallCell } from './conduction-field.js';
+import { grooveGeometry, positiveInput, RangeCautions } from '../groove/core-input.js';
 
 /**
  * The wall cell of the field method (../heat.ts `WallCell`: P, w, d, s, k_w, k_o, k_s in SI), plus the mode

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { thermalSlipField } from '../../../src/physics/heat.js';
-import { longitudinalGrooveSlip } from '../../../src/physics/slip-core/longitudinal.js';
-import { thermalGrooveSlip } from '../../../src/physics/slip-core/thermal.js';
-import { expectDomainError } from './helpers.js';
+import { thermalSlipField } from '../../../src/physics/heat/conduction-field.js';
+import { longitudinalGrooveSlip } from '../../../src/physics/groove/groove-cell-longitudinal.js';
+import { thermalGrooveSlip } from '../../../src/physics/heat/thermal-core.js';
+import { expectDomainError } from '../expect-domain-error.js';
 
 /** Philip (1972) ZAMP 23, 353, conduction analogue (adiabatic grooves over isothermal ridges): b_t = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -70,16 +70,16 @@ describe('thermal slip core: exact limits', () => {
 });
 
 describe('thermal slip core against independent references', () => {
-  it('the finite-volume field solver converges towards it: +2.7 % at 64 cells per pitch, and 2b(128) − b(64) within 0.5 % (k_o = 0.25 k_w, k_s = 40 k_w, w/P = ½, d/w = 1, s = P/2; the field solver is first order here)', () => {
+  it('the finite-volume field solver (edge-graded mesh, close to second order) converges towards it: 0.2–1 % high at 32 cells per pitch, about 3.6 times closer at 64, and the order-2 Richardson value of the two within 5e-4 (k_o = 0.25 k_w, k_s = 40 k_w, w/P = ½, d/w = 1, s = P/2)', () => {
     const P = 20e-6;
     const input = { pitch: P, grooveWidth: P / 2, grooveDepth: P / 2, substrateThickness: P / 2, workingConductivity: 0.6, lubricantConductivity: 0.15, solidConductivity: 24 };
     const core = thermalGrooveSlip(input).thermalSlipLength;
-    const coarse = thermalSlipField(input, 64).thermalSlipLength;
-    const fine = thermalSlipField(input, 128).thermalSlipLength;
-    expect(relative(coarse, core)).toBeGreaterThan(0.02);
-    expect(relative(coarse, core)).toBeLessThan(0.035);
-    expect(relative(fine, core)).toBeLessThan(relative(coarse, core));
-    expect(relative(2 * fine - coarse, core)).toBeLessThan(5e-3);
+    const coarse = thermalSlipField(input, 32).thermalSlipLength;
+    const fine = thermalSlipField(input, 64).thermalSlipLength;
+    expect(relative(coarse, core)).toBeGreaterThan(2e-3);
+    expect(relative(coarse, core)).toBeLessThan(1e-2);
+    expect(relative(coarse, core) / relative(fine, core)).toBeGreaterThan(3);
+    expect(relative((4 * fine - coarse) / 3, core)).toBeLessThan(5e-4);
   });
 
   const freefem = new URL('../../../fixtures/slip-core/thermal.json', import.meta.url);

@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { DomainError } from '../../../src/physics/common.js';
+import { DomainError } from '../../src/core/errors.js';
 
 /** Asserts that `run` throws a DomainError naming `field` (the API maps it to 422 with that path). */
 export function expectDomainError(run: () => unknown, field: string): void {

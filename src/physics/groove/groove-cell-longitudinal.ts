@@ -54,10 +54,11 @@ import { extrapolateToInfiniteResolution } from '../../numerics/extrapolation.js
 import { eulerAlternatingTail } from '../../numerics/series.js';
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums } from '../../numerics/window-fourier.js';
-import { type GrooveCellInput, type GrooveCellResult } from '../../numerics/groove-cell.js';
-import { ConvergenceError, DomainError, type Warning } from '../common.js';
-import { philipSlipLengthLongitudinal } from '../stripe-slip.js';
-import { grooveGeometry, positiveInput, RangeCautions } from './cell-input.js';
+import { type GrooveCellInput, type GrooveCellResult } from './groove-cell.js';
+import { ConvergenceError, DomainError } from '../../core/errors.js';
+import type { Warning } from '../../core/notes.js';
+import { philipSlipLengthLongitudinal } from '../slip/stripe-slip.js';
+import { grooveGeometry, positiveInput, RangeCautions } from './core-input.js';
 
 /**
  * Same geometry and fluids as the field solver's input (../../numerics/groove-cell.ts), plus the mode count

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { solveLongitudinalCell } from '../../../src/numerics/groove-cell.js';
-import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../../../src/physics/groove-duct.js';
-import { longitudinalGrooveSlip } from '../../../src/physics/slip-core/longitudinal.js';
-import { expectDomainError } from './helpers.js';
+import { solveLongitudinalCell } from '../../../src/physics/groove/groove-cell.js';
+import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../../../src/physics/groove/groove-duct.js';
+import { longitudinalGrooveSlip } from '../../../src/physics/groove/groove-cell-longitudinal.js';
+import { expectDomainError } from '../expect-domain-error.js';
 
 /** Philip (1972) ZAMP 23, 353; Lauga & Stone (2003) J. Fluid Mech. 489, 55: b_∥ = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));

@@ -4,7 +4,8 @@
  * the field; meaningful input outside the range where the cores' accuracy was
  * measured (docs/slip-core.md) gets a result and a caution.
  */
-import { DomainError, type Warning } from '../common.js';
+import { DomainError } from '../../core/errors.js';
+import type { Warning } from '../../core/notes.js';
 
 export function positiveInput(value: unknown, field: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value) || !(value > 0)) {
