@@ -119,6 +119,15 @@ export const REFERENCES = bibliography({
   bazantVinogradova2008: {
     citation: 'Bazant, M. Z. & Vinogradova, O. I. (2008). Tensorial hydrodynamic slip. J. Fluid Mech. 613, 125–134 (pages from memory).',
   },
+  kamrinBazantStone2010: {
+    citation:
+      'Kamrin, K., Bazant, M. Z. & Stone, H. A. (2010). Effective slip boundary conditions for arbitrary periodic surfaces: the surface mobility tensor. J. Fluid Mech. 658, 409–437.',
+    doi: '10.1017/S0022112010001801',
+  },
+  schoeneckerHardt2013: {
+    citation:
+      'Schönecker, C. & Hardt, S. (2013). Longitudinal and transversal flow over a cavity containing a second immiscible fluid. J. Fluid Mech. 717, 376–394 (journal details from memory; arXiv 1206.5967).',
+  },
   fukagata2006: {
     citation:
       'Fukagata, K., Kasagi, N. & Koumoutsakos, P. (2006). A theoretical prediction of friction drag reduction in turbulent flow by superhydrophobic surfaces. Phys. Fluids 18, 051703.',
@@ -226,6 +235,10 @@ export const REFERENCES = bibliography({
   wiener1912: {
     citation:
       'Wiener, O. (1912). Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (from memory).',
+  },
+  richardson1911: {
+    citation:
+      'Richardson, L. F. (1911). The approximate arithmetical solution by finite differences of physical problems involving differential equations. Phil. Trans. R. Soc. A 210, 307–357 (from memory).',
   },
   patankar1980: {
     citation: 'Patankar, S. V. (1980). Numerical Heat Transfer and Fluid Flow. Hemisphere, Washington, ch. 4.',

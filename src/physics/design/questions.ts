@@ -201,7 +201,7 @@ export function lubricantRetention(ctx: DesignContext): Answer<Omit<RetentionRes
     const texture = doc.texture;
     if (texture?.grooveLength === undefined && texture?.segmentLength === undefined) ctx.need(undefined, 'texture.grooveLength', 'retention');
     const options = doc.options ?? {};
-    const method = options.method ?? 'closed-form';
+    const method = options.method ?? 'auto';
     const slip = ctx.slip('retention', method);
     notes.cite(...slip.notes.references);
     notes.assume(`Interfacial shear = wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} from the ${slip.result.method} slip solution.`);
@@ -311,7 +311,7 @@ export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
     const options = doc.options ?? {};
     const method = options.method ?? 'auto';
     // The velocity slip feeds the heat model; the field heat method re-solves it on the cross-section.
-    const slip = ctx.slip('heat', method === 'field' ? 'field' : 'closed-form');
+    const slip = ctx.slip('heat', method);
     notes.cite(...slip.notes.references);
     const drag = slip.result.drag;
     const heating = { condition: doc.heating?.condition ?? 'uniform-flux', heatedWalls: doc.heating?.heatedWalls ?? 'both' } as const;

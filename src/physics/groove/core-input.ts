@@ -31,7 +31,7 @@ export class RangeCautions {
   check(value: number, low: number, high: number, what: string): this {
     if (value < low || value > high) {
       this.warnings.push({
-        code: 'slip-core-outside-validated-range',
+        code: 'outside-validated-range',
         severity: 'caution',
         message: `${what} = ${value.toPrecision(3)} is outside ${low}–${high}, where the modal core's accuracy was measured.`,
       });

@@ -137,6 +137,6 @@ describe('longitudinal slip core: impossible and out-of-range input', () => {
   it('outside the validated range: a finite result and a caution', () => {
     const r = longitudinalGrooveSlip({ pitch: 1, grooveWidth: 0.995, grooveDepth: 50, viscosityRatio: 1e6 });
     expect(Number.isFinite(r.slipLength) && r.slipLength > 0).toBe(true);
-    expect(r.warnings.map((w) => w.code)).toContain('slip-core-outside-validated-range');
+    expect(r.warnings.map((w) => w.code)).toContain('outside-validated-range');
   });
 });

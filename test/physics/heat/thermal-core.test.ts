@@ -119,6 +119,6 @@ describe('thermal slip core: impossible and out-of-range input', () => {
   it('conductivity ratios beyond 1e-2–1e2 give a finite result and a caution', () => {
     const r = thermalGrooveSlip(wall(0.5, 1, 0.5, 1e-4, 1e4));
     expect(Number.isFinite(r.thermalSlipLength)).toBe(true);
-    expect(r.warnings.map((w) => w.code)).toContain('slip-core-outside-validated-range');
+    expect(r.warnings.map((w) => w.code)).toContain('outside-validated-range');
   });
 });
