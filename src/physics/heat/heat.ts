@@ -41,6 +41,9 @@ const CLOSED_FORM_MODEL: Record<ThermalSlipClosedForm['model'], ModelId> = {
   'identical-materials': 'heat.thermal-slip-identical-materials',
 };
 
+/** Narrowest groove (w/P) the exact thermal core is run for (its cost grows like (P/w)³). */
+const THERMAL_CORE_LOWEST_FRACTION = 0.02;
+
 /** Largest sensitivity sweep run with the field thermal slip (cost: one conduction solve per point). */
 const FIELD_SWEEP_LIMIT = 25;
 
@@ -235,7 +238,17 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       'caution',
     );
   }
-  const useCore = input.method === 'auto' || input.method === 'exact-core';
+  // The thermal core's layer modes span the period, so its cost grows like (P/w)³: run from w/P = 0.02 (about
+  // 0.1 s there) up; narrower grooves get the closed form with a caution.
+  const coreReaches = texture.grooveWidth / texture.pitch >= THERMAL_CORE_LOWEST_FRACTION;
+  const useCore = (input.method === 'auto' || input.method === 'exact-core') && coreReaches;
+  if ((input.method === 'auto' || input.method === 'exact-core') && !coreReaches) {
+    notes.warn(
+      'exact-core-out-of-reach',
+      `w/P = ${(texture.grooveWidth / texture.pitch).toPrecision(3)} is below ${THERMAL_CORE_LOWEST_FRACTION}, where the exact thermal core is run: the closed-form thermal slip is reported (method 'field' solves the conduction cell).`,
+      'caution',
+    );
+  }
   const useFieldThermalSlip = input.method === 'field';
   const useCrossSection = input.method === 'field' && fieldApplies;
   const fieldThermalSlip = (k: number) => thermalSlipField({ ...wall, lubricantConductivity: k }).thermalSlipLength;

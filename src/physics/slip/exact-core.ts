@@ -27,6 +27,18 @@ export interface ExactGrooveSlip {
   warnings: Warning[];
 }
 
+/**
+ * Interface fractions the cores are run at, beyond the measured range: the longitudinal core's Fourier sums grow
+ * like 1/φ (at w/P = 1e-3 about 20 times its cost at 0.02, a few ms) and thinner ridges than 1e-3 P are beyond its
+ * mode counts. Outside this reach the callers answer with the closed form and a caution.
+ */
+export const EXACT_CORE_REACH = { interfaceFraction: [1e-3, 0.999] } as const;
+
+/** Whether the cores are run for this interface fraction (see {@link EXACT_CORE_REACH}). */
+export function exactCoreReaches(interfaceFraction: number): boolean {
+  return interfaceFraction >= EXACT_CORE_REACH.interfaceFraction[0] && interfaceFraction <= EXACT_CORE_REACH.interfaceFraction[1];
+}
+
 /** Whether a groove cell lies inside the range where both cores' errors were measured. */
 export function insideExactCoreRange(interfaceFraction: number, depthOverWidth: number, viscosityRatio: number): boolean {
   const within = (value: number, [low, high]: readonly [number, number]) => value >= low && value <= high;

@@ -21,7 +21,7 @@ import {
 } from '../groove/groove-cell.js';
 import { planGrooveCellSolve, WorkLimitError, type GrooveCellPlan } from '../groove/solver-budget.js';
 import { closedFormErrorEstimate } from './closed-form-error.js';
-import { exactGrooveSlip, insideExactCoreRange, type ExactGrooveSlip } from './exact-core.js';
+import { EXACT_CORE_REACH, exactCoreReaches, exactGrooveSlip, insideExactCoreRange, type ExactGrooveSlip } from './exact-core.js';
 import { dragChange, type DragChange } from './drag.js';
 import {
   belyaevVinogradovaSlipLengthLongitudinal,
@@ -232,7 +232,15 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   // measured error of the closed form (about 0.2 ms, so it runs under every method inside its range).
   const wantCore = method === 'auto' || method === 'exact-core' || method === 'field' || insideExactCoreRange(phi, d / w, viscosityRatio);
   let core: ExactGrooveSlip | undefined;
-  if (wantCore) {
+  if (wantCore && !exactCoreReaches(phi)) {
+    if (method === 'auto' || method === 'exact-core') {
+      notes.warn(
+        'exact-core-out-of-reach',
+        `w/P = ${phi.toPrecision(3)} is outside ${EXACT_CORE_REACH.interfaceFraction.join('–')}, where the exact slip core is run: the closed form is reported, with its estimated error (method 'field' solves the cell, where its grid allows).`,
+        'caution',
+      );
+    }
+  } else if (wantCore) {
     try {
       core = exactGrooveSlip({ pitch: P, grooveWidth: w, grooveDepth: d, viscosityRatio, appliedShear: flow.wallShearStress, waterViscosity: workingFluid.viscosity });
     } catch (error) {
