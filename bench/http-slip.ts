@@ -42,7 +42,7 @@ const designs = FRACTIONS.flatMap((phi, i) =>
   }),
 );
 
-const service = await startService({ sources: true, env: { OILSKIN_LOG_LEVEL: 'warn' } });
+const service = await startService({ sources: true });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
     service.child.kill();
@@ -62,6 +62,7 @@ try {
   const requests = (path: string) => designs.map((design) => ({ method: 'POST' as const, path, headers: { 'content-type': 'application/json' }, body: JSON.stringify(design) }));
   // autocannon's histogram keeps whole milliseconds; the per-response times it emits are exact, so the
   // quantiles are taken from those.
+  const pooled = { flow: [] as number[], slip: [] as number[] };
   const quantile = (sorted: number[], q: number): number => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
   const measure = async (path: string) => {
     const times: number[] = [];
@@ -74,6 +75,7 @@ try {
     const failed = r.non2xx + r.errors + r.timeouts;
     if (failed > 0) throw new Error(`${path}: ${failed} failed requests`);
     times.sort((a, b) => a - b);
+    (path === '/v1/flow' ? pooled.flow : pooled.slip).push(...times);
     return { p50: quantile(times, 0.5), p90: quantile(times, 0.9), p99: quantile(times, 0.99), mean: times.reduce((a, b) => a + b, 0) / times.length, rps: r.requests.average };
   };
   // Uncounted warm-up of both (JIT, first worker hops).
@@ -96,7 +98,14 @@ try {
     }
     console.log(`round ${round}: median latency ratio slip/flow ${(slip.p50 / flow.p50).toFixed(2)}`);
   }
-  console.log(`median latency ratio slip/flow over the rounds: ${ratios.map((r) => r.toFixed(2)).join(', ')} (load average now ${os.loadavg()[0].toFixed(2)})`);
+  pooled.flow.sort((a, b) => a - b);
+  pooled.slip.sort((a, b) => a - b);
+  const flowMedian = quantile(pooled.flow, 0.5);
+  const slipMedian = quantile(pooled.slip, 0.5);
+  console.log(`per round: ${ratios.map((r) => r.toFixed(2)).join(', ')}`);
+  console.log(
+    `all rounds pooled: /v1/flow median ${flowMedian.toFixed(2)} ms, /v1/slip median ${slipMedian.toFixed(2)} ms, ratio ${(slipMedian / flowMedian).toFixed(2)} (load average now ${os.loadavg()[0].toFixed(2)})`,
+  );
 } finally {
   service.child.kill();
 }

@@ -22,7 +22,7 @@ import { dragChange, type DragChange } from '../slip/drag.js';
 import type { SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
 import type { WavesResult } from '../waves/result.js';
-import { evaluateWaves, waveRoughnessWarning } from '../waves/waves.js';
+import { evaluateWaves, waveRegimeAtDesign, waveRoughnessWarning } from '../waves/waves.js';
 import { evaluateWetting, type WettingResult } from '../wetting/wetting.js';
 import type { DesignContext } from './context.js';
 import type { Question } from './document.js';
@@ -130,11 +130,11 @@ export function slipAndDrag(ctx: DesignContext): Answer<SlipResult> {
     ctx.echo('options', { method });
     const scenario = ctx.scenario('slip', 'optional');
     if (scenario.interfacialTension !== undefined) {
-      // Only the regime is needed: the smallest regime map keeps this cheap.
-      const waves = evaluateWaves({ scenario, slipLengthLongitudinal: slip.result.slipLengthLongitudinal, mapResolution: 2, ...gravityOf(ctx, 'slip') });
-      const warning = waveRoughnessWarning(waves.result.regime);
+      // Only the regime at the design point is needed (no curves, limits or map): a fraction of the waves answer's cost.
+      const regime = waveRegimeAtDesign({ scenario, slipLengthLongitudinal: slip.result.slipLengthLongitudinal, ...gravityOf(ctx, 'slip') });
+      const warning = waveRoughnessWarning(regime);
       if (warning) notes.warn(warning.code, warning.message, warning.severity);
-      notes.assume(`Interface wave regime (see waves): ${waves.result.regime}.`);
+      notes.assume(`Interface wave regime (see waves): ${regime}.`);
     } else {
       notes.warn('wave-regime-unknown', 'No interfacial tension is known for this pair, so the wave regime (which can void the drag reduction) was not checked; give interfacialTension.', 'caution');
     }

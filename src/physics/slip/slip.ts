@@ -19,7 +19,7 @@ import {
   type GrooveCellInput,
   type GrooveCellResult,
 } from '../groove/groove-cell.js';
-import { planGrooveCellSolve, WorkLimitError, type GrooveCellPlan } from '../groove/solver-budget.js';
+import { planGrooveCellSolve } from '../groove/solver-budget.js';
 import { closedFormErrorEstimate } from './closed-form-error.js';
 import { EXACT_CORE_REACH, exactCoreReaches, exactGrooveSlip, insideExactCoreRange, type ExactGrooveSlip } from './exact-core.js';
 import { dragChange, type DragChange } from './drag.js';
