@@ -71,16 +71,20 @@ function longitudinalCases(): BenchCase[] {
   return cases;
 }
 
+/** Conductivity triples (k_w, k_o, k_s) over ratios 1e-2–1e2: metal and oil, near-adiabatic groove, conductive lubricant, insulating solid, poor liquid, nearly equal k_o and k_s, inverted. */
+const CONDUCTIVITY_TRIPLES = [
+  [1, 0.25, 40],
+  [1, 0.01, 100],
+  [1, 100, 1],
+  [1, 1, 0.01],
+  [0.01, 1, 100],
+  [1, 0.3, 0.33],
+  [1, 10, 0.1],
+];
+
 /** 24 thermal cases: w/P, d/w, s/P and conductivity triples (k_w, k_o, k_s) over ratios 1e-2–1e2. */
 function thermalCases(): BenchCase[] {
-  const triples = [
-    [1, 0.25, 40],
-    [1, 0.01, 100],
-    [1, 100, 1],
-    [1, 1, 0.01],
-    [0.01, 1, 100],
-    [1, 0.3, 0.33],
-  ];
+  const triples = CONDUCTIVITY_TRIPLES.slice(0, 6);
   const cases: BenchCase[] = [];
   const geometries = [
     [0.05, 0.5, 0],
@@ -330,14 +334,7 @@ if (thermalReferences) {
 }
 {
   let worst = 0;
-  const triples = [
-    [1, 0.25, 40],
-    [1, 0.01, 100],
-    [1, 100, 1],
-    [1, 1, 0.01],
-    [1, 10, 0.1],
-    [0.01, 1, 100],
-  ];
+  const triples = CONDUCTIVITY_TRIPLES;
   for (const phi of [0.1, 0.3, 0.5, 0.8, 0.95]) {
     for (const aspect of [0.01, 0.3, 3]) {
       for (const s of [0, 0.5]) {
