@@ -112,7 +112,7 @@ function thermalCases(): BenchCase[] {
 
 /**
  * The 49 transverse cases of the committed field-solver reference; the one below 1e-8 P (which the field
- * solver does not resolve, docs/slip-core-transverse.md) is left out of the differences.
+ * solver does not resolve, docs/slip-core.md) is left out of the differences.
  */
 function transverseCases(): BenchCase[] {
   return transverseReference.cases

@@ -31,7 +31,7 @@
  *     recirculating flux = (τ w²/(8 μ_w)) max_y |Σ a_j ψ_j(0, y)| on the groove centre line.
  * N = 0 is Philip's shear-free result, b_⊥ = (P/2π) ln sec(πφ/2) [1, 2], returned in closed form.
  *
- * Accuracy (measured, docs/slip-core-transverse.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
+ * Accuracy (measured, docs/slip-core.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
  * 45 functions); cavity-table mesh ≤ 1.1e-5 (spacing halved); table interpolation ≤ 2e-5 across w/P and
  * ≤ 3e-4 across d/w (held-out nodes, worst near d/w ≈ 1); N → 0 against Philip ≤ 5e-6; against the field
  * solver on the 48 of 49 cases it resolves (fixtures/slip/transverse_field_reference.json): ≤ 0.19 %, and
