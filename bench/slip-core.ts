@@ -23,7 +23,8 @@
  * Two-direction throughput: b_∥ and b_⊥ of every longitudinal case in turn, one
  * core, in process (the figure issue 12 asks for: ≥ 1 000 per second).
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
+import { longitudinalReferences as readLongitudinal, thermalReferences as readThermal } from '../fixtures/slip-core/references.js';
 import os from 'node:os';
 import { solveLongitudinalCell, solveTransverseCell } from '../src/physics/groove/groove-cell.js';
 import { transverseGrooveSlip } from '../src/physics/groove/groove-cell-transverse.js';
@@ -251,30 +252,7 @@ for (const direction of DIRECTIONS) {
 }
 
 // Against the FreeFEM references: largest relative difference per quantity (absolute in units of P for b_t near zero).
-interface LongitudinalReference {
-  fraction: number;
-  depthOverWidth: number;
-  viscosityRatio: number;
-  slipLength: number;
-  interfacialShearRatio: number;
-  meanInterfaceVelocity: number;
-  localSlipAtCentre: number;
-  lubricantFlux: number;
-}
-interface ThermalReference {
-  fraction: number;
-  depthOverWidth: number;
-  substrateOverPitch: number;
-  workingConductivity: number;
-  lubricantConductivity: number;
-  solidConductivity: number;
-  thermalSlipLength: number;
-}
-const reference = <T>(name: string): T[] | undefined => {
-  const url = new URL(`../fixtures/slip-core/${name}.json`, import.meta.url);
-  return existsSync(url) ? (JSON.parse(readFileSync(url, 'utf8')) as { cases: T[] }).cases : undefined;
-};
-const longitudinalReferences = reference<LongitudinalReference>('longitudinal');
+const longitudinalReferences = existsSync(new URL('../fixtures/slip-core/longitudinal.json', import.meta.url)) ? readLongitudinal() : undefined;
 if (longitudinalReferences) {
   const worst = { slip: 0, shear: 0, centre: 0, mean: 0, flux: 0 };
   for (const c of longitudinalReferences) {
@@ -291,7 +269,7 @@ if (longitudinalReferences) {
       `interfacial shear ratio ${worst.shear.toExponential(2)}, centre local slip ${worst.centre.toExponential(2)}, mean local slip ${worst.mean.toExponential(2)}, lubricant flux ${worst.flux.toExponential(2)}`,
   );
 }
-const thermalReferences = reference<ThermalReference>('thermal');
+const thermalReferences = existsSync(new URL('../fixtures/slip-core/thermal.json', import.meta.url)) ? readThermal() : undefined;
 if (thermalReferences) {
   let relative = 0;
   let absolute = 0;

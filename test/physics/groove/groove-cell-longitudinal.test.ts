@@ -4,6 +4,7 @@ import { solveLongitudinalCell } from '../../../src/physics/groove/groove-cell.j
 import { grooveLidVelocityCentre, grooveLidVelocityMean } from '../../../src/physics/groove/groove-duct.js';
 import { longitudinalGrooveSlip } from '../../../src/physics/groove/groove-cell-longitudinal.js';
 import { expectDomainError } from '../expect-domain-error.js';
+import { longitudinalReferences } from '../../../fixtures/slip-core/references.js';
 
 /** Philip (1972) ZAMP 23, 353; Lauga & Stone (2003) J. Fluid Mech. 489, 55: b_∥ = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -77,23 +78,8 @@ describe('longitudinal slip core against independent references', () => {
     }
   });
 
-  const freefem = new URL('../../../fixtures/slip-core/longitudinal.json', import.meta.url);
   it('matches the FreeFEM references (fixtures/slip-core/generate_longitudinal.py) over the range: b within 2e-4, shear ratio and mean local slip within 2e-3, centre local slip and flux within 5e-4', () => {
-    const fixture = JSON.parse(readFileSync(freefem, 'utf8')) as {
-      cases: {
-        fraction: number;
-        depthOverWidth: number;
-        viscosityRatio: number;
-        slipLength: number;
-        slipLengthUncertainty: number;
-        interfacialShearRatio: number;
-        interfacialShearRatioUncertainty: number;
-        localSlipAtCentre: number;
-        localSlipAtCentreUncertainty: number;
-        meanInterfaceVelocity: number;
-        lubricantFlux: number;
-      }[];
-    };
+    const fixture = { cases: longitudinalReferences() };
     expect(fixture.cases.length).toBeGreaterThanOrEqual(40);
     for (const c of fixture.cases) {
       const r = longitudinalGrooveSlip({ pitch: 1, grooveWidth: c.fraction, grooveDepth: c.depthOverWidth * c.fraction, viscosityRatio: c.viscosityRatio });

@@ -1,9 +1,9 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { thermalSlipField } from '../../../src/physics/heat/conduction-field.js';
 import { longitudinalGrooveSlip } from '../../../src/physics/groove/groove-cell-longitudinal.js';
 import { thermalGrooveSlip } from '../../../src/physics/heat/thermal-core.js';
 import { expectDomainError } from '../expect-domain-error.js';
+import { thermalReferences } from '../../../fixtures/slip-core/references.js';
 
 /** Philip (1972) ZAMP 23, 353, conduction analogue (adiabatic grooves over isothermal ridges): b_t = (P/π) ln sec(πφ/2). */
 const philip = (pitch: number, fraction: number): number => (pitch / Math.PI) * Math.log(1 / Math.cos((Math.PI * fraction) / 2));
@@ -82,20 +82,8 @@ describe('thermal slip core against independent references', () => {
     expect(relative((4 * fine - coarse) / 3, core)).toBeLessThan(5e-4);
   });
 
-  const freefem = new URL('../../../fixtures/slip-core/thermal.json', import.meta.url);
   it('matches the FreeFEM references (fixtures/slip-core/generate_thermal.py): 0.3 percent, or 6e-6 P where |b_t| < 2e-3 P (the documented bound)', () => {
-    const fixture = JSON.parse(readFileSync(freefem, 'utf8')) as {
-      cases: {
-        fraction: number;
-        depthOverWidth: number;
-        substrateOverPitch: number;
-        workingConductivity: number;
-        lubricantConductivity: number;
-        solidConductivity: number;
-        thermalSlipLength: number;
-        uncertainty: number;
-      }[];
-    };
+    const fixture = { cases: thermalReferences() };
     expect(fixture.cases.length).toBeGreaterThanOrEqual(20);
     for (const c of fixture.cases) {
       const r = thermalGrooveSlip(wall(c.fraction, c.depthOverWidth, c.substrateOverPitch, c.lubricantConductivity, c.solidConductivity, c.workingConductivity));

@@ -10,37 +10,16 @@ import { evaluateHeat } from '../../../src/physics/heat/heat.js';
 import type { Scenario, Texture } from '../../../src/physics/scenario.js';
 import { evaluateSlip } from '../../../src/physics/slip/slip.js';
 import { philipSlipLengthLongitudinal, philipSlipLengthTransverse } from '../../../src/physics/slip/stripe-slip.js';
+import { longitudinalReferences, thermalReferences } from '../../../fixtures/slip-core/references.js';
 
 const fixture = <T>(path: string): T[] => (JSON.parse(readFileSync(new URL(`../../../fixtures/${path}`, import.meta.url), 'utf8')) as { cases: T[] }).cases;
 
-interface LongitudinalReference {
-  fraction: number;
-  depthOverWidth: number;
-  viscosityRatio: number;
-  slipLength: number;
-  slipLengthUncertainty: number;
-  interfacialShearRatio: number;
-  interfacialShearRatioUncertainty: number;
-  meanInterfaceVelocity: number;
-  localSlipAtCentre: number;
-  localSlipAtCentreUncertainty: number;
-}
 interface TransverseReference {
   interfaceFraction: number;
   depthOverWidth: number;
   viscosityRatio: number;
   extrapolated: { slipLength: number };
   errorEstimate: { slipLength: number };
-}
-interface ThermalReference {
-  fraction: number;
-  depthOverWidth: number;
-  substrateOverPitch: number;
-  workingConductivity: number;
-  lubricantConductivity: number;
-  solidConductivity: number;
-  thermalSlipLength: number;
-  uncertainty: number;
 }
 
 function fluid(id: string, props: Partial<FluidState>): FluidState {
@@ -59,7 +38,7 @@ function scenario(fraction: number, depthOverWidth: number, viscosityRatio: numb
 const relative = (a: number, b: number): number => Math.abs(a / b - 1);
 
 describe('slip auto answers from the exact core (FreeFEM references, fixtures/slip-core/generate_longitudinal.py)', () => {
-  const cases = fixture<LongitudinalReference>('slip-core/longitudinal.json');
+  const cases = longitudinalReferences();
   it('the 40 longitudinal cases: b_∥ within 2e-4, interfacial shear ratio and mean local slip within 2e-3, centre local slip within 5e-4 (the documented bounds), method exact-core', () => {
     expect(cases.length).toBeGreaterThanOrEqual(40);
     for (const c of cases) {
@@ -139,7 +118,7 @@ describe('closed-form and field stay available', () => {
 
 describe('heat auto takes the thermal slip from the exact core (FreeFEM references, fixtures/slip-core/generate_thermal.py)', () => {
   it('the 24 thermal cases through evaluateHeat: b_t within 3e-3, or 6e-6 P where |b_t| < 2e-3 P (the documented bound), method exact-core', () => {
-    const cases = fixture<ThermalReference>('slip-core/thermal.json');
+    const cases = thermalReferences();
     expect(cases.length).toBeGreaterThanOrEqual(20);
     for (const c of cases) {
       const kW = 0.6;
