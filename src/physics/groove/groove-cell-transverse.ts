@@ -68,7 +68,15 @@ import { solveDense } from '../../numerics/linalg.js';
 import { DomainError } from '../../core/errors.js';
 import type { Reference } from '../../core/references.js';
 import type { Warning } from '../../core/notes.js';
-import table from './data/transverse-groove-table.json' with { type: 'json' };
+import { readFileSync } from 'node:fs';
+
+/**
+ * The committed table, read as plain JSON (native parse, some 20 ms). Not a JSON module import: the solver
+ * threads run the sources under tsx, which compiles a JSON module to JavaScript (over a second for these
+ * 1.1 MB, enough to keep a loaded machine's thread from answering within its queue timeout). The build
+ * copies the file beside the compiled module (tsconfig.build.json includes the JSON files under src).
+ */
+const table = JSON.parse(readFileSync(new URL('./data/transverse-groove-table.json', import.meta.url), 'utf8')) as typeof import('./data/transverse-groove-table.json');
 
 export const TRANSVERSE_GROOVE_REFERENCES = {
   philip1972: {
