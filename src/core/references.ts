@@ -243,6 +243,11 @@ export const REFERENCES = bibliography({
       'Schönecker, C. & Hardt, S. (2013). Longitudinal and transverse flow over a cavity containing a second immiscible fluid. J. Fluid Mech. (published online 1 February 2013); arXiv:1206.5967.',
   },
 
+  richardson1911: {
+    citation:
+      'Richardson, L. F. (1911). The approximate arithmetical solution by finite differences of physical problems involving differential equations, with an application to the stresses in a masonry dam. Phil. Trans. R. Soc. Lond. A 210, 307–357.',
+    doi: '10.1098/rsta.1911.0009',
+  },
   patankar1980: {
     citation: 'Patankar, S. V. (1980). Numerical Heat Transfer and Fluid Flow. Hemisphere, Washington, ch. 4.',
   },

@@ -90,3 +90,23 @@ export function compensatedSum(values: ArrayLike<number>): number {
   }
   return sum + c;
 }
+
+/**
+ * Σ_{m ≥ start} (−1)^m t_m for terms t_m that vary smoothly with m, by Euler's
+ * transformation (Abramowitz & Stegun 1964, 3.6.27):
+ * Σ_{k≥0} (−1)^k t_k = Σ_j (−1)^j Δʲt_0 / 2^{j+1}, with `differences` forward
+ * differences taken from t_start … t_start+differences. Needs
+ * t.length > start + differences.
+ */
+export function eulerAlternatingTail(t: ArrayLike<number>, start: number, differences = 8): number {
+  const table = new Float64Array(differences + 1);
+  for (let i = 0; i <= differences; i++) table[i] = t[start + i];
+  let sum = 0;
+  let factor = 0.5;
+  for (let j = 0; j <= differences; j++) {
+    sum += factor * table[0];
+    for (let i = 0; i < differences - j; i++) table[i] = table[i + 1] - table[i];
+    factor *= -0.5;
+  }
+  return start % 2 === 0 ? sum : -sum;
+}

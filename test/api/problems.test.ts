@@ -130,18 +130,18 @@ describe('regression: unbounded work from tiny geometry (the /v1/slip example wi
     expect(problem.errors[0].path).toBe('texture.grooveWidth');
   });
 
-  it('1 nm, 10 nm and 0.1 µm grooves at a 40 µm pitch: a result from the closed form, with the continuum caution below 100 nm and the reason the field solver did not run', async () => {
-    for (const [width, continuum] of [
-      ['1 nm', true],
-      ['10 nm', true],
-      ['0.1 um', false],
+  it('1 nm, 10 nm and 0.1 µm grooves at a 40 µm pitch: a result, with the continuum caution below 100 nm; below w/P = 1e-3 from the closed form (the exact core is not run there, caution), above it from the exact core (outside its measured range, caution)', async () => {
+    for (const [width, continuum, method, caution] of [
+      ['1 nm', true, 'closed-form', 'exact-core-out-of-reach'],
+      ['10 nm', true, 'closed-form', 'exact-core-out-of-reach'],
+      ['0.1 um', false, 'exact-core', 'outside-validated-range'],
     ] as const) {
       const { status, body } = await post('/v1/slip', withGrooveWidth(width));
       expect(status, width).toBe(200);
       const codes = body.warnings?.map((w) => w.code) ?? [];
       expect(codes.includes('continuum-limit'), width).toBe(continuum);
-      expect(codes, width).toContain('field-solver-unavailable');
-      expect(body.result?.method).toBe('closed-form');
+      expect(codes, width).toContain(caution);
+      expect(body.result?.method, width).toBe(method);
     }
   });
 

@@ -198,9 +198,12 @@ export const HeatingSchema = z
 export const OptionsSchema = z
   .strictObject({
     method: z
-      .enum(['auto', 'closed-form', 'field'])
+      .enum(['auto', 'exact-core', 'closed-form', 'field'])
       .optional()
-      .openapi({ description: 'Slip and thermal-slip method. auto (default; retention: closed-form): closed form where its measured error is below 1 %, the groove-cell field solver elsewhere' }),
+      .openapi({
+        description:
+          'Slip and thermal-slip method. auto (default everywhere) = exact-core: the exact flat-interface groove-cell cores at closed-form cost (outside their measured range w/P 0.02–0.98, d/w 0.01–10, N 1e-4–1e4, conductivity ratios 1e-2–1e2, substrate ≤ 2P they still answer, with a caution); closed-form: the textbook estimate, with its error measured against the exact core; field: the finite-volume field solvers (the independent reference; seconds per call)',
+      }),
     surfactantMethod: z.enum(['scaling', 'solver', 'auto']).optional().openapi({ description: 'Surfactant model: scaling theory (Landel et al. 2020), interface solver, or auto (default)' }),
     grooveContent: z
       .enum(['lubricant', 'gas'])

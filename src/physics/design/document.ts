@@ -61,10 +61,10 @@ export interface HeatingSpec {
   heatedWalls?: 'one' | 'both';
 }
 
-export type SlipMethodOption = 'auto' | 'closed-form' | 'field';
+export type SlipMethodOption = 'auto' | 'exact-core' | 'closed-form' | 'field';
 
 export interface DesignOptions {
-  /** Slip (and thermal slip) method: auto, closed-form or field. Default auto; retention closed-form. */
+  /** Slip (and thermal slip) method: auto (= exact-core, the default everywhere), exact-core, closed-form or field. */
   method?: SlipMethodOption;
   /** Surfactant model: scaling theory, interface solver, or auto (default). */
   surfactantMethod?: 'scaling' | 'solver' | 'auto';

@@ -10,6 +10,7 @@ import type { ReferenceKey } from '../../core/references.js';
 import { blasiusSkinFriction, colebrookFrictionFactor, deanSkinFriction, evaluateFlow, laminarChannelSkinFriction, turbulentPlateSkinFriction } from '../flow/flow.js';
 import { solveLongitudinalCell } from '../groove/groove-cell.js';
 import { solveHeatCrossSection, thermalSlipField } from '../heat/conduction-field.js';
+import { thermalGrooveSlip } from '../heat/thermal-core.js';
 import { nusseltUniformFluxPlates, nusseltUniformTemperature } from '../heat/laminar.js';
 import { stripedThermalSlip, thermalSlipLubricantGrooves } from '../heat/thermal-slip.js';
 import { turbulentHeatTransfer } from '../heat/turbulent.js';
@@ -17,6 +18,7 @@ import { dissolutionLifetime } from '../retention/dissolution.js';
 import { lumpedRetainedLength, solveDrainage } from '../retention/drainage.js';
 import { holdLengths } from '../retention/holding.js';
 import { laminarChannelDragReductionBothWalls, laminarPipeDragReduction, turbulentDragChange, virtualOriginShift } from '../slip/drag.js';
+import { exactGrooveSlip } from '../slip/exact-core.js';
 import { belyaevVinogradovaSlipLengthLongitudinal } from '../slip/stripe-slip.js';
 import { cleanTransverseCoefficients, marangoniScaling, philipTransverse } from '../surfactant/scaling.js';
 import { solveLongWaveGroove, solveTransverseInterface } from '../surfactant/solver.js';
@@ -95,6 +97,12 @@ export const MODELS = {
     summary: 'Belyaev–Vinogradova stripes with the lubricant-filled groove’s mean local slip; slip tensor for oblique flow.',
     implementation: belyaevVinogradovaSlipLengthLongitudinal,
     references: ['philip1972', 'laugaStone2003', 'belyaevVinogradova2010', 'asmolovVinogradova2012', 'schoenecker2014', 'kamrinBazantStone2010'],
+  },
+  'slip.groove-cell-exact-core': {
+    summary:
+      'Exact flat-interface groove-cell slip at closed-form cost: modal Galerkin matching extrapolated in the mode count (along the grooves), tabulated water and cavity operators on an h-p graded mouth basis (across them); slip tensor for oblique flow.',
+    implementation: exactGrooveSlip,
+    references: ['philip1972', 'schoeneckerHardt2013', 'schoenecker2014', 'richardson1911', 'kamrinBazantStone2010'],
   },
   'slip.groove-cell-field': {
     summary: 'Exact flat-interface groove-cell field solution (finite volumes, longitudinal and transverse).',
@@ -176,6 +184,11 @@ export const MODELS = {
     summary: 'Lubricant and solid of equal conductivity: no thermal slip.',
     implementation: thermalSlipLubricantGrooves,
     references: [],
+  },
+  'heat.thermal-slip-exact-core': {
+    summary: 'Exact conduction on one texture period (liquid, grooved layer, substrate): layer eigenmodes matched to Fourier series, extrapolated in the mode cut-off.',
+    implementation: thermalGrooveSlip,
+    references: ['philip1972', 'richardson1911'],
   },
   'heat.thermal-slip-field': {
     summary: 'Exact conduction on one texture period of the wall (finite volumes).',

@@ -22,7 +22,7 @@ import { dragChange, type DragChange } from '../slip/drag.js';
 import type { SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
 import type { WavesResult } from '../waves/result.js';
-import { evaluateWaves, waveRoughnessWarning } from '../waves/waves.js';
+import { evaluateWaves, waveRegimeAtDesign, waveRoughnessWarning } from '../waves/waves.js';
 import { evaluateWetting, type WettingResult } from '../wetting/wetting.js';
 import type { DesignContext } from './context.js';
 import type { Question } from './document.js';
@@ -130,11 +130,11 @@ export function slipAndDrag(ctx: DesignContext): Answer<SlipResult> {
     ctx.echo('options', { method });
     const scenario = ctx.scenario('slip', 'optional');
     if (scenario.interfacialTension !== undefined) {
-      // Only the regime is needed: the smallest regime map keeps this cheap.
-      const waves = evaluateWaves({ scenario, slipLengthLongitudinal: slip.result.slipLengthLongitudinal, mapResolution: 2, ...gravityOf(ctx, 'slip') });
-      const warning = waveRoughnessWarning(waves.result.regime);
+      // Only the regime at the design point is needed (no curves, limits or map): a fraction of the waves answer's cost.
+      const regime = waveRegimeAtDesign({ scenario, slipLengthLongitudinal: slip.result.slipLengthLongitudinal, ...gravityOf(ctx, 'slip') });
+      const warning = waveRoughnessWarning(regime);
       if (warning) notes.warn(warning.code, warning.message, warning.severity);
-      notes.assume(`Interface wave regime (see waves): ${waves.result.regime}.`);
+      notes.assume(`Interface wave regime (see waves): ${regime}.`);
     } else {
       notes.warn('wave-regime-unknown', 'No interfacial tension is known for this pair, so the wave regime (which can void the drag reduction) was not checked; give interfacialTension.', 'caution');
     }
@@ -201,7 +201,7 @@ export function lubricantRetention(ctx: DesignContext): Answer<Omit<RetentionRes
     const texture = doc.texture;
     if (texture?.grooveLength === undefined && texture?.segmentLength === undefined) ctx.need(undefined, 'texture.grooveLength', 'retention');
     const options = doc.options ?? {};
-    const method = options.method ?? 'closed-form';
+    const method = options.method ?? 'auto';
     const slip = ctx.slip('retention', method);
     notes.cite(...slip.notes.references);
     notes.assume(`Interfacial shear = wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} from the ${slip.result.method} slip solution.`);
@@ -311,7 +311,7 @@ export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
     const options = doc.options ?? {};
     const method = options.method ?? 'auto';
     // The velocity slip feeds the heat model; the field heat method re-solves it on the cross-section.
-    const slip = ctx.slip('heat', method === 'field' ? 'field' : 'closed-form');
+    const slip = ctx.slip('heat', method);
     notes.cite(...slip.notes.references);
     const drag = slip.result.drag;
     const heating = { condition: doc.heating?.condition ?? 'uniform-flux', heatedWalls: doc.heating?.heatedWalls ?? 'both' } as const;

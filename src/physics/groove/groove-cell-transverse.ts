@@ -31,7 +31,7 @@
  *     recirculating flux = (τ w²/(8 μ_w)) max_y |Σ a_j ψ_j(0, y)| on the groove centre line.
  * N = 0 is Philip's shear-free result, b_⊥ = (P/2π) ln sec(πφ/2) [1, 2], returned in closed form.
  *
- * Accuracy (measured, docs/slip-core-transverse.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
+ * Accuracy (measured, docs/slip-core.md), relative in b_⊥: basis truncation ≤ 4e-6 (32 against
  * 45 functions); cavity-table mesh ≤ 1.1e-5 (spacing halved); table interpolation ≤ 2e-5 across w/P and
  * ≤ 3e-4 across d/w (held-out nodes, worst near d/w ≈ 1); N → 0 against Philip ≤ 5e-6; against the field
  * solver on the 48 of 49 cases it resolves (fixtures/slip/transverse_field_reference.json): ≤ 0.19 %, and
@@ -68,7 +68,15 @@ import { applyStencil, maxAbsChebyshevLobatto, uniformCubicStencil } from '../..
 import { solveDense } from '../../numerics/linalg.js';
 import { DomainError } from '../../core/errors.js';
 import type { Warning } from '../../core/notes.js';
-import table from './data/transverse-groove-table.json' with { type: 'json' };
+import { readFileSync } from 'node:fs';
+
+/**
+ * The committed table, read as plain JSON (native parse, some 20 ms). Not a JSON module import: the solver
+ * threads run the sources under tsx, which compiles a JSON module to JavaScript (over a second for these
+ * 1.1 MB, enough to keep a loaded machine's thread from answering within its queue timeout). The build
+ * copies the file beside the compiled module (tsconfig.build.json includes the JSON files under src).
+ */
+const table = JSON.parse(readFileSync(new URL('./data/transverse-groove-table.json', import.meta.url), 'utf8')) as typeof import('./data/transverse-groove-table.json');
 
 /**
  * The geometry and fluids of the groove cell, named and defaulted as for the field solver

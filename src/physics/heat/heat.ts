@@ -16,6 +16,7 @@
  * diameter D_h = 2H; pipe diameter D = 2R.
  *
  * The pieces, one file each: ./thermal-slip.ts (closed-form thermal slip),
+ * ./thermal-core.ts (exact thermal slip at closed-form cost, the default),
  * ./laminar.ts (laminar Nusselt numbers with slip), ./turbulent.ts (turbulent
  * correlations and the log-law estimate), ./conduction-field.ts (conduction
  * cell and cross-section field solution), ./ducts.ts (rectangular-duct
@@ -27,6 +28,7 @@ import type { SourcedNumber } from '../../core/values.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import { solveHeatCrossSection, thermalSlipField, type LubricantMotion, type WallCell } from './conduction-field.js';
+import { thermalGrooveSlip } from './thermal-core.js';
 import { laminarFrictionRatio, laminarNusselt, type LaminarConfiguration } from './laminar.js';
 import { conductivitySweep, type HeatSensitivity } from './sensitivity.js';
 import { thermalSlipLubricantGrooves, type ThermalSlipClosedForm } from './thermal-slip.js';
@@ -39,11 +41,19 @@ const CLOSED_FORM_MODEL: Record<ThermalSlipClosedForm['model'], ModelId> = {
   'identical-materials': 'heat.thermal-slip-identical-materials',
 };
 
+/** Narrowest groove (w/P) the exact thermal core is run for (its cost grows like (P/w)³). */
+const THERMAL_CORE_LOWEST_FRACTION = 0.02;
+
 /** Largest sensitivity sweep run with the field thermal slip (cost: one conduction solve per point). */
 const FIELD_SWEEP_LIMIT = 25;
 
 export type HeatingCondition = 'uniform-flux' | 'uniform-temperature';
-export type HeatMethod = 'auto' | 'closed-form' | 'field';
+/**
+ * 'auto' (default) and 'exact-core': thermal slip from the exact core (./thermal-core.ts) with the closed-form or
+ * eigenproblem Nu; 'closed-form': the textbook thermal slip; 'field': the cross-section field solution where it
+ * applies, else the conduction-cell field solver's thermal slip (the independent references).
+ */
+export type HeatMethod = 'auto' | 'exact-core' | 'closed-form' | 'field';
 
 export interface HeatInput {
   /** Fluids must carry thermalConductivity and specificHeat. Channel or pipe flow. */
@@ -100,10 +110,11 @@ export interface HeatResult {
   /** Fanning f·Re on D_h (laminar), else null. */
   frictionFactorReynolds: number | null;
   /**
-   * 'field': cross-section solution; 'field-thermal-slip': conduction-cell b_t with the closed-form
+   * 'exact-core': b_t from the exact thermal core with the closed-form or eigenproblem Nu (the default);
+   * 'field': cross-section solution; 'field-thermal-slip': conduction-cell field b_t with the closed-form
    * or eigenproblem Nu (pipe, uniform temperature, oblique grooves or turbulent flow); 'closed-form'.
    */
-  method: 'closed-form' | 'field' | 'field-thermal-slip';
+  method: 'exact-core' | 'closed-form' | 'field' | 'field-thermal-slip';
   /** (Nu_closed − Nu_field)/Nu_field, measured where the cross-section field method ran; null otherwise. */
   closedFormError: { nusselt: SourcedNumber<'measured'> } | null;
   regime: 'laminar' | 'turbulent';
@@ -143,8 +154,11 @@ function fluidProperty(value: number | undefined, field: string): number {
  * low-confidence log-law estimate ({@link turbulentHeatTransfer}).
  * The overall conductance ratio adds the wall's own resistance (s + d)/k_s:
  * 1/U = (s + d)/k_s + D_h/(k_w Nu) (the solid-filled reference with Nu_smooth).
- * `auto` runs the field method wherever it applies (and reports the closed form's
- * error against it), else the closed forms with the conduction-cell b_t.
+ * `auto` (= `exact-core`) takes b_t from the exact thermal core (docs/slip-core.md:
+ * within 3e-3 over the measured range, 0.4 ms typical, up to 90 ms at w/P = 0.02;
+ * outside that range it still answers, with a caution); `field` runs the
+ * cross-section field method wherever it applies (and reports the closed form's
+ * error against it), else the closed forms with the conduction-cell field b_t.
  * Throws DomainError for missing or non-physical properties and geometry
  * (field named), and for flows other than channel or pipe.
  */
@@ -224,14 +238,34 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       'caution',
     );
   }
-  const useFieldThermalSlip = input.method !== 'closed-form';
-  const useCrossSection = input.method !== 'closed-form' && fieldApplies;
-  const fieldThermalSlip = (k: number) => thermalSlipField({ ...wall, lubricantConductivity: k }).thermalSlipLength;
-  const thermalSlip = useFieldThermalSlip ? fieldThermalSlip(kO) : closed.thermalSlipLength;
-  if (useFieldThermalSlip) notes.cite(REFERENCES.patankar1980).model('heat.thermal-slip-field');
-  else if (closed.estimate) {
-    notes.warn('thermal-slip-estimate', 'The closed-form thermal slip is exact only for a solid much more conductive than both liquids; run method "field" for the exact value.', 'caution');
+  // The thermal core's layer modes span the period, so its cost grows like (P/w)³: run from w/P = 0.02 (about
+  // 0.1 s there) up; narrower grooves get the closed form with a caution.
+  const coreReaches = texture.grooveWidth / texture.pitch >= THERMAL_CORE_LOWEST_FRACTION;
+  const useCore = (input.method === 'auto' || input.method === 'exact-core') && coreReaches;
+  if ((input.method === 'auto' || input.method === 'exact-core') && !coreReaches) {
+    notes.warn(
+      'exact-core-out-of-reach',
+      `w/P = ${(texture.grooveWidth / texture.pitch).toPrecision(3)} is below ${THERMAL_CORE_LOWEST_FRACTION}, where the exact thermal core is run: the closed-form thermal slip is reported (method 'field' solves the conduction cell).`,
+      'caution',
+    );
   }
+  const useFieldThermalSlip = input.method === 'field';
+  const useCrossSection = input.method === 'field' && fieldApplies;
+  const fieldThermalSlip = (k: number) => thermalSlipField({ ...wall, lubricantConductivity: k }).thermalSlipLength;
+  const coreThermalSlip = (k: number) => thermalGrooveSlip({ ...wall, lubricantConductivity: k });
+  let thermalSlip = closed.thermalSlipLength;
+  if (useCore) {
+    const core = coreThermalSlip(kO);
+    thermalSlip = core.thermalSlipLength;
+    notes.model('heat.thermal-slip-exact-core').cite(REFERENCES.richardson1911);
+    for (const caution of core.warnings) notes.warn(caution.code, caution.message, caution.severity);
+  } else if (useFieldThermalSlip) {
+    thermalSlip = fieldThermalSlip(kO);
+    notes.cite(REFERENCES.patankar1980).model('heat.thermal-slip-field');
+  } else if (closed.estimate) {
+    notes.warn('thermal-slip-estimate', 'The closed-form thermal slip is exact only for a solid much more conductive than both liquids; the default method gives the exact value.', 'caution');
+  }
+  const thermalSlipMethod: HeatResult['method'] = useCore ? 'exact-core' : useFieldThermalSlip ? 'field-thermal-slip' : 'closed-form';
 
   const wallResistance = (solid.substrateThickness + texture.grooveDepth) / kS;
   const Dh = config.hydraulicDiameter;
@@ -276,7 +310,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       heatFluxRatio: (wallResistance + Dh / (kW * smooth)) / ownResistance,
       frictionRatio: estimate.frictionRatio,
       frictionFactorReynolds: null,
-      method: useFieldThermalSlip ? 'field-thermal-slip' : 'closed-form',
+      method: thermalSlipMethod,
       closedFormError: null,
       regime: 'turbulent',
       confidence: 'low',
@@ -332,7 +366,7 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
         heatFluxRatio: overallFrom(nusseltSlip, thermalSlip, smooth),
         frictionRatio,
         frictionFactorReynolds: (config.pipe ? 16 : 24) * frictionRatio, // Fanning f·Re: 16 tube, 24 plates (Shah & London 1978)
-        method: useFieldThermalSlip ? 'field-thermal-slip' : 'closed-form',
+        method: thermalSlipMethod,
         closedFormError: null,
         regime: 'laminar',
         confidence: 'normal',
@@ -374,7 +408,8 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
   }
 
   if (input.sensitivity !== undefined) {
-    // Each field point is one conduction-cell solve (~0.1 s); long sweeps fall back to the closed form.
+    // Each field point is one conduction-cell solve (~0.1–0.5 s): long field sweeps fall back to the closed form.
+    // The exact core costs about 0.4 ms a point (up to 90 ms for the narrowest grooves), so it sweeps every point.
     const sweepField = useFieldThermalSlip && input.sensitivity.points <= FIELD_SWEEP_LIMIT;
     if (useFieldThermalSlip && !sweepField) {
       notes.warn('sensitivity-closed-form', `More than ${FIELD_SWEEP_LIMIT} sweep points: the sweep uses the closed-form thermal slip.`, 'info');
@@ -404,9 +439,9 @@ export function evaluateHeat(input: HeatInput): Outcome<HeatResult> {
       points: input.sensitivity.points,
       low: 0.1 * Math.min(kW, kO, kS),
       high: 10 * Math.max(kW, kO, kS),
-      thermalSlip: (k) => (sweepField ? fieldThermalSlip(k) : closedForm(k).thermalSlipLength),
+      thermalSlip: (k) => (useCore ? coreThermalSlip(k).thermalSlipLength : sweepField ? fieldThermalSlip(k) : closedForm(k).thermalSlipLength),
       ratiosAt,
-      thermalSlipMethod: sweepField ? 'field' : 'closed-form',
+      thermalSlipMethod: useCore ? 'exact-core' : sweepField ? 'field' : 'closed-form',
     });
     if (result.sensitivity.bestLubricantConductivity === result.sensitivity.lubricantConductivity[input.sensitivity.points - 1]) {
       notes.warn('sensitivity-at-range-edge', 'Heat transfer keeps rising with lubricant conductivity across the sweep: the best value is its upper end.', 'info');

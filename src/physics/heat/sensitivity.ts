@@ -18,7 +18,7 @@ export interface HeatSensitivity {
   bestLubricantConductivity: number;
   bestHeatFluxRatio: number;
   /** Which b_t model the sweep used. */
-  thermalSlipMethod: 'closed-form' | 'field';
+  thermalSlipMethod: 'exact-core' | 'closed-form' | 'field';
 }
 
 export interface SweepInput {
@@ -31,7 +31,7 @@ export interface SweepInput {
   thermalSlip: (conductivity: number) => number;
   /** Nu/Nu₀ and q/q₀ at a thermal slip (null where undefined). */
   ratiosAt: (thermalSlipLength: number) => { nusseltRatio: number | null; heatFluxRatio: number | null };
-  thermalSlipMethod: 'closed-form' | 'field';
+  thermalSlipMethod: 'exact-core' | 'closed-form' | 'field';
 }
 
 /** The sweep; DomainError naming options.sensitivity.points for a bad count or when no point is finite. */

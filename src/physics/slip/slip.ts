@@ -1,6 +1,7 @@
 /**
  * Slip and drag change of a liquid-infused grooved wall: effective slip lengths
- * along and across the grooves (closed forms or the groove-cell field solver),
+ * along and across the grooves (the exact fast cores by default, the textbook
+ * closed forms or the groove-cell field solver on request),
  * the local slip of the lubricant-filled grooves, the interfacial shear that
  * drives the lubricant, slip in wall units and the drag change of the flow.
  * Pure function of a resolved SI {@link Scenario}; no HTTP, no logging.
@@ -18,8 +19,9 @@ import {
   type GrooveCellInput,
   type GrooveCellResult,
 } from '../groove/groove-cell.js';
-import { planGrooveCellSolve, WorkLimitError, type GrooveCellPlan } from '../groove/solver-budget.js';
+import { planGrooveCellSolve } from '../groove/solver-budget.js';
 import { closedFormErrorEstimate } from './closed-form-error.js';
+import { EXACT_CORE_REACH, exactCoreReaches, exactGrooveSlip, insideExactCoreRange, type ExactGrooveSlip } from './exact-core.js';
 import { dragChange, type DragChange } from './drag.js';
 import {
   belyaevVinogradovaSlipLengthLongitudinal,
@@ -30,7 +32,11 @@ import {
   type GrooveLocalSlip,
 } from './stripe-slip.js';
 
-export type SlipMethod = 'auto' | 'closed-form' | 'field';
+/**
+ * 'auto' (default) and 'exact-core': the exact fast cores (./exact-core.ts); 'closed-form': the textbook
+ * estimate; 'field': the groove-cell finite-volume solver (the independent reference, seconds per call).
+ */
+export type SlipMethod = 'auto' | 'exact-core' | 'closed-form' | 'field';
 
 export interface SlipInput {
   scenario: Scenario;
@@ -69,9 +75,9 @@ export interface SlipResult {
   localSlipLength: GrooveLocalSlip;
   /**
    * Mean interfacial shear along the grooves over the wall shear applied to the
-   * textured wall, for the mean flow at angle θ: (τ_i/τ)_∥ |cos θ|. From the field
-   * solver when it ran, else from the closed-form local-slip model
-   * τ_i/τ = b_∥/(φ b̄_s) (./stripe-slip.ts). The retention model uses it.
+   * textured wall, for the mean flow at angle θ: (τ_i/τ)_∥ |cos θ|. From the exact
+   * core or the field solver, whichever answered; under 'closed-form' from the
+   * local-slip model τ_i/τ = b_∥/(φ b̄_s) (./stripe-slip.ts). The retention model uses it.
    */
   interfacialShearRatio: number;
   /** The same ratio for flow exactly along the grooves (θ = 0). */
@@ -81,11 +87,15 @@ export interface SlipResult {
   /** Mean lubricant velocity at the interface for longitudinal shear times w over ν of the working liquid. */
   textureReynoldsNumber: number;
   drag: DragChange;
-  /** Method used: 'field' where the groove-cell solver ran for at least one direction. */
-  method: 'closed-form' | 'field';
+  /**
+   * Method that answered: 'exact-core' (the fast exact cores), 'field' where the groove-cell solver ran for at
+   * least one direction, else 'closed-form'.
+   */
+  method: 'exact-core' | 'closed-form' | 'field';
   /**
    * Relative error |b_closed − b_exact|/b_exact of the closed form for each slip length:
-   * source 'measured' where the field solver ran for that direction, else 'error-map'.
+   * source 'measured' against the exact core or the field solver (whichever is the exact value here; under
+   * 'closed-form' the exact core is run beside it when the cell is inside its measured range), else 'error-map'.
    */
   closedFormError: {
     slipLengthLongitudinal: SourcedNumber<ClosedFormErrorSource>;
@@ -100,7 +110,8 @@ const PITCH_PLUS_LIMIT = 25;
 /** Stokes assumption inside the texture. */
 const TEXTURE_REYNOLDS_LIMIT = 1;
 
-const AUTO_ERROR_LIMIT = 0.01;
+/** Closed-form error above which a 'closed-form' answer carries a caution. */
+const CLOSED_FORM_CAUTION = 0.01;
 
 interface FieldRun {
   longitudinal?: GrooveCellResult;
@@ -110,23 +121,15 @@ interface FieldRun {
 }
 
 /**
- * Both groove-cell solves (src/physics/groove/groove-cell.ts). Non-convergence maps to
- * ConvergenceError, impossible geometry to DomainError; any other failure of one
- * direction is recorded so that direction falls back to the closed form with a warning.
+ * Both groove-cell solves (src/physics/groove/groove-cell.ts), asked for explicitly. Non-convergence maps to
+ * ConvergenceError, impossible geometry to DomainError, a geometry beyond the work bound
+ * (src/physics/groove/solver-budget.ts) to its 422 naming the field and the limit; any other failure of one
+ * direction is recorded so that direction falls back to the exact core with a warning.
  */
-function runFieldSolver(input: GrooveCellInput, explicit: boolean): FieldRun {
+function runFieldSolver(input: GrooveCellInput): FieldRun {
   const start = performance.now();
   const run: FieldRun = { failures: [], wallTimeMs: 0 };
-  // Work bound before any solve (src/physics/groove/solver-budget.ts): asked for explicitly, a geometry beyond it is
-  // a 422 naming the field and the limit; under 'auto' the closed form stands in, with a warning.
-  let plan: GrooveCellPlan;
-  try {
-    plan = planGrooveCellSolve(input);
-  } catch (error) {
-    if (explicit || !(error instanceof WorkLimitError)) throw error;
-    run.failures.push(error.message);
-    return run;
-  }
+  const plan = planGrooveCellSolve(input);
   const bounded = { ...input, grooveDepth: plan.solvedDepth };
   for (const direction of ['longitudinal', 'transverse'] as const) {
     const solve = direction === 'longitudinal' ? solveLongitudinalCell : solveTransverseCell;
@@ -179,10 +182,11 @@ function validate(scenario: Scenario): void {
  * (transverse through the Asmolov–Vinogradova relation); slip tensor for the flow
  * angle. Field: the groove-cell solvers (src/physics/groove/groove-cell.ts), exact for a
  * flat interface; about 0.05–0.3 s along and 0.5–2 s across the grooves on the
- * default grid (more for extreme geometry), so the API should run `field`/`auto`
- * in a worker thread. `auto` uses the closed form only where the measured error
- * map (closedFormErrorEstimate) puts both directions below 1 %, in practice
- * N ≲ 0.01 (gas-like lubricants). Drag: laminar fixed-flow-rate formulas for channels and pipes;
+ * default grid (more for extreme geometry), so the API runs `field` in a worker
+ * thread. Exact core (`auto`, `exact-core`): ./exact-core.ts, exact to the bounds
+ * of docs/slip-core.md at about 0.2 ms per cell; outside its measured range it
+ * still answers, with a caution (the field solver is no better there and its work
+ * bound refuses much of it). Drag: laminar fixed-flow-rate formulas for channels and pipes;
  * turbulent virtual-origin shift with ℓ_x⁺ the slip along the mean flow and ℓ_z⁺
  * the spanwise slip, converted to DR at fixed bulk Reynolds number in the reduced
  * wall units (./drag.ts).
@@ -193,7 +197,7 @@ function validate(scenario: Scenario): void {
  */
 export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const { scenario, method } = input;
-  if (method !== 'auto' && method !== 'closed-form' && method !== 'field') {
+  if (method !== 'auto' && method !== 'exact-core' && method !== 'closed-form' && method !== 'field') {
     throw new DomainError(`unknown method '${String(method)}'`, { field: 'method' });
   }
   validate(scenario);
@@ -224,10 +228,28 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
   const closedTransverse = belyaevVinogradovaSlipLengthTransverse(P, w, local.transverseMean);
   const estimate = closedFormErrorEstimate(phi, d / w, viscosityRatio);
 
-  const wantField =
-    method === 'field' || (method === 'auto' && Math.max(estimate.longitudinal, estimate.transverse) >= AUTO_ERROR_LIMIT);
+  // The exact core: the answer under auto/exact-core, the stand-in where a field solve fails, and the
+  // measured error of the closed form (about 0.2 ms, so it runs under every method inside its range).
+  const wantCore = method === 'auto' || method === 'exact-core' || method === 'field' || insideExactCoreRange(phi, d / w, viscosityRatio);
+  let core: ExactGrooveSlip | undefined;
+  if (wantCore && !exactCoreReaches(phi)) {
+    if (method === 'auto' || method === 'exact-core') {
+      notes.warn(
+        'exact-core-out-of-reach',
+        `w/P = ${phi.toPrecision(3)} is outside ${EXACT_CORE_REACH.interfaceFraction.join('–')}, where the exact slip core is run: the closed form is reported, with its estimated error (method 'field' solves the cell, where its grid allows).`,
+        'caution',
+      );
+    }
+  } else if (wantCore) {
+    try {
+      core = exactGrooveSlip({ pitch: P, grooveWidth: w, grooveDepth: d, viscosityRatio, appliedShear: flow.wallShearStress, waterViscosity: workingFluid.viscosity });
+    } catch (error) {
+      if (!(error instanceof ConvergenceError)) throw error;
+      notes.warn('exact-core-unavailable', `The exact slip core did not converge (${error.message}); the closed form is reported, with its estimated error.`, 'warning');
+    }
+  }
   let field: FieldRun | undefined;
-  if (wantField) {
+  if (method === 'field') {
     field = runFieldSolver({
       pitch: P,
       grooveWidth: w,
@@ -238,39 +260,49 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
       cellsPerPitch: input.grid?.cellsPerPitch,
       maxCells: input.grid?.maxCells,
       domainHeight: input.grid?.domainHeight,
-    }, method === 'field');
+    });
     if (field.failures.length > 0) {
       notes.warn(
         'field-solver-unavailable',
-        `The groove-cell field solver could not run (${field.failures.join('; ')}); the closed form is reported for that direction, with its estimated error.`,
+        `The groove-cell field solver could not run (${field.failures.join('; ')}); the ${core ? 'exact core' : 'closed form'} is reported for that direction.`,
         'warning',
       );
     }
   }
   const fieldLongitudinal = field?.longitudinal;
   const fieldTransverse = field?.transverse;
+  const coreAnswers = method !== 'closed-form';
+  const exactLongitudinal = fieldLongitudinal ?? (coreAnswers ? core?.longitudinal : undefined);
+  const exactTransverse = fieldTransverse ?? (coreAnswers ? core?.transverse : undefined);
+  if (core && (exactLongitudinal === core.longitudinal || exactTransverse === core.transverse)) {
+    notes.model('slip.groove-cell-exact-core').cite(REFERENCES.philip1972, REFERENCES.kamrinBazantStone2010);
+    for (const caution of core.warnings) notes.warn(caution.code, caution.message, caution.severity);
+  }
+  // Reference values for the closed form's measured error: the exact answer where one ran, else the core beside it.
+  const referenceLongitudinal = exactLongitudinal ?? (core?.insideRange ? core.longitudinal : undefined);
+  const referenceTransverse = exactTransverse ?? (core?.insideRange ? core.transverse : undefined);
 
   const relative = (closed: number, exact: number) => (exact > 0 ? Math.abs(closed - exact) / exact : 0);
-  const slipLengthLongitudinal = fieldLongitudinal ? fieldLongitudinal.slipLength : closedLongitudinal;
-  const slipLengthTransverse = fieldTransverse ? fieldTransverse.slipLength : closedTransverse;
+  const slipLengthLongitudinal = exactLongitudinal ? exactLongitudinal.slipLength : closedLongitudinal;
+  const slipLengthTransverse = exactTransverse ? exactTransverse.slipLength : closedTransverse;
   const localSlipLength: GrooveLocalSlip = {
-    longitudinalMean: fieldLongitudinal?.meanLocalSlip ?? local.longitudinalMean,
-    longitudinalCentre: fieldLongitudinal?.localSlipAtCentre ?? local.longitudinalCentre,
-    transverseMean: fieldTransverse?.meanLocalSlip ?? local.transverseMean,
-    transverseCentre: fieldTransverse?.localSlipAtCentre ?? local.transverseCentre,
+    longitudinalMean: exactLongitudinal?.meanLocalSlip ?? local.longitudinalMean,
+    longitudinalCentre: exactLongitudinal?.localSlipAtCentre ?? local.longitudinalCentre,
+    transverseMean: exactTransverse?.meanLocalSlip ?? local.transverseMean,
+    transverseCentre: exactTransverse?.localSlipAtCentre ?? local.transverseCentre,
   };
-  const interfacialShearRatioLongitudinal = fieldLongitudinal
-    ? fieldLongitudinal.interfacialShearRatio
+  const interfacialShearRatioLongitudinal = exactLongitudinal
+    ? exactLongitudinal.interfacialShearRatio
     : interfacialShearRatioFromSlip(closedLongitudinal, local.longitudinalMean, phi);
   const closedFormError: SlipResult['closedFormError'] = {
-    slipLengthLongitudinal: fieldLongitudinal
-      ? { value: relative(closedLongitudinal, fieldLongitudinal.slipLength), source: 'measured' }
+    slipLengthLongitudinal: referenceLongitudinal
+      ? { value: relative(closedLongitudinal, referenceLongitudinal.slipLength), source: 'measured' }
       : { value: estimate.longitudinal, source: 'error-map' },
-    slipLengthTransverse: fieldTransverse
-      ? { value: relative(closedTransverse, fieldTransverse.slipLength), source: 'measured' }
+    slipLengthTransverse: referenceTransverse
+      ? { value: relative(closedTransverse, referenceTransverse.slipLength), source: 'measured' }
       : { value: estimate.transverse, source: 'error-map' },
   };
-  const methodUsed: SlipResult['method'] = fieldLongitudinal || fieldTransverse ? 'field' : 'closed-form';
+  const methodUsed: SlipResult['method'] = fieldLongitudinal || fieldTransverse ? 'field' : exactLongitudinal || exactTransverse ? 'exact-core' : 'closed-form';
   let fieldSolverStats: FieldSolverStats | undefined;
   if (field && (fieldLongitudinal || fieldTransverse)) {
     notes.model('slip.groove-cell-field');
@@ -280,19 +312,20 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
       wallTimeMs: field.wallTimeMs,
     };
   }
-  if (!fieldLongitudinal || !fieldTransverse) {
+  if (!exactLongitudinal || !exactTransverse) {
     notes.assume(
       'Closed form: uniform local slip equal to the mean lid velocity of the groove alone (lid-sheared duct series along the grooves, tabulated shear-driven cavity across them); Belyaev–Vinogradova stripe formula.',
     );
   }
   const reportedError = Math.max(
-    fieldLongitudinal ? 0 : closedFormError.slipLengthLongitudinal.value,
-    fieldTransverse ? 0 : closedFormError.slipLengthTransverse.value,
+    exactLongitudinal ? 0 : closedFormError.slipLengthLongitudinal.value,
+    exactTransverse ? 0 : closedFormError.slipLengthTransverse.value,
   );
-  if (reportedError >= AUTO_ERROR_LIMIT) {
+  if (reportedError >= CLOSED_FORM_CAUTION) {
+    const source = referenceLongitudinal || referenceTransverse ? 'measured against the exact core' : 'error map';
     notes.warn(
       'closed-form-approximate',
-      `Estimated error of the closed-form slip reported: ${(100 * reportedError).toFixed(1)} % (error map); method 'field' gives the exact flat-interface value.`,
+      `Error of the closed-form slip reported: ${(100 * reportedError).toFixed(1)} % (${source}); the default method gives the exact flat-interface value.`,
       'caution',
     );
   }

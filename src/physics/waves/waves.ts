@@ -141,6 +141,77 @@ export function waveRoughnessWarning(regime: WaveRegime): Warning | null {
 }
 
 /**
+ * The validated inputs and the criteria at the design point: what the full analysis and the regime
+ * alone ({@link waveRegimeAtDesign}) both need. Throws DomainError naming the field for impossible input.
+ */
+function criteriaAtDesign(input: WavesInput, notes: Notes) {
+  const { scenario } = input;
+  if (scenario.interfacialTension === undefined) {
+    throw new DomainError(
+      'interfacialTension is required for the wave analysis: give it, or take it from the catalogue or the wetting model (Fowkes estimate)',
+      { field: 'interfacialTension' },
+    );
+  }
+  const gamma = positive(scenario.interfacialTension, 'interfacialTension', 'interfacialTension');
+  const w = positive(scenario.texture.grooveWidth, 'scenario.texture.grooveWidth', 'grooveWidth');
+  const d = positive(scenario.texture.grooveDepth, 'scenario.texture.grooveDepth', 'grooveDepth');
+  const lubricantDensity = positive(scenario.lubricant.density, 'scenario.lubricant.density', 'lubricant density');
+  const workingDensity = positive(scenario.workingFluid.density, 'scenario.workingFluid.density', 'working-fluid density');
+  const workingViscosity = positive(scenario.workingFluid.viscosity, 'scenario.workingFluid.viscosity', 'working-fluid viscosity');
+  const uTau = positive(scenario.flow.frictionVelocity, 'scenario.flow.frictionVelocity', 'frictionVelocity');
+  const slipLength = input.slipLengthLongitudinal ?? 0;
+  if (!Number.isFinite(slipLength) || slipLength < 0) {
+    throw new DomainError(`slipLengthLongitudinal must be finite and ≥ 0 (got ${slipLength})`, { field: 'slipLengthLongitudinal' });
+  }
+  if (input.slipLengthLongitudinal === undefined) {
+    notes.assume('No slip length given: interface slip velocity taken as 0 (it shifts the wave speed relative to the wall, not ΔU).');
+  }
+
+  let normalGravity = 0;
+  if (input.gravity === undefined) {
+    notes.assume('Gravity not given: neglected in the dispersion relation and the Rayleigh–Taylor check.');
+  } else {
+    const { inclination, facing } = input.gravity;
+    if (facing !== 'up' && facing !== 'down' && facing !== 'vertical') {
+      throw new DomainError(`gravity.facing must be "up", "down" or "vertical" (got ${String(facing)})`, { field: 'gravity.facing' });
+    }
+    if (!Number.isFinite(inclination)) {
+      throw new DomainError(`gravity.inclination must be a finite angle in degrees (got ${inclination})`, { field: 'gravity.inclination' });
+    }
+    const cosine = Math.cos((inclination * Math.PI) / 180);
+    normalGravity = facing === 'vertical' ? 0 : (facing === 'up' ? 1 : -1) * STANDARD_GRAVITY * cosine;
+    // cos(90°) is 6e-17 in floating point; a vertical wall has no normal gravity.
+    if (Math.abs(normalGravity) < 1e-12) normalGravity = 0;
+  }
+
+  const flow = scenario.flow;
+  const laminar = flow.regime === 'laminar';
+  const kinematicViscosity = workingViscosity / workingDensity;
+  const fixed: FixedConditions = {
+    lubricantDensity,
+    workingDensity,
+    workingViscosity,
+    grooveDepth: d,
+    outerDepth: outerLayerDepth(flow, notes),
+    normalGravity,
+    slipLength,
+    laminar,
+  };
+  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
+  const at = evaluateCriteria(fixed, design);
+  return { scenario, gamma, w, d, lubricantDensity, workingDensity, workingViscosity, uTau, normalGravity, flow, laminar, kinematicViscosity, fixed, at };
+}
+
+/**
+ * The wave regime at the design point alone, without the growth-rate curve, the design limits or the
+ * regime map (the same criteria as {@link evaluateWaves}, a fraction of its cost): what the slip answer
+ * checks before it trusts its drag change.
+ */
+export function waveRegimeAtDesign(input: WavesInput): WaveRegime {
+  return regimeOf(criteriaAtDesign(input, new Notes()).at.ratios);
+}
+
+/**
  * Evaluate interface wave stability for one design.
  *
  * Inputs (SI): scenario.texture.grooveWidth w and grooveDepth d (m);
@@ -191,45 +262,9 @@ export function waveRoughnessWarning(regime: WaveRegime): Warning | null {
  */
 export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const notes = new Notes();
-  const { scenario } = input;
-  if (scenario.interfacialTension === undefined) {
-    throw new DomainError(
-      'interfacialTension is required for the wave analysis: give it, or take it from the catalogue or the wetting model (Fowkes estimate)',
-      { field: 'interfacialTension' },
-    );
-  }
-  const gamma = positive(scenario.interfacialTension, 'interfacialTension', 'interfacialTension');
-  const w = positive(scenario.texture.grooveWidth, 'scenario.texture.grooveWidth', 'grooveWidth');
-  const d = positive(scenario.texture.grooveDepth, 'scenario.texture.grooveDepth', 'grooveDepth');
-  const lubricantDensity = positive(scenario.lubricant.density, 'scenario.lubricant.density', 'lubricant density');
-  const workingDensity = positive(scenario.workingFluid.density, 'scenario.workingFluid.density', 'working-fluid density');
-  const workingViscosity = positive(scenario.workingFluid.viscosity, 'scenario.workingFluid.viscosity', 'working-fluid viscosity');
-  const uTau = positive(scenario.flow.frictionVelocity, 'scenario.flow.frictionVelocity', 'frictionVelocity');
-  const slipLength = input.slipLengthLongitudinal ?? 0;
-  if (!Number.isFinite(slipLength) || slipLength < 0) {
-    throw new DomainError(`slipLengthLongitudinal must be finite and ≥ 0 (got ${slipLength})`, { field: 'slipLengthLongitudinal' });
-  }
-  if (input.slipLengthLongitudinal === undefined) {
-    notes.assume('No slip length given: interface slip velocity taken as 0 (it shifts the wave speed relative to the wall, not ΔU).');
-  }
-
-  let normalGravity = 0;
-  if (input.gravity === undefined) {
-    notes.assume('Gravity not given: neglected in the dispersion relation and the Rayleigh–Taylor check.');
-  } else {
-    const { inclination, facing } = input.gravity;
-    if (facing !== 'up' && facing !== 'down' && facing !== 'vertical') {
-      throw new DomainError(`gravity.facing must be "up", "down" or "vertical" (got ${String(facing)})`, { field: 'gravity.facing' });
-    }
-    if (!Number.isFinite(inclination)) {
-      throw new DomainError(`gravity.inclination must be a finite angle in degrees (got ${inclination})`, { field: 'gravity.inclination' });
-    }
-    const cosine = Math.cos((inclination * Math.PI) / 180);
-    normalGravity = facing === 'vertical' ? 0 : (facing === 'up' ? 1 : -1) * STANDARD_GRAVITY * cosine;
-    // cos(90°) is 6e-17 in floating point; a vertical wall has no normal gravity.
-    if (Math.abs(normalGravity) < 1e-12) normalGravity = 0;
-  }
-
+  const { scenario, gamma, w, d, lubricantDensity, workingDensity, workingViscosity, uTau, normalGravity, flow, laminar, kinematicViscosity, fixed, at } =
+    criteriaAtDesign(input, notes);
+  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
   let resolution = Math.round(input.mapResolution ?? DEFAULT_MAP_RESOLUTION);
   if (!Number.isFinite(resolution) || resolution < 2 || resolution > 200) {
     const clamped = Number.isFinite(resolution) ? Math.min(200, Math.max(2, resolution)) : DEFAULT_MAP_RESOLUTION;
@@ -237,21 +272,6 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     resolution = clamped;
   }
 
-  const flow = scenario.flow;
-  const laminar = flow.regime === 'laminar';
-  const kinematicViscosity = workingViscosity / workingDensity;
-  const fixed: FixedConditions = {
-    lubricantDensity,
-    workingDensity,
-    workingViscosity,
-    grooveDepth: d,
-    outerDepth: outerLayerDepth(flow, notes),
-    normalGravity,
-    slipLength,
-    laminar,
-  };
-  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
-  const at = evaluateCriteria(fixed, design);
   const layers = at.layers;
 
   notes

@@ -31,7 +31,7 @@ describe('POST /v1/retention', () => {
     const invariant = (r: { retainedLength: number; interfacialShearStress: { value: number } }) => r.retainedLength * r.interfacialShearStress.value;
     expect(invariant(thick.result) / invariant(thin.result)).toBeCloseTo(1, 6);
     expect(thin.result.timeline.length).toBeGreaterThan(10);
-    expect(thin.inputs.options).toEqual({ method: 'closed-form', duration: 3600, initialFill: 1, targetFill: 0.9 });
+    expect(thin.inputs.options).toEqual({ method: 'auto', duration: 3600, initialFill: 1, targetFill: 0.9 });
   });
   it('the verdict is lifted to the envelope with its criterion', async () => {
     const body = (await app.inject({ method: 'POST', url: '/v1/retention', payload: retentionCalculation.example as object })).json();

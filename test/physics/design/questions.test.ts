@@ -87,6 +87,19 @@ describe('the chains between the models', () => {
     expect(answer.assumptions.some((a) => /Interfacial shear = wall shear × 0\.\d+ from the closed-form slip solution/.test(a))).toBe(true);
     expect(answer.verdict?.criterion).toMatch(/target fill/);
   });
+  it('by default retention, surfactant and heat take the exact-core slip (retention: its interfacial shear ratio, not the closed form’s)', () => {
+    const { options: _closedForm, ...defaults } = design;
+    const ctx = new DesignContext({ ...defaults, options: { surfactantMethod: 'scaling', duration: 600 } }, catalogue);
+    const retention = QUESTIONS.retention(ctx);
+    const exact = ctx.slip('retention', 'auto').result;
+    const closed = ctx.slip('retention', 'closed-form').result;
+    expect(exact.method).toBe('exact-core');
+    expect(retention.assumptions).toContain(`Interfacial shear = wall shear × ${exact.interfacialShearRatio.toPrecision(4)} from the exact-core slip solution.`);
+    // Hexadecane (N ≈ 3) in 50/100/25 µm grooves: the closed-form ratio differs from the exact one by more than 1 %.
+    expect(Math.abs(closed.interfacialShearRatio / exact.interfacialShearRatio - 1)).toBeGreaterThan(0.01);
+    expect(QUESTIONS.surfactant(ctx).assumptions).toContain('Clean slip from the exact-core slip solution (as slip).');
+    expect(QUESTIONS.heat(ctx).models).toContain('heat.thermal-slip-exact-core');
+  });
   it('internal paths of the models’ errors reach the caller as document paths (heat refuses a plate flow, naming flow.kind)', () => {
     let error: { field?: string } | undefined;
     try {

@@ -18,7 +18,7 @@ describe('transverse slip core: published limits', () => {
   it.each([0.02, 0.1, 0.3, 0.5, 0.7, 0.9, 0.98])('N → 0 (N = 1e-9), w/P = %f: within 0.2 percent of Philip (1972), half the longitudinal value', (phi) => {
     const r = cell(phi, 1, 1e-9, 2e-5);
     expect(relative(r.slipLength, philipTransverse(2e-5, phi))).toBeLessThan(2e-3);
-    // measured: ≤ 5e-6 (basis truncation, docs/slip-core-transverse.md); 1e-4 guards the tables
+    // measured: ≤ 5e-6 (basis truncation, docs/slip-core.md); 1e-4 guards the tables
     expect(relative(r.slipLength, philipTransverse(2e-5, phi))).toBeLessThan(1e-4);
   });
 

@@ -77,8 +77,19 @@ describe('evaluateHeat', () => {
       expect(r.method).toBe(method);
     }
   });
+  it('auto takes b_t from the exact thermal core with the closed-form Nu (method exact-core); a closed-form run keeps the textbook b_t', () => {
+    const auto = evaluateHeat(demoInput({ method: 'auto' }));
+    expect(auto.result.method).toBe('exact-core');
+    expect(auto.models).toContain('heat.thermal-slip-exact-core');
+    expect(auto.models).not.toContain('heat.cross-section-field');
+    expect(auto.result.closedFormError).toBeNull();
+    const closed = evaluateHeat(demoInput()).result;
+    expect(closed.method).toBe('closed-form');
+    expect(closed.thermalSlipLength).toBe(closed.thermalSlipLengthClosedForm);
+    expect(auto.result.thermalSlipLengthClosedForm).toBe(closed.thermalSlipLengthClosedForm);
+  });
   it('field run reports the closed form’s error against it; closed-form run does not', () => {
-    const field = evaluateHeat(demoInput({ method: 'auto' })).result;
+    const field = evaluateHeat(demoInput({ method: 'field' })).result;
     expect(field.method).toBe('field');
     expect(field.closedFormError).not.toBeNull();
     expect(field.closedFormError!.nusselt.source).toBe('measured');
@@ -135,11 +146,14 @@ describe('evaluateHeat', () => {
     expect(s.bestLubricantConductivity).toBe(s.lubricantConductivity[6]);
     for (const v of s.heatFluxRatio) expect(Number.isFinite(v)).toBe(true);
   });
-  it('sweep: field thermal slip up to 25 points, closed form (with a notice) beyond', () => {
-    const short = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 3 } }));
+  it('sweep: the exact core at every point under auto; the field thermal slip up to 25 points under field, closed form (with a notice) beyond', () => {
+    const exact = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 30 } }));
+    expect(exact.result.sensitivity!.thermalSlipMethod).toBe('exact-core');
+    expect(exact.warnings.some((w) => w.code === 'sensitivity-closed-form')).toBe(false);
+    const short = evaluateHeat(demoInput({ method: 'field', sensitivity: { points: 3 } }));
     expect(short.result.sensitivity!.thermalSlipMethod).toBe('field');
     expect(short.result.sensitivity!.lubricantConductivity[0]).toBeCloseTo(0.1 * 0.2, 12); // 0.1·min(k_w, k_o, k_s)
-    const long = evaluateHeat(demoInput({ method: 'auto', sensitivity: { points: 30 } }));
+    const long = evaluateHeat(demoInput({ method: 'field', sensitivity: { points: 30 } }));
     expect(long.result.sensitivity!.thermalSlipMethod).toBe('closed-form');
     expect(long.warnings.some((w) => w.code === 'sensitivity-closed-form')).toBe(true);
     expect(() => evaluateHeat(demoInput({ sensitivity: { points: 1 } }))).toThrow(DomainError);

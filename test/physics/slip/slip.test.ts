@@ -279,12 +279,13 @@ describe('evaluateSlip with the groove-cell field solver', () => {
     expect(r.interfacialShearRatioLongitudinal).toBeGreaterThan(0.9);
     expect(r.interfacialShearRatioLongitudinal).toBeLessThanOrEqual(1.05);
   });
-  it("'auto' keeps the closed form where the map says it is within 1 % and runs the solver elsewhere", () => {
+  it("'auto' answers from the exact core everywhere, nearly shear-free or viscous lubricant, and measures the closed form's error against it", () => {
     const nearlyFree = evaluateSlip({ scenario: scenario(geometry, 1.002e-8, laminarChannel), method: 'auto' }).result;
-    expect(nearlyFree.method).toBe('closed-form');
+    expect(nearlyFree.method).toBe('exact-core');
     expect(Math.max(nearlyFree.closedFormError.slipLengthLongitudinal.value, nearlyFree.closedFormError.slipLengthTransverse.value)).toBeLessThan(0.01);
     const oil = evaluateSlip({ scenario: scenario(geometry, 1e-3, laminarChannel), method: 'auto' }).result;
-    expect(oil.method).toBe('field');
+    expect(oil.method).toBe('exact-core');
+    expect(oil.closedFormError.slipLengthTransverse.source).toBe('measured');
   });
 });
 

@@ -22,7 +22,7 @@ export const HeatResultSchema = z
     pressureGradient: num('Pressure drop per unit length, Pa/m'),
     pressureGradientSmooth: num('Of the smooth channel or pipe, Pa/m'),
     frictionFactorReynolds: numOrNull('Fanning f·Re on D_h (laminar), else null'),
-    method: z.enum(['closed-form', 'field', 'field-thermal-slip']).openapi({ description: 'Method used' }),
+    method: z.enum(['exact-core', 'closed-form', 'field', 'field-thermal-slip']).openapi({ description: 'Method that answered (exact-core: thermal slip from the exact core, the default)' }),
     closedFormError: z.strictObject({ nusselt: SourcedNumberSchema }).nullable().openapi({ description: '(Nu_closed − Nu_field)/Nu_field where the field cross-section ran' }),
     regime: z.enum(['laminar', 'turbulent']),
     confidence: z.enum(['normal', 'low']),
@@ -34,7 +34,7 @@ export const HeatResultSchema = z
         heatFluxRatio: z.array(z.number().nullable()),
         bestLubricantConductivity: num('W/(m·K)'),
         bestHeatFluxRatio: num('q/q₀ at the best conductivity'),
-        thermalSlipMethod: z.enum(['closed-form', 'field']),
+        thermalSlipMethod: z.enum(['exact-core', 'closed-form', 'field']),
       })
       .optional()
       .openapi({ description: 'Sweep of the lubricant conductivity' }),

@@ -48,10 +48,10 @@ export const SlipResultSchema = z
     }),
     textureReynoldsNumber: num('Reynolds number inside the texture (Stokes assumption needs ≲ 1)'),
     drag: DragChangeSchema,
-    method: z.enum(['closed-form', 'field']).openapi({ description: 'Method used' }),
+    method: z.enum(['exact-core', 'closed-form', 'field']).openapi({ description: 'Method that answered' }),
     closedFormError: z
       .strictObject({ slipLengthLongitudinal: SourcedNumberSchema, slipLengthTransverse: SourcedNumberSchema })
-      .openapi({ description: 'Relative error of the closed form against the exact solution; source measured (field solver ran) or error-map' }),
+      .openapi({ description: 'Relative error of the closed form against the exact solution; source measured (against the exact core or the field solver) or error-map (outside the core’s measured range under closed-form)' }),
     fieldSolverStats: z.strictObject({ longitudinal: runStats.optional(), transverse: runStats.optional(), wallTimeMs: num('ms, indicative') }).optional(),
   })
   .openapi('SlipResult');
