@@ -2,16 +2,20 @@
  * Command line: `oilskin <calculation> <scenario.json | ->` runs the same
  * validation and compute as POST /v1/<calculation> and prints the same JSON.
  * Exit 0 with the envelope on stdout; exit 2 with the problem document on
- * stderr for bad input; exit 1 for anything else.
+ * stderr for bad input; exit 1 for anything else. `--html report.html` also
+ * writes the calculation's HTML report where it has one (assess), the same page
+ * as `Accept: text/html`.
  */
-import { readFileSync } from 'node:fs';
-import { runInline, problemFromError } from '../api/calculation.js';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { parseBody, runInline, problemFromError } from '../api/calculation.js';
+import type { Envelope } from '../api/envelope.js';
 import { ProblemError } from '../api/problem.js';
 import { safeStringify } from '../api/envelope.js';
 import { CALCULATIONS, calculationByName } from '../api/routes/index.js';
 
 function usage(): string {
-  return `usage: oilskin <calculation> <file.json | ->\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}`;
+  const reports = CALCULATIONS.filter((c) => c.present?.contentTypes['text/html']).map((c) => c.name);
+  return `usage: oilskin <calculation> <file.json | -> [--html report.html]\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}\n--html (writes the HTML report): ${reports.join(', ')}`;
 }
 
 export function runCli(argv: readonly string[], readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8')): {
@@ -36,4 +40,34 @@ export function runCli(argv: readonly string[], readInput: (path: string) => str
     const problem = error instanceof ProblemError ? error.problem : problemFromError(error);
     return { code: problem.status < 500 ? 2 : 1, stdout: '', stderr: JSON.stringify(problem, null, 2) + '\n' };
   }
+}
+
+/**
+ * {@link runCli}, plus `--html <file>`: the calculation's HTML report written to the file (the JSON still on
+ * stdout). Exit 2 with usage when the calculation has no report or the file name is missing.
+ */
+export async function runCliWithReport(
+  argv: readonly string[],
+  readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8'),
+  writeOutput: (path: string, text: string) => void = (p, text) => writeFileSync(p, text),
+): Promise<{ code: number; stdout: string; stderr: string }> {
+  const at = argv.indexOf('--html');
+  if (at < 0) return runCli(argv, readInput);
+  const target = argv[at + 1];
+  const rest = [...argv.slice(0, at), ...argv.slice(at + 2)];
+  const definition = calculationByName(rest[0] ?? '');
+  if (!target || target.startsWith('--') || !definition?.present?.contentTypes['text/html']) return { code: 2, stdout: '', stderr: usage() + '\n' };
+  let text = '';
+  const out = runCli(rest, (p) => (text = readInput(p)));
+  if (out.code !== 0) return out;
+  try {
+    const input = parseBody(definition, JSON.parse(text));
+    const page = await definition.present.render(JSON.parse(out.stdout) as Envelope, input, { accept: 'text/html', query: {} });
+    if (!page) throw new Error('the calculation returned no HTML report');
+    writeOutput(target, page.body);
+  } catch (error) {
+    const problem = error instanceof ProblemError ? error.problem : problemFromError(error);
+    return { code: problem.status < 500 ? 2 : 1, stdout: out.stdout, stderr: JSON.stringify(problem, null, 2) + '\n' };
+  }
+  return { code: 0, stdout: out.stdout, stderr: `report written to ${target}\n` };
 }
