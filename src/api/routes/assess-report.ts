@@ -87,6 +87,19 @@ export async function assessmentPlot(name: PlotName, answer: Envelope, design: D
 
 const um = (m: number) => `${(m * 1e6).toPrecision(3)} µm`;
 
+/** The flow in words with units (lengths in mm). */
+function flowWords(flow: Record<string, number | string | undefined>): string {
+  const mm = (m: unknown) => `${(Number(m) * 1e3).toPrecision(3)} mm`;
+  const parts: string[] = [String(flow.kind)];
+  if (flow.height !== undefined) parts.push(`height ${mm(flow.height)}`);
+  if (flow.diameter !== undefined) parts.push(`diameter ${mm(flow.diameter)}`);
+  if (flow.bulkVelocity !== undefined) parts.push(`bulk velocity ${flow.bulkVelocity} m/s`);
+  if (flow.freeStreamVelocity !== undefined) parts.push(`free-stream velocity ${flow.freeStreamVelocity} m/s`);
+  if (flow.distance !== undefined) parts.push(`at ${mm(flow.distance)} from the leading edge`);
+  if (flow.wallShearStress !== undefined) parts.push(`wall shear stress ${flow.wallShearStress} Pa`);
+  return parts.join(', ');
+}
+
 function designRows(inputs: Inputs): { label: string; value: string }[] {
   const rows: { label: string; value: string }[] = [];
   const t = inputs.texture as { grooveWidth: number; pitch: number; grooveDepth: number; flowAngle: number; grooveLength?: number } | undefined;
@@ -94,8 +107,8 @@ function designRows(inputs: Inputs): { label: string; value: string }[] {
   const fluid = (f: Inputs[string] | undefined) => (f ? `${f.name ?? f.id ?? 'given values'} at ${(Number(f.temperature) - 273.15).toFixed(1)} °C` : '—');
   rows.push({ label: 'Lubricant', value: fluid(inputs.lubricant) });
   rows.push({ label: 'Working fluid', value: fluid(inputs.workingFluid) });
-  const flow = inputs.flow as Record<string, unknown> | undefined;
-  if (flow) rows.push({ label: 'Flow', value: Object.entries(flow).map(([k, v]) => `${k} ${String(v)}`).join(', ') + ' (SI)' });
+  const flow = inputs.flow as Record<string, number | string | undefined> | undefined;
+  if (flow) rows.push({ label: 'Flow', value: flowWords(flow) });
   const gamma = inputs.interfacialTension as { value: number; source: string } | undefined;
   if (gamma) rows.push({ label: 'Interfacial tension', value: `${(gamma.value * 1e3).toPrecision(3)} mN/m (${gamma.source})` });
   const water = inputs.waterQuality as { surfactant: { name: string }; bulkConcentration: number | number[] } | undefined;
