@@ -27,10 +27,14 @@ export const SensitivitySettingsSchema = z
   })
   .openapi('SensitivitySettings');
 
-export const AssessSchema = DesignSchema.extend({
-  requirements: RequirementsSchema.optional(),
-  sensitivities: SensitivitySettingsSchema.optional(),
-}).openapi('AssessRequest', { description: 'The design document, the requirements it must meet and the sensitivity settings' });
+// A fresh strict object with the design's fields (not .extend): an allOf of two closed objects would refuse every body.
+export const AssessSchema = z
+  .strictObject({
+    ...DesignSchema.shape,
+    requirements: RequirementsSchema.optional(),
+    sensitivities: SensitivitySettingsSchema.optional(),
+  })
+  .openapi('AssessRequest', { description: 'The design document, the requirements it must meet and the sensitivity settings' });
 
 export type AssessInput = z.output<typeof AssessSchema>;
 

@@ -88,6 +88,11 @@ function ratioMargin(value: number, required: number): number {
   return value / required - 1;
 }
 
+/** An assessed mechanism: passes exactly when its margin is not negative. */
+function assessed(margin: number, criterion: string, summary: string): MechanismAssessment {
+  return { status: 'assessed', verdict: { passes: margin >= 0, margin, criterion }, summary };
+}
+
 const pct = (x: number) => `${(100 * x).toPrecision(3)} %`;
 
 /** Linear interpolation of a sampled timeline at t (clamped to its ends). */
@@ -140,15 +145,11 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     const calmMargin = (waves.answer.verdict as Verdict).margin;
     const reserve = requirements.minWaveMargin.value as number;
     const margin = (calmMargin - reserve) / (1 - reserve);
-    mechanisms.waves = {
-      status: 'assessed',
-      verdict: {
-        passes: margin >= 0,
-        margin,
-        criterion: `${waveRegime}: the waves margin 1 − Π_max/½ (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
-      },
-      summary: `${waveRegime} (governing: ${waves.answer.result.governingCriterion})`,
-    };
+    mechanisms.waves = assessed(
+      margin,
+      `${waveRegime}: the waves margin 1 − Π_max/½ (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
+      `${waveRegime} (governing: ${waves.answer.result.governingCriterion})`,
+    );
     if (waveRegime === 'wavy') {
       waveCredit = 0;
       notes.warn(
@@ -178,15 +179,11 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     const tol = tolerable ?? stated;
     const minKept = requirements.minSlipRetained.value as number;
     const margin = ratioMargin(keptAtTolerable, minKept);
-    mechanisms.surfactant = {
-      status: 'assessed',
-      verdict: {
-        passes: margin >= 0,
-        margin,
-        criterion: `slip kept at the tolerable concentration ${tol} mol/m³ (${keptAtTolerable.toPrecision(3)}) reaches ${minKept}; margin = kept/required − 1`,
-      },
-      summary: `${pct(slipKept)} of the clean slip kept at ${stated} mol/m³ (${r.regime})`,
-    };
+    mechanisms.surfactant = assessed(
+      margin,
+      `slip kept at the tolerable concentration ${tol} mol/m³ (${keptAtTolerable.toPrecision(3)}) reaches ${minKept}; margin = kept/required − 1`,
+      `${pct(slipKept)} of the clean slip kept at ${stated} mol/m³ (${r.regime})`,
+    );
     surfactantCurve = { bulkConcentration: r.curve.bulkConcentration, slipRetained: r.curve.slipRetained, stated, statedSlipRetained: slipKept };
     survivingSlip = {
       slipLengthLongitudinal: r.slipLength,
@@ -210,15 +207,11 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     const atService = valueAt(times, filled, serviceTime);
     const required = requirements.minRetainedFraction.value as number;
     const margin = ratioMargin(atService, required);
-    mechanisms.retention = {
-      status: 'assessed',
-      verdict: {
-        passes: margin >= 0,
-        margin,
-        criterion: `retained share of the groove volume after ${serviceTime} s (${atService.toPrecision(3)}) reaches ${required}; margin = share/required − 1`,
-      },
-      summary: `${pct(atService)} retained after ${serviceTime} s (${r.bindingMechanism}, ${r.timelineModel} timeline)`,
-    };
+    mechanisms.retention = assessed(
+      margin,
+      `retained share of the groove volume after ${serviceTime} s (${atService.toPrecision(3)}) reaches ${required}; margin = share/required − 1`,
+      `${pct(atService)} retained after ${serviceTime} s (${r.bindingMechanism}, ${r.timelineModel} timeline)`,
+    );
     notes.assume(`Slip → retention: the interfacial shear is the wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} of the ${slip.result.method} slip solution used for the drag.`);
   } else {
     mechanisms.retention = { status: 'not-assessed', reason: retention.reason };
@@ -238,15 +231,11 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   } else {
     const minDrag = requirements.minDragReduction.value as number;
     const margin = ratioMargin(dragEnd, minDrag);
-    mechanisms.slipAndDrag = {
-      status: 'assessed',
-      verdict: {
-        passes: margin >= 0,
-        margin,
-        criterion: `drag reduction credited after ${serviceTime} s (${dragEnd.toPrecision(3)}: clean ${dragClean?.toPrecision(3)}, × slip kept, × wave credit ${waveCredit}, × filled share ${filledAtService.toPrecision(3)}) reaches ${minDrag}; margin = DR/required − 1`,
-      },
-      summary: `${pct(dragEnd)} drag reduction credited after ${serviceTime} s (clean ${pct(dragClean ?? 0)})`,
-    };
+    mechanisms.slipAndDrag = assessed(
+      margin,
+      `drag reduction credited after ${serviceTime} s (${dragEnd.toPrecision(3)}: clean ${dragClean?.toPrecision(3)}, × slip kept, × wave credit ${waveCredit}, × filled share ${filledAtService.toPrecision(3)}) reaches ${minDrag}; margin = DR/required − 1`,
+      `${pct(dragEnd)} drag reduction credited after ${serviceTime} s (clean ${pct(dragClean ?? 0)})`,
+    );
   }
 
   // Heat with the surviving slip (closed-form heat model: the field heat method re-solves a clean interface itself).
@@ -261,15 +250,11 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     heatClean = survivingSlip ? heatTransfer(ctx, { method: 'closed-form' }).result.heatFluxRatio - 1 : heatSurviving;
     const required = requirements.minHeatTransferChange.value as number;
     const margin = ratioMargin(r.heatFluxRatio, 1 + required);
-    mechanisms.heat = {
-      status: 'assessed',
-      verdict: {
-        passes: margin >= 0,
-        margin,
-        criterion: `heat delivered q/q₀ (${r.heatFluxRatio.toPrecision(4)}) reaches 1 + ${required}; margin = (q/q₀)/(1 + required) − 1`,
-      },
-      summary: `${heatSurviving >= 0 ? '+' : ''}${pct(heatSurviving)} heat transfer against the solid-filled wall`,
-    };
+    mechanisms.heat = assessed(
+      margin,
+      `heat delivered q/q₀ (${r.heatFluxRatio.toPrecision(4)}) reaches 1 + ${required}; margin = (q/q₀)/(1 + required) − 1`,
+      `${heatSurviving >= 0 ? '+' : ''}${pct(heatSurviving)} heat transfer against the solid-filled wall`,
+    );
     if (r.sensitivity) heatSweep = { lubricantConductivity: r.sensitivity.lubricantConductivity, nusseltRatio: r.sensitivity.nusseltRatio, heatFluxRatio: r.sensitivity.heatFluxRatio };
     notes.assume('Heat: the closed-form heat model with the surviving slip and the lubricant’s conductivity, at full grooves.');
   } else mechanisms.heat = { status: 'not-assessed', reason: heat.reason };
