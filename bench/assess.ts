@@ -69,7 +69,7 @@ try {
     if (res.status !== 200) throw new Error(`assess answered ${res.status}: ${JSON.stringify(body).slice(0, 400)}`);
     console.log(`design answers: ${body.result?.overall?.verdict}, slip method ${body.result?.couplings?.slipMethod}`);
   }
-  const without = designs.map((d) => ({ ...d, sensitivities: { enabled: false } }));
+  const without = designs.map((d) => ({ ...d, options: { ...(d.options as object), marginSensitivities: { enabled: false } } }));
   await measure('/v1/flow', flowBodies, 100);
   console.log('oilskin HTTP latency: POST /v1/assess against POST /v1/flow');
   console.log(

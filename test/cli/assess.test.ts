@@ -8,8 +8,7 @@ const design = {
   lubricant: { id: 'n-hexadecane', temperature: '20 degC' },
   workingFluid: { id: 'water', temperature: '20 degC' },
   flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
-  options: { method: 'closed-form' },
-  sensitivities: { enabled: false },
+  options: { method: 'closed-form', marginSensitivities: { enabled: false } },
 };
 
 describe('CLI assess --html', () => {

@@ -11,17 +11,12 @@ import { catalogue } from '../../materials/lookup.js';
 import { assessDesign } from '../../physics/design/assess.js';
 import { DesignContext } from '../../physics/design/context.js';
 import { problem, ProblemError, validationProblem } from '../problem.js';
-import { AssessSchema, type AssessInput } from '../schemas/assess.js';
+import { DesignSchema } from '../schemas/design.js';
 import { AssessResponse } from '../schemas/responses/assess.js';
 import { assessmentPlot, assessmentReport, PLOTS, type PlotName } from './assess-report.js';
 
 /** Points of the lubricant-conductivity sweep behind the heat plot (closed forms: cheap). */
 const HEAT_SWEEP_POINTS = 21;
-
-function designOf(input: AssessInput) {
-  const { requirements: _requirements, sensitivities: _sensitivities, ...design } = input;
-  return design;
-}
 
 function plotWanted(query: Record<string, unknown>): PlotName | undefined {
   const plot = query.plot;
@@ -37,8 +32,8 @@ export const assessCalculation = defineCalculation({
   path: '/v1/assess',
   summary: 'Assess one design: every failure mode with its couplings, one verdict, sensitivities, a report',
   description:
-    'Wetting, retention, waves, slip and drag, surfactant and heat on one design, with the couplings computed: the retention runs on the slip solution of the assessment (exact interfacial shear); the drainage timeline gives the filled share f(t) and the drag reduction of the partly drained surface f(t)·DR (a drained stretch taken as no-slip); a wavy interface is credited no drag reduction; the slip surviving the stated surfactant concentration sets the drag and heat. Each mechanism gets a verdict with its margin against the requirements (defaults stated in the answer); the overall verdict is works / works-with-conditions / fails with the limiting mechanism (smallest margin); sensitivities of each margin to groove width, pitch, depth, interfacial tension and lubricant viscosity by one-sided finite differences through the whole assessment. Parts the document lacks leave their mechanism "not assessed" with the reason; texture, lubricant, workingFluid and flow are required. Accept: text/html returns the self-contained report; ?plot=service-time|wave-map|surfactant|heat returns that plot as SVG.',
-  body: AssessSchema,
+    'Wetting, retention, waves, slip and drag, surfactant and heat on one design, with the couplings computed: the retention runs on the slip solution of the assessment (exact interfacial shear); the drainage timeline gives the filled share f(t) and the drag reduction of the partly drained surface f(t)·DR (a drained stretch taken as no-slip); a wavy interface is credited no drag reduction; the slip surviving the stated surfactant concentration sets the drag and heat. Each mechanism gets a verdict with its margin against the requirements (defaults stated in the answer); the overall verdict is works / works-with-conditions / fails with the limiting mechanism (smallest margin); sensitivities of each margin to groove width, pitch, depth, interfacial tension and lubricant viscosity by one-sided finite differences through the whole assessment. Requirements in the requirements part of the document, sensitivity settings in options.marginSensitivities. Parts the document lacks leave their mechanism "not assessed" with the reason; texture, lubricant, workingFluid and flow are required. Accept: text/html returns the self-contained report; ?plot=service-time|wave-map|surfactant|heat returns that plot as SVG.',
+  body: DesignSchema,
   response: AssessResponse,
   heavy: true,
   example: {
@@ -52,8 +47,8 @@ export const assessCalculation = defineCalculation({
     options: { method: 'closed-form', surfactantMethod: 'scaling' },
   },
   compute: (input) => {
-    const settings = input.sensitivities ?? {};
-    return assessDesign(new DesignContext(designOf(input), catalogue), input.requirements ?? {}, {
+    const settings = input.options?.marginSensitivities ?? {};
+    return assessDesign(new DesignContext(input, catalogue), input.requirements ?? {}, {
       sensitivities: settings.enabled ?? true,
       ...(settings.relativeStep === undefined ? {} : { relativeStep: settings.relativeStep }),
       heatSweepPoints: HEAT_SWEEP_POINTS,
@@ -68,14 +63,14 @@ export const assessCalculation = defineCalculation({
     render: async (answer, input, { accept, query }) => {
       const plot = plotWanted(query);
       if (plot !== undefined) {
-        const svg = await assessmentPlot(plot, answer, designOf(input));
+        const svg = await assessmentPlot(plot, answer, input);
         if (typeof svg !== 'string') {
           throw new ProblemError(problem(422, 'plot-unavailable', 'The plot cannot be drawn for this design', svg.reason, { errors: [{ path: 'plot', message: svg.reason }] }));
         }
         return { contentType: 'image/svg+xml; charset=utf-8', body: svg };
       }
       if (/\btext\/html\b/.test(accept) && !/^\s*application\/json/.test(accept)) {
-        return { contentType: 'text/html; charset=utf-8', body: await assessmentReport(answer, designOf(input), new Date().toISOString()) };
+        return { contentType: 'text/html; charset=utf-8', body: await assessmentReport(answer, input, new Date().toISOString()) };
       }
       return undefined;
     },

@@ -1,10 +1,10 @@
 /**
- * Request of POST /v1/assess: the one design document plus the requirements the
- * design must meet (each optional; the defaults are stated in the response) and
- * the sensitivity settings. Built from the quantity schemas of ./quantities.ts.
+ * The design document's parts that only the assessment reads: the requirements
+ * the design must meet (each optional; the defaults are stated in the response)
+ * and the settings of the margin sensitivities (options.marginSensitivities).
+ * Built from the quantity schemas of ./quantities.ts; ./design.ts composes them.
  */
 import type { AssessmentRequirements } from '../../physics/design/assess.js';
-import { DesignSchema } from './design.js';
 import { Concentration, Duration, Fraction } from './quantities.js';
 import { z } from './zod.js';
 
@@ -18,25 +18,14 @@ export const RequirementsSchema = z
     minSlipRetained: Fraction.optional().openapi({ description: 'Share of the clean slip that must survive at the tolerable concentration (default 0.5)' }),
     minHeatTransferChange: z.number().gt(-1).max(10).optional().openapi({ description: 'Smallest heat-transfer change q/q₀ − 1 against the solid-filled wall (default −0.1)' }),
   })
-  .openapi('Requirements', { description: 'What the design must achieve; every value optional, the defaults are stated in the response' });
+  .openapi('Requirements', { description: 'What the design must achieve (read by the assessment); every value optional, the defaults are stated in the response' });
 
 export const SensitivitySettingsSchema = z
   .strictObject({
     enabled: z.boolean().optional().openapi({ description: 'Compute the sensitivities (default true; each knob costs one more assessment)' }),
     relativeStep: z.number().min(0.001).max(0.2).optional().openapi({ description: 'Relative step of the one-sided finite differences (default 0.02)' }),
   })
-  .openapi('SensitivitySettings');
-
-// A fresh strict object with the design's fields (not .extend): an allOf of two closed objects would refuse every body.
-export const AssessSchema = z
-  .strictObject({
-    ...DesignSchema.shape,
-    requirements: RequirementsSchema.optional(),
-    sensitivities: SensitivitySettingsSchema.optional(),
-  })
-  .openapi('AssessRequest', { description: 'The design document, the requirements it must meet and the sensitivity settings' });
-
-export type AssessInput = z.output<typeof AssessSchema>;
+  .openapi('MarginSensitivities', { description: 'Assessment: finite-difference sensitivities of every margin to w, P, d, γ and μ_o' });
 
 type _RequirementsMatchPhysics = z.output<typeof RequirementsSchema> extends AssessmentRequirements ? true : never;
 export const REQUIREMENTS_SCHEMA_MATCHES_PHYSICS: _RequirementsMatchPhysics = true;

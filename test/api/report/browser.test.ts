@@ -160,7 +160,7 @@ describe('HTML report in headless Chromium', () => {
   it('the assessment report of POST /v1/assess (Accept: text/html): the four plots drawn, no request, no console error', async (context) => {
     skipWithoutBrowser(context);
     const design = JSON.parse(readFileSync(fileURLToPath(new URL('../../../examples/assess-demo.json', import.meta.url)), 'utf8'));
-    const res = await app.inject({ method: 'POST', url: '/v1/assess', payload: { ...design, sensitivities: { enabled: false } }, headers: { accept: 'text/html' } });
+    const res = await app.inject({ method: 'POST', url: '/v1/assess', payload: { ...design, options: { ...design.options, marginSensitivities: { enabled: false } } }, headers: { accept: 'text/html' } });
     expect(res.statusCode, res.body).toBe(200);
     const seen = await inBrowser(res.body, 'assess-report');
     expectEveryPlotDrawn(seen.figures, 4);

@@ -17,15 +17,17 @@ afterAll(async () => {
   await app.close();
 });
 
-async function assess(body: object, url = '/v1/assess') {
-  const res = await app.inject({ method: 'POST', url, payload: body });
+/** Sensitivities off unless asked for (each costs five more assessments). */
+const off = <T extends { options?: object } & Record<string, unknown>>(design: T, enabled = false) => ({ ...design, options: { ...design.options, marginSensitivities: { enabled } } });
+
+async function assess(body: { options?: object } & Record<string, unknown>, sensitivities = false) {
+  const res = await app.inject({ method: 'POST', url: '/v1/assess', payload: off(body, sensitivities) });
   if (res.statusCode !== 200) throw new Error(`${res.statusCode} ${res.body}`);
   const json = res.json();
   AssessResponse.parse(json);
   return json;
 }
 
-const OFF = { sensitivities: { enabled: false } };
 /** Invented demo: a 10 mm water channel at 1 m/s (bulk Re ≈ 10⁴), open streamwise grooves 100 mm long. */
 const TURBULENT = {
   texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um', grooveLength: '100 mm' },
@@ -40,7 +42,7 @@ const PARTIAL = { underWorkingFluid: { advancing: 170, receding: 48, equilibrium
 
 describe('POST /v1/assess: the facts of the trade', () => {
   it('a lubricant that wets the solid under water (hysteresis ≈ 46°) drains from open grooves at bulk Re ≈ 10⁴: retention fails, < 10 % left after 2 h (common practice, no source)', async () => {
-    const r = (await assess({ ...TURBULENT, contactAngles: WETTING, ...OFF })).result;
+    const r = (await assess({ ...TURBULENT, contactAngles: WETTING })).result;
     expect(r.mechanisms.retention.status).toBe('assessed');
     expect(r.mechanisms.retention.verdict.passes).toBe(false);
     expect(r.couplings.filledFractionAtServiceTime).toBeLessThan(0.1);
@@ -51,7 +53,7 @@ describe('POST /v1/assess: the facts of the trade', () => {
   });
 
   it('a partially wetting lubricant (angle above 90°, hysteresis ≈ 122°) keeps about half: 25–75 % after 2 h (common practice, no source)', async () => {
-    const r = (await assess({ ...TURBULENT, contactAngles: PARTIAL, ...OFF })).result;
+    const r = (await assess({ ...TURBULENT, contactAngles: PARTIAL })).result;
     expect(r.couplings.filledFractionAtServiceTime).toBeGreaterThan(0.25);
     expect(r.couplings.filledFractionAtServiceTime).toBeLessThan(0.75);
   });
@@ -69,7 +71,6 @@ describe('POST /v1/assess: the facts of the trade', () => {
       workingFluid: { id: 'water', temperature: '20 degC' },
       flow: { kind: 'channel', height: '3 mm', bulkVelocity: '1 m/s' },
       options: { method: 'closed-form' },
-      ...OFF,
     };
     const calm = (await assess({ ...design, interfacialTension: 998.2 * 20e-6 / 100 })).result;
     const wavy = (await assess({ ...design, interfacialTension: 998.2 * 20e-6 / 200 })).result;
@@ -86,7 +87,7 @@ describe('POST /v1/assess: the facts of the trade', () => {
   // grooves in turbulent flow the clean surface already increases drag (spanwise slip larger than streamwise), so the
   // fact is checked where both models say it applies.
   it('traces of SDS far below the critical micelle concentration (0.05 mM against 8.2 mM) cancel most of the slip: the surfactant verdict fails and the drag reduction falls (common practice, no source)', async () => {
-    const design = { ...TURBULENT, texture: { ...TURBULENT.texture, flowAngle: 90 }, flow: { kind: 'channel', height: '1 mm', bulkVelocity: '0.1 m/s' }, ...OFF };
+    const design = { ...TURBULENT, texture: { ...TURBULENT.texture, flowAngle: 90 }, flow: { kind: 'channel', height: '1 mm', bulkVelocity: '0.1 m/s' } };
     const clean = (await assess(design)).result;
     const dirty = (await assess({ ...design, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.05 mM' } })).result;
     expect(clean.mechanisms.surfactant.status).toBe('not-assessed');
@@ -97,7 +98,7 @@ describe('POST /v1/assess: the facts of the trade', () => {
 
   it('a lubricant conducting better than the solid raises heat transfer by about 20 % somewhere on the heat plot’s conductivity sweep (common practice, no source)', async () => {
     // The heat endpoint's own demo design (10 µm grooves in a 0.2 W/(m·K) solid, laminar 200 µm channel).
-    const r = (await assess({ ...(heatCalculation.example as object), ...OFF })).result;
+    const r = (await assess(heatCalculation.example as Record<string, unknown>)).result;
     const best = Math.max(...r.heatSweep.heatFluxRatio.filter((x: number | null) => x !== null));
     expect(best).toBeGreaterThan(1.15);
     expect(best).toBeLessThan(1.3);
@@ -106,7 +107,7 @@ describe('POST /v1/assess: the facts of the trade', () => {
 
 describe('POST /v1/assess: couplings change the answer', () => {
   it('faster drainage (a lubricant heavier than water on a vertical wall, gravity along the flow) lowers the drag reduction at the end of the service time (drainage speed ∝ drive: Wexler, Jacobi & Stone 2015)', async () => {
-    const design = { ...TURBULENT, texture: { ...TURBULENT.texture, grooveLength: '20 mm' }, contactAngles: WETTING, lubricant: { viscosity: '3 mPa.s', density: 1800, temperature: '20 degC' }, interfacialTension: '20 mN/m', ...OFF };
+    const design = { ...TURBULENT, texture: { ...TURBULENT.texture, grooveLength: '20 mm' }, contactAngles: WETTING, lubricant: { viscosity: '3 mPa.s', density: 1800, temperature: '20 degC' }, interfacialTension: '20 mN/m' };
     const level = (await assess(design)).result;
     const down = (await assess({ ...design, orientation: { inclination: 90, downslope: 'with-flow' } })).result;
     expect(down.couplings.filledFractionAtServiceTime).toBeLessThan(level.couplings.filledFractionAtServiceTime);
@@ -118,7 +119,7 @@ describe('POST /v1/assess: couplings change the answer', () => {
   // The rule (src/physics/design/assess.ts): smallest margin among the assessed mechanisms; wetting is left out while
   // retention passes, since the lubricant is then held (by pinning) whatever the equilibrium state says.
   it('the overall verdict names the mechanism with the smallest margin (its definition)', async () => {
-    const r = (await assess({ ...TURBULENT, contactAngles: PARTIAL, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.0001 mM' }, ...OFF })).result;
+    const r = (await assess({ ...TURBULENT, contactAngles: PARTIAL, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.0001 mM' } })).result;
     const retentionPasses = r.mechanisms.retention.status === 'assessed' && r.mechanisms.retention.verdict.passes;
     const margins = Object.entries(r.mechanisms)
       .filter(([k, m]) => (m as { status: string }).status === 'assessed' && !(k === 'wetting' && retentionPasses))
@@ -129,7 +130,7 @@ describe('POST /v1/assess: couplings change the answer', () => {
   });
 
   it('heat is not assessed without a solid, and says why', async () => {
-    const r = (await assess({ ...TURBULENT, ...OFF })).result;
+    const r = (await assess({ ...TURBULENT })).result;
     expect(r.mechanisms.heat.status).toBe('not-assessed');
     expect(r.mechanisms.heat.reason).toMatch(/solid/);
     expect(r.requirements.minDragReduction).toEqual({ value: 0.005, source: 'input' });
@@ -140,7 +141,7 @@ describe('POST /v1/assess: couplings change the answer', () => {
 describe('POST /v1/assess: sensitivities', () => {
   it('each sensitivity’s sign agrees with a finite difference of the margin through the API at a different step (5 %, against the 2 % used inside)', async () => {
     const design = { ...TURBULENT, contactAngles: PARTIAL, interfacialTension: '50 mN/m' };
-    const base = (await assess(design)).result;
+    const base = (await assess(design, true)).result;
     const s = base.sensitivities;
     expect(s.knobs.length).toBe(5);
     expect(s.limitingMechanism).toBe(base.overall.limitingMechanism);
@@ -154,7 +155,7 @@ describe('POST /v1/assess: sensitivities', () => {
     let compared = 0;
     for (const knob of ['grooveWidth', 'grooveDepth', 'pitch', 'lubricantViscosity']) {
       const f = knob === 'grooveWidth' ? 0.95 : 1.05;
-      const other = (await assess({ ...scaled(knob, f), ...OFF })).result;
+      const other = (await assess(scaled(knob, f))).result;
       const k = s.knobs.find((x: { knob: string }) => x.knob === knob);
       for (const [mechanism, derivative] of Object.entries(k.marginDerivatives) as [string, number | null][]) {
         if (derivative === null || Math.abs(derivative) < 1e-3) continue;
@@ -169,9 +170,9 @@ describe('POST /v1/assess: sensitivities', () => {
 });
 
 describe('POST /v1/assess: representations', () => {
-  const design = { ...TURBULENT, contactAngles: WETTING, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.001 mM' }, interfacialTension: '50 mN/m', ...OFF };
+  const design = { ...TURBULENT, contactAngles: WETTING, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.001 mM' }, interfacialTension: '50 mN/m' };
   it('Accept: text/html gives the self-contained report with its four plots', async () => {
-    const res = await app.inject({ method: 'POST', url: '/v1/assess', payload: design, headers: { accept: 'text/html' } });
+    const res = await app.inject({ method: 'POST', url: '/v1/assess', payload: off(design), headers: { accept: 'text/html' } });
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/html/);
     expect((res.body.match(/<figure /g) ?? []).length).toBe(3); // no solid: the heat plot is not drawn
@@ -179,14 +180,14 @@ describe('POST /v1/assess: representations', () => {
     expect(res.body).toMatch(/Safety caution/);
   }, 60_000);
   it('?plot=wave-map gives one SVG; an unknown plot is 422 naming plot', async () => {
-    const res = await app.inject({ method: 'POST', url: '/v1/assess?plot=wave-map', payload: design, headers: { accept: 'image/svg+xml' } });
+    const res = await app.inject({ method: 'POST', url: '/v1/assess?plot=wave-map', payload: off(design), headers: { accept: 'image/svg+xml' } });
     expect(res.statusCode).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.body.trim().startsWith('<svg')).toBe(true);
-    const bad = await app.inject({ method: 'POST', url: '/v1/assess?plot=pie', payload: design });
+    const bad = await app.inject({ method: 'POST', url: '/v1/assess?plot=pie', payload: off(design) });
     expect(bad.statusCode).toBe(422);
     expect(bad.json().errors[0].path).toBe('plot');
-    const heat = await app.inject({ method: 'POST', url: '/v1/assess?plot=heat', payload: design });
+    const heat = await app.inject({ method: 'POST', url: '/v1/assess?plot=heat', payload: off(design) });
     expect(heat.statusCode).toBe(422);
     expect(heat.json().errors[0].message).toMatch(/solid/);
   }, 60_000);
