@@ -36,8 +36,7 @@ const designs: Record<string, unknown>[] = [
 ];
 const flowBodies = designs.map((d) => ({ workingFluid: d.workingFluid, flow: d.flow, texture: d.texture }));
 
-// (Log level info: the starter waits for the 'Server listening' line.)
-const service = await startService({ sources: true });
+const service = await startService({ sources: true, env: { OILSKIN_LOG_LEVEL: 'warn' } });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
     service.child.kill();
