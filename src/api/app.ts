@@ -17,6 +17,7 @@ import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
 import { createSolverPool, type SolverPool } from './pool.js';
 import { computeSafely } from './worker.js';
+import { loadUserCatalogue } from './user-catalogue-file.js';
 
 declare module 'fastify' {
   interface FastifyInstance {
@@ -40,6 +41,8 @@ export function isProtectedRoute(routeUrl: string | undefined): boolean {
 }
 
 export async function buildApp(config: ServiceConfig, options: { logStream?: NodeJS.WritableStream } = {}): Promise<FastifyInstance> {
+  // A bad user catalogue stops start-up here (CatalogueFileError naming the entry and field), before anything listens.
+  const userCatalogue = config.catalogueFile === undefined ? undefined : loadUserCatalogue(config.catalogueFile);
   const app = Fastify({
     logger: {
       level: config.logLevel,
@@ -75,6 +78,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     solveTimeoutMs: config.solveTimeoutMs,
     workerMemoryMb: config.workerMemoryMb,
     inline: computeSafely,
+    ...(userCatalogue === undefined ? {} : { userCatalogue }),
     onThreadError: (error) => app.log.error({ err: error }, 'solver thread failed'),
   });
   app.decorate('solverPool', pool);
@@ -123,6 +127,12 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     });
   }
 
+  if (userCatalogue !== undefined) {
+    app.log.info(
+      { file: userCatalogue.file, sha256: userCatalogue.sha256, fluids: userCatalogue.fluids.map((f) => f.id), surfactants: userCatalogue.surfactants.map((s) => s.id) },
+      'user catalogue added',
+    );
+  }
   await app.register(docsPlugin);
   await app.register(catalogueRoutes);
   await app.register(calculationRoutes, { pool });

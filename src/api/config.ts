@@ -29,6 +29,18 @@ export interface ServiceConfig {
   requestTimeoutMs: number;
   /** Idle keep-alive connections are closed after this long, ms. */
   keepAliveTimeoutMs: number;
+  /** A lab's own fluids and surfactants (JSON or YAML), added to the built-in catalogue at start-up. */
+  catalogueFile?: string;
+}
+
+/** The value of `--catalogue file` (or `--catalogue=file`) in command-line arguments, if given. */
+export function catalogueFlag(argv: readonly string[]): string | undefined {
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i]!;
+    if (arg === '--catalogue') return argv[i + 1];
+    if (arg.startsWith('--catalogue=')) return arg.slice('--catalogue='.length);
+  }
+  return undefined;
 }
 
 function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0): number {
@@ -46,7 +58,9 @@ function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
     .filter((s) => s !== '');
 }
 
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig {
+export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: readonly string[] = []): ServiceConfig {
+  // The command-line flag wins over the environment.
+  const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
   const config: ServiceConfig = {
     port: intFrom(env, 'OILSKIN_PORT', 8080),
     host: env.OILSKIN_HOST ?? '0.0.0.0',
@@ -65,6 +79,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
+    ...(catalogueFile === undefined ? {} : { catalogueFile }),
   };
   // Node refuses a header limit longer than the whole-request limit.
   if (config.headersTimeoutMs > config.requestTimeoutMs) {

@@ -1,28 +1,52 @@
 /**
- * Command line: `oilskin <calculation> <scenario.json | ->` runs the same
- * validation and compute as POST /v1/<calculation> and prints the same JSON.
+ * Command line: `oilskin [--catalogue lab.json] <calculation> <scenario.json | ->`
+ * runs the same validation and compute as POST /v1/<calculation> and prints
+ * the same JSON. `--catalogue` (else OILSKIN_CATALOGUE_FILE) adds a lab's own
+ * fluids and surfactants, as it does for the service.
  * Exit 0 with the envelope on stdout; exit 2 with the problem document on
- * stderr for bad input; exit 1 for anything else. `--html report.html` also
- * writes the calculation's HTML report where it has one (assess), the same page
- * as `Accept: text/html`.
+ * stderr for bad input, or the reasons on stderr for a bad catalogue file;
+ * exit 1 for anything else. `--html report.html` also writes the calculation's
+ * HTML report where it has one (assess), the same page as `Accept: text/html`.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
-import { parseBody, runInline, problemFromError } from '../api/calculation.js';
 import type { Envelope } from '../api/envelope.js';
+import { uninstallUserCatalogue } from '../materials/user-catalogue.js';
+import { parseBody, runInline, problemFromError } from '../api/calculation.js';
+import { catalogueFlag } from '../api/config.js';
+import { CatalogueFileError, loadUserCatalogue } from '../api/user-catalogue-file.js';
 import { ProblemError } from '../api/problem.js';
 import { safeStringify } from '../api/envelope.js';
 import { CALCULATIONS, calculationByName } from '../api/routes/index.js';
 
 function usage(): string {
   const reports = CALCULATIONS.filter((c) => c.present?.contentTypes['text/html']).map((c) => c.name);
-  return `usage: oilskin <calculation> <file.json | -> [--html report.html]\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}\n--html (writes the HTML report): ${reports.join(', ')}`;
+  return `usage: oilskin [--catalogue lab.json] <calculation> <file.json | -> [--html report.html]\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}\n--html (writes the HTML report): ${reports.join(', ')}`;
 }
 
-export function runCli(argv: readonly string[], readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8')): {
-  code: number;
-  stdout: string;
-  stderr: string;
-} {
+type CliResult = { code: number; stdout: string; stderr: string };
+
+export function runCli(
+  argv: readonly string[],
+  readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8'),
+  env: NodeJS.ProcessEnv = process.env,
+): CliResult {
+  const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
+  const rest = argv.filter((arg, i) => !(arg === '--catalogue' || arg.startsWith('--catalogue=') || (i > 0 && argv[i - 1] === '--catalogue')));
+  if (catalogueFile === undefined) return runCalculation(rest, readInput);
+  try {
+    loadUserCatalogue(catalogueFile);
+  } catch (error) {
+    if (error instanceof CatalogueFileError) return { code: 2, stdout: '', stderr: `oilskin: ${error.message}\n` };
+    throw error;
+  }
+  try {
+    return runCalculation(rest, readInput);
+  } finally {
+    uninstallUserCatalogue();
+  }
+}
+
+function runCalculation(argv: readonly string[], readInput: (path: string) => string): CliResult {
   const [name, file] = argv;
   if (!name || name === '--help' || name === '-h') return { code: name ? 0 : 2, stdout: name ? usage() + '\n' : '', stderr: name ? '' : usage() + '\n' };
   const definition = calculationByName(name);
@@ -50,12 +74,12 @@ export async function runCliWithReport(
   argv: readonly string[],
   readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8'),
   writeOutput: (path: string, text: string) => void = (p, text) => writeFileSync(p, text),
-): Promise<{ code: number; stdout: string; stderr: string }> {
+): Promise<CliResult> {
   const at = argv.indexOf('--html');
   if (at < 0) return runCli(argv, readInput);
   const target = argv[at + 1];
   const rest = [...argv.slice(0, at), ...argv.slice(at + 2)];
-  const definition = calculationByName(rest[0] ?? '');
+  const definition = rest.map((a) => calculationByName(a)).find((d) => d !== undefined);
   if (!target || target.startsWith('--') || !definition?.present?.contentTypes['text/html']) return { code: 2, stdout: '', stderr: usage() + '\n' };
   let text = '';
   const out = runCli(rest, (p) => (text = readInput(p)));

@@ -10,7 +10,7 @@ import { mechanismWords, type AssessmentResult, type MechanismName } from '../..
 import { interfaceWaves } from '../../physics/design/questions.js';
 import type { DesignDocument } from '../../physics/design/document.js';
 import type { Envelope } from '../envelope.js';
-import { buildReportPage, plotHeat, plotServiceTime, plotSurfactant, plotWaveMap, type MechanismRow, type ReportFigure } from '../report/index.js';
+import { buildReportPage, STANDARD_SAFETY_CAUTION, plotHeat, plotServiceTime, plotSurfactant, plotWaveMap, type MechanismRow, type ReportFigure } from '../report/index.js';
 
 export const PLOTS = ['service-time', 'wave-map', 'surfactant', 'heat'] as const;
 export type PlotName = (typeof PLOTS)[number];
@@ -168,5 +168,7 @@ export async function assessmentReport(answer: Envelope, design: DesignDocument,
     assumptions: [...answer.assumptions, ...notes],
     warnings: answer.warnings,
     references: answer.references,
+    // The catalogue's notes on the fluids and surfactant this design uses join the standard caution.
+    safetyCaution: [STANDARD_SAFETY_CAUTION, ...answer.safety.map((s) => `${s.name}: ${s.note}`)].join(' '),
   });
 }

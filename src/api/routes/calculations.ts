@@ -61,7 +61,7 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
         out = r;
       }
       reply.header('cache-control', 'no-store');
-      const answer = envelope(out, performance.now() - start);
+      const answer = envelope(out, performance.now() - start, input as object);
       const other = definition.present ? await definition.present.render(answer, input, wanted) : undefined;
       if (other) {
         reply.type(other.contentType);

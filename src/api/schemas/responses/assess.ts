@@ -1,6 +1,6 @@
 /** Response of POST /v1/assess. */
 import { z } from '../zod.js';
-import { DesignEchoSchema, num, numOrNull, ProvenanceSchema, ReferenceSchema, VerdictSchema, WarningSchema } from './common.js';
+import { DesignEchoSchema, envelopeSchema, num, numOrNull, VerdictSchema } from './common.js';
 
 const MECHANISMS = ['wetting', 'retention', 'waves', 'slipAndDrag', 'surfactant', 'heat'] as const;
 const MechanismEnum = z.enum(MECHANISMS);
@@ -79,13 +79,7 @@ export const AssessResultSchema = z
   })
   .openapi('AssessResult');
 
-export const AssessResponse = z
-  .strictObject({
-    inputs: DesignEchoSchema.extend({ requirements: z.record(z.string(), z.number().nullable()).optional() }),
-    result: AssessResultSchema,
-    warnings: z.array(WarningSchema),
-    assumptions: z.array(z.string()),
-    references: z.array(ReferenceSchema),
-    provenance: ProvenanceSchema,
-  })
+/** The common envelope, with the requirements in effect echoed among the inputs (they are part of what was answered). */
+export const AssessResponse = envelopeSchema('AssessResponse', AssessResultSchema)
+  .extend({ inputs: DesignEchoSchema.extend({ requirements: z.record(z.string(), z.number().nullable()).optional() }) })
   .openapi('AssessResponse');
