@@ -28,6 +28,16 @@ export interface CalculationDefinition<Body extends ZodType = ZodType> {
   /** Example request body for the docs (an invented demo scenario). */
   example: unknown;
   compute(input: output<Body>): CalculationOutput;
+  /**
+   * Other representations of the answer, chosen by the request (Accept header, query): the content type and body,
+   * or undefined for the JSON envelope. `contentTypes` lists them for the OpenAPI document.
+   */
+  present?: {
+    contentTypes: Record<string, string>;
+    render(answer: Envelope, input: output<Body>, request: { accept: string; query: Record<string, unknown> }): Promise<{ contentType: string; body: string } | undefined>;
+    /** Checked before the compute, so a bad query costs nothing: a ProblemError for an unknown representation. */
+    check?(request: { accept: string; query: Record<string, unknown> }): void;
+  };
 }
 
 export function defineCalculation<Body extends ZodType>(definition: CalculationDefinition<Body>): CalculationDefinition<Body> {

@@ -42,7 +42,16 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       tags: ['calculations'],
       security: [{}, { apiKey: [] }],
       request: { body: { required: true, content: { 'application/json': { schema: c.body, example: c.example } } } },
-      responses: { 200: { description: 'The result with its inputs, warnings, assumptions, references and provenance', content: { 'application/json': { schema: c.response } } }, ...errorResponses },
+      responses: {
+        200: {
+          description: 'The result with its inputs, warnings, assumptions, references and provenance',
+          content: {
+            'application/json': { schema: c.response },
+            ...Object.fromEntries(Object.entries(c.present?.contentTypes ?? {}).map(([type, description]) => [type, { schema: { type: 'string', description } }])),
+          },
+        },
+        ...errorResponses,
+      },
     });
   }
 

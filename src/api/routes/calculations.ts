@@ -35,6 +35,8 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
   for (const definition of CALCULATIONS) {
     app.post(definition.path, { schema: { response: { 200: responseJsonSchema(definition.response) } } }, async (request, reply) => {
       const input = parseBody(definition, request.body);
+      const wanted = { accept: request.headers.accept ?? '', query: (request.query ?? {}) as Record<string, unknown> };
+      definition.present?.check?.(wanted);
       const start = performance.now();
       const heavy = typeof definition.heavy === 'function' ? definition.heavy(input) : definition.heavy;
       let out;
@@ -59,9 +61,16 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
         out = r;
       }
       reply.header('cache-control', 'no-store');
+      const answer = envelope(out, performance.now() - start, input as object);
+      const other = definition.present ? await definition.present.render(answer, input, wanted) : undefined;
+      if (other) {
+        reply.type(other.contentType);
+        // (The route's reply type knows only the JSON schema; another representation is a string.)
+        return (reply as FastifyReply).send(other.body);
+      }
       reply.type('application/json; charset=utf-8');
       reply.serializer(reply.getSerializationFunction('200') as (payload: unknown) => string);
-      return envelope(out, performance.now() - start, input as object);
+      return answer;
     });
   }
 }

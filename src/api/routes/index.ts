@@ -7,8 +7,9 @@ import { wettingCalculation } from './wetting.js';
 import { retentionCalculation } from './retention.js';
 import { heatCalculation } from './heat.js';
 import { surfactantCalculation } from './surfactant.js';
+import { assessCalculation } from './assess.js';
 
-export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation, surfactantCalculation, heatCalculation].map(
+export const CALCULATIONS: readonly CalculationDefinition[] = [flowCalculation, wettingCalculation, retentionCalculation, slipCalculation, wavesCalculation, surfactantCalculation, heatCalculation, assessCalculation].map(
   (c) => c as unknown as CalculationDefinition,
 );
 

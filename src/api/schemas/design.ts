@@ -8,6 +8,7 @@
  */
 import type { DesignDocument } from '../../physics/design/document.js';
 import { z } from './zod.js';
+import { RequirementsSchema, SensitivitySettingsSchema } from './assess.js';
 import {
   AdsorptionRate,
   ContactAngle,
@@ -215,6 +216,7 @@ export const OptionsSchema = z
     map: z.boolean().optional().openapi({ description: 'Waves: also compute the regime map over a (We_τ, w⁺) grid, for plotting (default false; computed in the worker pool)' }),
     mapResolution: z.number().int().min(2).max(100).optional().openapi({ description: 'Cells per axis of the wave regime map (default 24); implies map: true' }),
     sensitivity: z.strictObject({ points: z.number().int().min(2).max(101) }).optional().openapi({ description: 'Sweep of the lubricant conductivity (heat)' }),
+    marginSensitivities: SensitivitySettingsSchema.optional(),
   })
   .openapi('Options', { description: 'The knobs of the methods; defaults as stated' });
 
@@ -233,6 +235,7 @@ export const DesignSchema = z
     solid: SolidSchema.optional(),
     heating: HeatingSchema.optional(),
     options: OptionsSchema.optional(),
+    requirements: RequirementsSchema.optional(),
   })
   // Mass concentrations to molar ones, once the surfactant and working fluid are known (./concentration.ts).
   .transform(molarConcentrations)

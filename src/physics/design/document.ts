@@ -9,6 +9,7 @@
 import type { FluidSpec, SurfactantSpec } from '../../core/catalogue.js';
 import type { FlowSpec } from '../flow/flow.js';
 import type { ContactAngles } from '../wetting/wetting.js';
+import type { AssessmentRequirements } from './assess-requirements.js';
 
 export interface TextureSpec {
   /** Groove width w, m. */
@@ -82,6 +83,8 @@ export interface DesignOptions {
   mapResolution?: number;
   /** Sweep of the lubricant conductivity (heat). */
   sensitivity?: { points: number };
+  /** Assessment: finite-difference sensitivities of the margins (default enabled, relative step 0.02). */
+  marginSensitivities?: { enabled?: boolean; relativeStep?: number };
 }
 
 export interface DesignDocument {
@@ -97,6 +100,8 @@ export interface DesignDocument {
   solid?: SolidSpec;
   heating?: HeatingSpec;
   options?: DesignOptions;
+  /** What the design must achieve (the assessment's requirements; defaults stated in its answer). */
+  requirements?: AssessmentRequirements;
 }
 
 /** The questions the service answers about a design (one per calculation endpoint). */

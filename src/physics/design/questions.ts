@@ -16,10 +16,10 @@ import type { Reference } from '../../core/references.js';
 import type { InterfaceType } from '../../core/surfactant.js';
 import type { Verdict } from '../../core/values.js';
 import type { FlowResult } from '../flow/flow.js';
-import { evaluateHeat, type HeatResult } from '../heat/heat.js';
+import { evaluateHeat, type HeatInput, type HeatMethod, type HeatResult } from '../heat/heat.js';
 import { evaluateRetention, type RetentionResult } from '../retention/retention.js';
 import { dragChange, type DragChange } from '../slip/drag.js';
-import type { SlipResult } from '../slip/slip.js';
+import type { SlipMethod, SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
 import type { WavesResult } from '../waves/result.js';
 import { evaluateWaves, waveRegimeAtDesign, waveRoughnessWarning } from '../waves/waves.js';
@@ -192,7 +192,7 @@ export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 've
 }
 
 /** POST /v1/retention: how much lubricant stays in the grooves, and how fast the rest drains. */
-export function lubricantRetention(ctx: DesignContext): Answer<Omit<RetentionResult, 'verdict'>> {
+export function lubricantRetention(ctx: DesignContext, overrides: { method?: SlipMethod; duration?: number } = {}): Answer<Omit<RetentionResult, 'verdict'>> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const doc = ctx.document;
@@ -201,7 +201,7 @@ export function lubricantRetention(ctx: DesignContext): Answer<Omit<RetentionRes
     const texture = doc.texture;
     if (texture?.grooveLength === undefined && texture?.segmentLength === undefined) ctx.need(undefined, 'texture.grooveLength', 'retention');
     const options = doc.options ?? {};
-    const method = options.method ?? 'auto';
+    const method = overrides.method ?? options.method ?? 'auto';
     const slip = ctx.slip('retention', method);
     notes.cite(...slip.notes.references);
     notes.assume(`Interfacial shear = wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} from the ${slip.result.method} slip solution.`);
@@ -215,7 +215,7 @@ export function lubricantRetention(ctx: DesignContext): Answer<Omit<RetentionRes
       else inclination = { angle: orientation.inclination, direction: downslope };
     }
     const solubility = doc.lubricant?.solubility;
-    const effective = { method, duration: options.duration ?? 7200, initialFill: options.initialFill ?? 1, targetFill: options.targetFill ?? 0.9 };
+    const effective = { method, duration: overrides.duration ?? options.duration ?? 7200, initialFill: options.initialFill ?? 1, targetFill: options.targetFill ?? 0.9 };
     ctx.echo('options', effective);
     const retention = evaluateRetention({
       scenario,
@@ -244,7 +244,7 @@ export interface SurfactantAnswer extends SurfactantResult {
 }
 
 /** POST /v1/surfactant: how much of the slip survives the water's surfactant? */
-export function surfactantSensitivity(ctx: DesignContext): Answer<SurfactantAnswer> {
+export function surfactantSensitivity(ctx: DesignContext, overrides: { bulkConcentration?: number | number[] } = {}): Answer<SurfactantAnswer> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const doc = ctx.document;
@@ -273,12 +273,13 @@ export function surfactantSensitivity(ctx: DesignContext): Answer<SurfactantAnsw
     }
     const surfactant = ctx.catalogue.surfactant(water.surfactant, interfaceType, 'waterQuality.surfactant');
     const surfactantMethod = options.surfactantMethod ?? 'auto';
+    const bulkConcentration = overrides.bulkConcentration ?? water.bulkConcentration;
     ctx.echo('waterQuality', { surfactant: { id: surfactant.id, name: surfactant.name, interfaceType }, bulkConcentration: water.bulkConcentration });
     ctx.echo('options', { method: options.method ?? 'auto', surfactantMethod });
     const out = evaluateSurfactant({
       scenario,
       surfactant,
-      bulkConcentration: water.bulkConcentration,
+      bulkConcentration,
       temperature: scenario.workingFluid.temperature,
       method: surfactantMethod,
       cleanSlip: {
@@ -298,7 +299,10 @@ export function surfactantSensitivity(ctx: DesignContext): Answer<SurfactantAnsw
 }
 
 /** POST /v1/heat: how the surface changes heat transfer against the same wall with its grooves filled by the solid. */
-export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
+export function heatTransfer(
+  ctx: DesignContext,
+  overrides: { method?: HeatMethod; slip?: HeatInput['slip']; sensitivity?: { points: number } } = {},
+): Answer<HeatResult> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const doc = ctx.document;
@@ -309,7 +313,8 @@ export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
       ctx.fluidProperty(fluid, 'specificHeat', 'heat', `the specific heat of the ${fluid === 'lubricant' ? 'lubricant' : 'working fluid'}`);
     }
     const options = doc.options ?? {};
-    const method = options.method ?? 'auto';
+    const method = overrides.method ?? options.method ?? 'auto';
+    const sensitivity = overrides.sensitivity ?? options.sensitivity;
     // The velocity slip feeds the heat model; the field heat method re-solves it on the cross-section.
     const slip = ctx.slip('heat', method);
     notes.cite(...slip.notes.references);
@@ -319,7 +324,7 @@ export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
     const lubricantMotion = doc.texture?.grooveEnds === 'closed' || doc.texture?.segmentLength !== undefined ? 'zero-net-flux' : 'co-flowing';
     ctx.echo('solid', solid);
     ctx.echo('heating', heating);
-    ctx.echo('options', { method, ...(options.sensitivity ? { sensitivity: options.sensitivity } : {}) });
+    ctx.echo('options', { method, ...(sensitivity ? { sensitivity } : {}) });
     notes.assume(`Lubricant motion in the grooves: ${lubricantMotion} (from texture.grooveEnds and texture.segmentLength).`);
     const heat = evaluateHeat({
       scenario,
@@ -328,11 +333,11 @@ export function heatTransfer(ctx: DesignContext): Answer<HeatResult> {
       heatedWalls: heating.heatedWalls,
       lubricantMotion,
       method,
-      slip: {
+      slip: overrides.slip ?? {
         slipLengthLongitudinal: slip.result.slipLengthAlongFlow,
         ...(drag.kind === 'turbulent-fixed-bulk-reynolds' ? { deltaUPlus: drag.deltaUPlus, dragReduction: drag.dragReduction } : {}),
       },
-      ...(options.sensitivity ? { sensitivity: options.sensitivity } : {}),
+      ...(sensitivity ? { sensitivity } : {}),
     });
     notes.merge(heat);
     return { result: heat.result };

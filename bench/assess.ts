@@ -1,0 +1,89 @@
+/**
+ * HTTP latency of a full assessment against the flow answer, same run: the service as a child process on
+ * 127.0.0.1 (bench/child-service.ts, sources under tsx), autocannon with one connection (latency is the
+ * service's time per request, not queueing), rounds alternating flow / assess so a change in the machine's
+ * load hits both. The figure is the ratio of the median latencies (issue 13 aims at most 20). Two assessment
+ * variants: with the sensitivities (the default: five more assessments) and without them.
+ *
+ *   npx tsx bench/assess.ts [--rounds 2] [--amount 8] [--method closed-form|auto]
+ *
+ * Designs: examples/assess-demo.json (laminar, drains to a steady column: finite-volume timeline) and the same
+ * design in a turbulent 10 mm channel at 1 m/s with a partially wetting lubricant (pinning: lumped timeline).
+ */
+import os from 'node:os';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import autocannon from 'autocannon';
+import { startService } from './child-service.js';
+
+function arg(name: string, fallback: string): string {
+  const i = process.argv.indexOf(`--${name}`);
+  return i > 0 ? String(process.argv[i + 1]) : fallback;
+}
+const rounds = Number(arg('rounds', '2'));
+const amount = Number(arg('amount', '8'));
+const method = arg('method', 'closed-form');
+
+const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../examples/assess-demo.json', import.meta.url)), 'utf8')) as Record<string, unknown>;
+const designs: Record<string, unknown>[] = [
+  { ...demo, options: { ...(demo.options as object), method } },
+  {
+    ...demo,
+    options: { ...(demo.options as object), method },
+    flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
+    contactAngles: { underWorkingFluid: { advancing: 170, receding: 48, equilibrium: 100 } },
+  },
+];
+const flowBodies = designs.map((d) => ({ workingFluid: d.workingFluid, flow: d.flow, texture: d.texture }));
+
+const service = await startService({ sources: true, env: { OILSKIN_LOG_LEVEL: 'warn' } });
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  process.on(signal, () => {
+    service.child.kill();
+    process.exit(130);
+  });
+}
+type Body = Record<string, unknown>;
+const requests = (path: string, bodies: Body[]) => bodies.map((b) => ({ method: 'POST' as const, path, headers: { 'content-type': 'application/json' }, body: JSON.stringify(b) }));
+const quantile = (sorted: number[], q: number): number => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+// autocannon's histogram keeps whole milliseconds; the per-response times it emits are exact.
+async function measure(path: string, bodies: Body[], count: number) {
+  const times: number[] = [];
+  const r = await new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon({ url: service.base, connections: 1, amount: count, requests: requests(path, bodies), timeout: 120 }, (error: unknown, result: autocannon.Result) =>
+      error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve(result),
+    );
+    instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => times.push(responseTime));
+  });
+  const failed = r.non2xx + r.errors + r.timeouts;
+  if (failed > 0) throw new Error(`${path}: ${failed} failed requests`);
+  times.sort((a, b) => a - b);
+  return { p50: quantile(times, 0.5), p90: quantile(times, 0.9), n: times.length };
+}
+
+try {
+  for (const d of designs) {
+    const res = await fetch(`${service.base}/v1/assess`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(d) });
+    const body = (await res.json()) as { result?: { overall?: { verdict: string }; couplings?: { slipMethod: string } } };
+    if (res.status !== 200) throw new Error(`assess answered ${res.status}: ${JSON.stringify(body).slice(0, 400)}`);
+    console.log(`design answers: ${body.result?.overall?.verdict}, slip method ${body.result?.couplings?.slipMethod}`);
+  }
+  const without = designs.map((d) => ({ ...d, options: { ...(d.options as object), marginSensitivities: { enabled: false } } }));
+  await measure('/v1/flow', flowBodies, 100);
+  console.log('oilskin HTTP latency: POST /v1/assess against POST /v1/flow');
+  console.log(
+    `node ${process.version}, ${os.cpus().length} logical cores (${os.cpus()[0]?.model ?? 'unknown'}), load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')}; ` +
+      `autocannon, 1 connection, ${amount} assessments and ${amount * 25} flow requests per round, ${rounds} alternating rounds, slip method ${method}`,
+  );
+  for (let round = 1; round <= rounds; round++) {
+    const flow = await measure('/v1/flow', flowBodies, amount * 25);
+    const bare = await measure('/v1/assess', without, amount);
+    const full = await measure('/v1/assess', designs, amount);
+    console.log(`round ${round} /v1/flow: median ${flow.p50.toFixed(2)} ms, p90 ${flow.p90.toFixed(2)} ms (${flow.n} requests)`);
+    console.log(`round ${round} /v1/assess without sensitivities: median ${bare.p50.toFixed(1)} ms, p90 ${bare.p90.toFixed(1)} ms; ratio to flow ${(bare.p50 / flow.p50).toFixed(0)}`);
+    console.log(`round ${round} /v1/assess with sensitivities: median ${full.p50.toFixed(1)} ms, p90 ${full.p90.toFixed(1)} ms; ratio to flow ${(full.p50 / flow.p50).toFixed(0)}`);
+  }
+  console.log(`load average now ${os.loadavg()[0].toFixed(2)}`);
+} finally {
+  service.child.kill();
+}

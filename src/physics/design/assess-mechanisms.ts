@@ -1,0 +1,283 @@
+/**
+ * The mechanisms of an assessment (./assess.ts), each evaluated with the
+ * couplings between them computed, not listed:
+ *   slip → interfacial shear → retention (the retention runs on the same slip solution as the assessment);
+ *   retention timeline → filled share f(t) → drag of the partly drained surface, DR(t) = f(t)·DR;
+ *   waves → credited drag (a wavy interface is credited no reduction);
+ *   surfactant at the stated concentration → surviving slip → drag and heat;
+ *   heat with the surviving slip and the lubricant's conductivity.
+ * A mechanism the document lacks the parts for is "not assessed", with the reason.
+ */
+import { DomainError, MissingInputError } from '../../core/errors.js';
+import { Notes } from '../../core/notes.js';
+import type { Verdict } from '../../core/values.js';
+import type { DragChange } from '../slip/drag.js';
+import type { SlipMethod } from '../slip/slip.js';
+import type { WaveRegime } from '../waves/criteria.js';
+import type { EffectiveRequirements } from './assess-requirements.js';
+import type { DesignContext } from './context.js';
+import { heatTransfer, interfaceWaves, lubricantRetention, slipAndDrag, surfactantSensitivity, wettingState, type Answer } from './questions.js';
+
+export type MechanismName = 'wetting' | 'retention' | 'waves' | 'slipAndDrag' | 'surfactant' | 'heat';
+export const MECHANISMS: readonly MechanismName[] = ['wetting', 'retention', 'waves', 'slipAndDrag', 'surfactant', 'heat'];
+
+export type MechanismAssessment =
+  | { status: 'assessed'; verdict: Verdict; summary: string }
+  | { status: 'not-assessed'; reason: string };
+
+/** The couplings' effect on the drag reduction and what carried it from one model to the next. */
+export interface CouplingEffects {
+  /** Slip method of the assessment (the retention's interfacial shear comes from the same solution). */
+  slipMethod: 'exact-core' | 'closed-form' | 'field';
+  /** τ_i/τ_w of that slip solution, fed to the retention. */
+  interfacialShearRatio: number;
+  /** Drag reduction of the clean, full, flat interface. */
+  dragReductionClean: number | null;
+  /** Share of the clean slip surviving the stated surfactant concentration (1 when the water is clean or not assessed). */
+  slipRetainedBySurfactant: number;
+  /** Drag reduction with the surviving slip. */
+  dragReductionWithSurfactant: number | null;
+  /** 1 when the interface is calm or marginal (or unknown), 0 when wavy. */
+  waveCredit: number;
+  waveRegime: WaveRegime | null;
+  /** Filled share of the grooves at the service time (1 when retention is not assessed). */
+  filledFractionAtServiceTime: number;
+  /** The drag reduction credited at the start and at the end of the service time. */
+  creditedDragReductionStart: number | null;
+  creditedDragReductionAtServiceTime: number | null;
+  /** Heat-transfer change q/q₀ − 1 with the clean slip and with the surviving slip. */
+  heatTransferChangeClean: number | null;
+  heatTransferChangeWithSurfactant: number | null;
+}
+
+/** Over the service time: filled share and credited drag reduction (null where none can be credited). */
+export interface ServiceTimeline {
+  time: number[];
+  retainedFraction: number[];
+  dragReduction: (number | null)[];
+}
+
+export interface MechanismEvaluation {
+  mechanisms: Record<MechanismName, MechanismAssessment>;
+  couplings: CouplingEffects;
+  serviceTime: ServiceTimeline;
+  /** Heat: the lubricant conductivity sweep, when asked for and heat was assessed. */
+  heatSweep: { lubricantConductivity: number[]; nusseltRatio: (number | null)[]; heatFluxRatio: (number | null)[] } | null;
+  /** Surfactant: slip kept over concentration, when surfactant was assessed. */
+  surfactantCurve: { bulkConcentration: number[]; slipRetained: number[]; stated: number; statedSlipRetained: number } | null;
+  notes: Notes;
+}
+
+/** Runs a question; a part the document lacks (or a case the model does not cover) makes it "not assessed". */
+function attempt<R>(run: () => Answer<R>): { answer: Answer<R> } | { reason: string } {
+  try {
+    return { answer: run() };
+  } catch (error) {
+    if (error instanceof MissingInputError) return { reason: error.message };
+    if (error instanceof DomainError && error.code === 'unsupported-flow') return { reason: error.message };
+    throw error;
+  }
+}
+
+function dragReductionOf(drag: DragChange): number | null {
+  return drag.kind === 'turbulent-fixed-bulk-reynolds' || drag.kind === 'laminar-fixed-flow-rate' ? drag.dragReduction : null;
+}
+
+/** Relative margin value/required − 1 (positive exactly when value exceeds a positive requirement). */
+function ratioMargin(value: number, required: number): number {
+  return value / required - 1;
+}
+
+/** An assessed mechanism: passes exactly when its margin is not negative. */
+function assessed(margin: number, criterion: string, summary: string): MechanismAssessment {
+  return { status: 'assessed', verdict: { passes: margin >= 0, margin, criterion }, summary };
+}
+
+const pct = (x: number) => `${(100 * x).toPrecision(3)} %`;
+
+/** Linear interpolation of a sampled timeline at t (clamped to its ends). */
+function valueAt(times: readonly number[], values: readonly number[], t: number): number {
+  if (t <= times[0]) return values[0];
+  for (let i = 1; i < times.length; i++) {
+    if (t <= times[i]) return values[i - 1] + ((values[i] - values[i - 1]) * (t - times[i - 1])) / (times[i] - times[i - 1]);
+  }
+  return values[values.length - 1];
+}
+
+export interface MechanismOptions {
+  /** Heat conductivity sweep points for the plot (none: no sweep). */
+  heatSweepPoints?: number;
+}
+
+/** Every mechanism on one context, with the couplings computed (module comment). */
+export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRequirements, options: MechanismOptions = {}): MechanismEvaluation {
+  const notes = new Notes();
+  const gather = (a: Answer<unknown>) => {
+    for (const w of a.warnings) notes.warn(w.code, w.message, w.severity);
+    for (const x of a.assumptions) notes.assume(x);
+    notes.cite(...a.references);
+    for (const m of a.models) notes.model(m);
+  };
+  const method: SlipMethod = ctx.document.options?.method ?? 'auto';
+  const serviceTime = requirements.serviceTime.value as number;
+
+  // Slip of the clean, full, flat interface: needed by everything; its absence is the request's fault (422).
+  const slip = slipAndDrag(ctx);
+  gather(slip);
+  const dragClean = dragReductionOf(slip.result.drag);
+
+  // Wetting (only when contact angles are given).
+  const wetting = attempt(() => wettingState(ctx));
+  const mechanisms = {} as Record<MechanismName, MechanismAssessment>;
+  if ('answer' in wetting) {
+    gather(wetting.answer);
+    const v = wetting.answer.verdict as Verdict;
+    mechanisms.wetting = { status: 'assessed', verdict: v, summary: `state ${wetting.answer.result.state}` };
+  } else mechanisms.wetting = { status: 'not-assessed', reason: wetting.reason };
+
+  // Waves, and the credit they leave to the drag reduction.
+  const waves = attempt(() => interfaceWaves(ctx));
+  let waveCredit = 1;
+  let waveRegime: WaveRegime | null = null;
+  if ('answer' in waves) {
+    gather(waves.answer);
+    waveRegime = waves.answer.result.regime;
+    const calmMargin = (waves.answer.verdict as Verdict).margin;
+    const reserve = requirements.minWaveMargin.value as number;
+    const margin = (calmMargin - reserve) / (1 - reserve);
+    mechanisms.waves = assessed(
+      margin,
+      `${waveRegime}: the waves margin 1 − Π_max/½ (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
+      `${waveRegime} (governing: ${waves.answer.result.governingCriterion})`,
+    );
+    if (waveRegime === 'wavy') {
+      waveCredit = 0;
+      notes.warn(
+        'wavy-interface-no-drag-credit',
+        'The interface is wavy: no drag reduction is credited. The slip models assume a flat interface; waves roughen the wall and can turn the reduction into an increase these models do not quantify.',
+      );
+    }
+    notes.assume('Waves → drag: a wavy interface is credited no drag reduction (zero, not the unquantified increase); calm and marginal interfaces keep the flat-interface value.');
+  } else mechanisms.waves = { status: 'not-assessed', reason: waves.reason };
+
+  // Surfactant at the stated concentration (and at the tolerable one) → surviving slip → drag.
+  const tolerable = requirements.tolerableSurfactantConcentration.value;
+  const water = ctx.document.waterQuality;
+  const stated = water === undefined ? undefined : Array.isArray(water.bulkConcentration) ? water.bulkConcentration[0] : water.bulkConcentration;
+  const concentrations = stated === undefined ? undefined : tolerable !== null && tolerable !== stated ? [stated, tolerable] : [stated];
+  const surfactant = attempt(() => surfactantSensitivity(ctx, concentrations ? { bulkConcentration: concentrations } : {}));
+  let slipKept = 1;
+  let dragWithSurfactant = dragClean;
+  let surfactantCurve: MechanismEvaluation['surfactantCurve'] = null;
+  let survivingSlip: { slipLengthLongitudinal: number; deltaUPlus?: number; dragReduction?: number } | undefined;
+  if ('answer' in surfactant && stated !== undefined) {
+    gather(surfactant.answer);
+    const r = surfactant.answer.result;
+    slipKept = r.points[0].slipRetained;
+    dragWithSurfactant = dragReductionOf(r.drag);
+    const keptAtTolerable = (r.points[1] ?? r.points[0]).slipRetained;
+    const tol = tolerable ?? stated;
+    const minKept = requirements.minSlipRetained.value as number;
+    const margin = ratioMargin(keptAtTolerable, minKept);
+    mechanisms.surfactant = assessed(
+      margin,
+      `slip kept at the tolerable concentration ${tol} mol/m³ (${keptAtTolerable.toPrecision(3)}) reaches ${minKept}; margin = kept/required − 1`,
+      `${pct(slipKept)} of the clean slip kept at ${stated} mol/m³ (${r.regime})`,
+    );
+    surfactantCurve = { bulkConcentration: r.curve.bulkConcentration, slipRetained: r.curve.slipRetained, stated, statedSlipRetained: slipKept };
+    survivingSlip = {
+      slipLengthLongitudinal: r.slipLength,
+      ...(r.drag.kind === 'turbulent-fixed-bulk-reynolds' ? { deltaUPlus: r.drag.deltaUPlus, dragReduction: r.drag.dragReduction } : {}),
+    };
+    notes.assume('Surfactant → slip → drag and heat: the slip surviving the stated concentration sets the drag reduction and the heat-transfer change.');
+  } else {
+    mechanisms.surfactant = { status: 'not-assessed', reason: 'reason' in surfactant ? surfactant.reason : 'waterQuality gives no concentration' };
+    notes.assume('No surfactant assessed: the water is taken as clean.');
+  }
+
+  // Retention on the assessment's slip solution; the timeline runs to the service time.
+  const retention = attempt(() => lubricantRetention(ctx, { method, duration: serviceTime }));
+  let times = [0, serviceTime];
+  let filled = [1, 1];
+  if ('answer' in retention) {
+    gather(retention.answer);
+    const r = retention.answer.result;
+    times = r.timeline.map((p) => p.time);
+    filled = r.timeline.map((p) => p.retainedFraction);
+    const atService = valueAt(times, filled, serviceTime);
+    const required = requirements.minRetainedFraction.value as number;
+    const margin = ratioMargin(atService, required);
+    mechanisms.retention = assessed(
+      margin,
+      `retained share of the groove volume after ${serviceTime} s (${atService.toPrecision(3)}) reaches ${required}; margin = share/required − 1`,
+      `${pct(atService)} retained after ${serviceTime} s (${r.bindingMechanism}, ${r.timelineModel} timeline)`,
+    );
+    notes.assume(`Slip → retention: the interfacial shear is the wall shear × ${slip.result.interfacialShearRatio.toPrecision(4)} of the ${slip.result.method} slip solution used for the drag.`);
+  } else {
+    mechanisms.retention = { status: 'not-assessed', reason: retention.reason };
+    notes.assume('Retention not assessed: the grooves are taken as full over the whole service time.');
+  }
+  const filledAtService = valueAt(times, filled, serviceTime);
+  notes.assume(
+    'Drainage → drag: a drained stretch of groove is taken as a no-slip wall (it ignores the small slip of a groove refilled by the working liquid: conservative; common practice, no source). Drained and filled stretches are millimetres long, far longer than the viscous length, so each carries its own wall shear and the drag reduction of the partly drained surface is f(t)·DR, f the filled share.',
+  );
+
+  // Slip and drag: the credited drag reduction at the end of the service time.
+  const base = dragWithSurfactant === null ? null : dragWithSurfactant * waveCredit;
+  const dragSeries = filled.map((f) => (base === null ? null : f * base));
+  const dragEnd = base === null ? null : filledAtService * base;
+  if (dragEnd === null) {
+    mechanisms.slipAndDrag = { status: 'not-assessed', reason: `no drag reduction follows from this flow (${slip.result.drag.kind}): give a channel, pipe or plate flow` };
+  } else {
+    const minDrag = requirements.minDragReduction.value as number;
+    const margin = ratioMargin(dragEnd, minDrag);
+    mechanisms.slipAndDrag = assessed(
+      margin,
+      `drag reduction credited after ${serviceTime} s (${dragEnd.toPrecision(3)}: clean ${dragClean?.toPrecision(3)}, × slip kept, × wave credit ${waveCredit}, × filled share ${filledAtService.toPrecision(3)}) reaches ${minDrag}; margin = DR/required − 1`,
+      `${pct(dragEnd)} drag reduction credited after ${serviceTime} s (clean ${pct(dragClean ?? 0)})`,
+    );
+  }
+
+  // Heat with the surviving slip (closed-form heat model: the field heat method re-solves a clean interface itself).
+  let heatSweep: MechanismEvaluation['heatSweep'] = null;
+  let heatClean: number | null = null;
+  let heatSurviving: number | null = null;
+  const heat = attempt(() => heatTransfer(ctx, { method: 'closed-form', ...(survivingSlip ? { slip: survivingSlip } : {}), ...(options.heatSweepPoints ? { sensitivity: { points: options.heatSweepPoints } } : {}) }));
+  if ('answer' in heat) {
+    gather(heat.answer);
+    const r = heat.answer.result;
+    heatSurviving = r.heatFluxRatio - 1;
+    heatClean = survivingSlip ? heatTransfer(ctx, { method: 'closed-form' }).result.heatFluxRatio - 1 : heatSurviving;
+    const required = requirements.minHeatTransferChange.value as number;
+    const margin = ratioMargin(r.heatFluxRatio, 1 + required);
+    mechanisms.heat = assessed(
+      margin,
+      `heat delivered q/q₀ (${r.heatFluxRatio.toPrecision(4)}) reaches 1 + ${required}; margin = (q/q₀)/(1 + required) − 1`,
+      `${heatSurviving >= 0 ? '+' : ''}${pct(heatSurviving)} heat transfer against the solid-filled wall`,
+    );
+    if (r.sensitivity) heatSweep = { lubricantConductivity: r.sensitivity.lubricantConductivity, nusseltRatio: r.sensitivity.nusseltRatio, heatFluxRatio: r.sensitivity.heatFluxRatio };
+    notes.assume('Heat: the closed-form heat model with the surviving slip and the lubricant’s conductivity, at full grooves.');
+  } else mechanisms.heat = { status: 'not-assessed', reason: heat.reason };
+
+  return {
+    mechanisms,
+    couplings: {
+      slipMethod: slip.result.method,
+      interfacialShearRatio: slip.result.interfacialShearRatio,
+      dragReductionClean: dragClean,
+      slipRetainedBySurfactant: slipKept,
+      dragReductionWithSurfactant: dragWithSurfactant,
+      waveCredit,
+      waveRegime,
+      filledFractionAtServiceTime: filledAtService,
+      creditedDragReductionStart: base === null ? null : filled[0] * base,
+      creditedDragReductionAtServiceTime: dragEnd,
+      heatTransferChangeClean: heatClean,
+      heatTransferChangeWithSurfactant: heatSurviving,
+    },
+    serviceTime: { time: times, retainedFraction: filled, dragReduction: dragSeries },
+    heatSweep,
+    surfactantCurve,
+    notes,
+  };
+}

@@ -1,0 +1,55 @@
+/**
+ * The assessment's overall verdict and requirement defaults, on hand-made mechanism verdicts: the expected answers
+ * follow from the rule documented in src/physics/design/assess.ts (our own definition, no outside source).
+ */
+import { describe, expect, it } from 'vitest';
+import { overallVerdict, THIN_MARGIN, type MechanismAssessment, type MechanismName } from '../../../src/physics/design/assess.js';
+import { effectiveRequirements, REQUIREMENT_DEFAULTS } from '../../../src/physics/design/assess-requirements.js';
+
+const ok = (margin: number): MechanismAssessment => ({ status: 'assessed', verdict: { passes: margin >= 0, margin, criterion: 'test' }, summary: 'test' });
+const none: MechanismAssessment = { status: 'not-assessed', reason: 'not given' };
+const all = (over: Partial<Record<MechanismName, MechanismAssessment>>): Record<MechanismName, MechanismAssessment> => ({
+  wetting: ok(0.5),
+  retention: ok(0.5),
+  waves: ok(0.5),
+  slipAndDrag: ok(0.5),
+  surfactant: ok(0.5),
+  heat: ok(0.5),
+  ...over,
+});
+
+describe('overall verdict', () => {
+  it('fails when any assessed mechanism misses its requirement, and names the smallest margin', () => {
+    const o = overallVerdict(all({ waves: ok(-0.2), heat: ok(-0.7) }), 'calm');
+    expect(o.verdict).toBe('fails');
+    expect(o.limitingMechanism).toBe('heat');
+  });
+  it('works with conditions on a thin margin or a marginal wave regime; works otherwise', () => {
+    expect(overallVerdict(all({ surfactant: ok(THIN_MARGIN / 2) }), 'calm').verdict).toBe('works-with-conditions');
+    expect(overallVerdict(all({}), 'marginal').verdict).toBe('works-with-conditions');
+    expect(overallVerdict(all({}), 'calm').verdict).toBe('works');
+  });
+  it('a displaced lubricant held by pinning (wetting fails, retention passes) is a condition, not the limit', () => {
+    const o = overallVerdict(all({ wetting: ok(-0.3), retention: ok(0.4) }), 'calm');
+    expect(o.verdict).toBe('works-with-conditions');
+    expect(o.limitingMechanism).toBe('retention');
+    expect(overallVerdict(all({ wetting: ok(-0.3), retention: none }), 'calm').verdict).toBe('fails');
+  });
+  it('mechanisms not assessed are listed, never limiting', () => {
+    const o = overallVerdict(all({ heat: none, surfactant: none }), 'calm');
+    expect(o.verdict).toBe('works');
+    expect(o.limitingMechanism).not.toBe('heat');
+    expect(o.summary).toMatch(/Not assessed: surfactant, heat transfer/);
+  });
+});
+
+describe('requirements in effect', () => {
+  it('given values win, then the document (duration, stated concentration), then the defaults', () => {
+    const r = effectiveRequirements({ minDragReduction: 0.1 }, { duration: 600, statedConcentration: 0.01 });
+    expect(r.minDragReduction).toEqual({ value: 0.1, source: 'input' });
+    expect(r.serviceTime).toEqual({ value: 600, source: 'default' });
+    expect(r.tolerableSurfactantConcentration).toEqual({ value: 0.01, source: 'default' });
+    expect(r.minRetainedFraction).toEqual({ value: REQUIREMENT_DEFAULTS.minRetainedFraction, source: 'default' });
+    expect(effectiveRequirements({}, {}).tolerableSurfactantConcentration.value).toBeNull();
+  });
+});
