@@ -39,6 +39,10 @@ function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0
   return n;
 }
 
+function nonEmpty(value: string | undefined): string | undefined {
+  return value === undefined || value.trim() === '' ? undefined : value.trim();
+}
+
 function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
   return (env[name] ?? '')
     .split(',')
@@ -48,8 +52,9 @@ function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig {
   const config: ServiceConfig = {
-    port: intFrom(env, 'OILSKIN_PORT', 8080),
-    host: env.OILSKIN_HOST ?? '0.0.0.0',
+    // Container platforms (Cloud Run, Heroku-style hosts, many PaaS) set PORT and sometimes HOST: ours win when set.
+    port: intFrom(env, env.OILSKIN_PORT ? 'OILSKIN_PORT' : 'PORT', 8080),
+    host: nonEmpty(env.OILSKIN_HOST) ?? nonEmpty(env.HOST) ?? '0.0.0.0',
     logLevel: env.OILSKIN_LOG_LEVEL ?? 'info',
     bodyLimit: intFrom(env, 'OILSKIN_BODY_LIMIT', 262_144),
     apiKeys: listFrom(env, 'OILSKIN_API_KEYS'),
