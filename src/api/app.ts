@@ -123,7 +123,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     });
   }
 
-  await app.register(docsPlugin);
+  await app.register(docsPlugin, { apiKeysConfigured: config.apiKeys.length > 0 });
   await app.register(catalogueRoutes);
   await app.register(calculationRoutes, { pool });
   return app;

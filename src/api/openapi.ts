@@ -104,7 +104,8 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       title: 'oilskin',
       version: SERVICE_VERSION,
       description:
-        'Calculation service for liquid-infused surfaces: flow conditions, wetting state, lubricant retention, interface waves, slip and drag, surfactant sensitivity and heat transfer. Numbers are SI; strings with units are converted; angles are degrees. Errors are RFC 9457 problem details.',
+        'Calculation service for liquid-infused surfaces: flow conditions, wetting state, lubricant retention, interface waves, slip and drag, surfactant sensitivity and heat transfer. Numbers are SI; strings with units are converted; angles are degrees. Errors are RFC 9457 problem details.\n\n' +
+        '**Caution.** Results are engineering estimates from published models within stated validity ranges, not a design approval. Where a result feeds a decision about a pressurised line, a food- or medical-contact coating, or the handling of lubricants, solvents and surfactants, follow the applicable codes and standards and the safety data sheets of the products actually used, and have the decision checked by a qualified engineer. Read the warnings of every response: a result outside its validity range says so there.',
       license: { name: 'Proprietary', identifier: 'LicenseRef-Proprietary' },
       contact: { name: 'oilskin team' },
     },
