@@ -12,6 +12,7 @@ import { problem } from './problem.js';
 import errorsPlugin, { sendProblem } from './plugins/errors.js';
 import metricsPlugin from './plugins/metrics.js';
 import healthPlugin from './plugins/health.js';
+import resultCachePlugin from './plugins/result-cache.js';
 import docsPlugin from './plugins/docs.js';
 import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
@@ -104,6 +105,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     });
   }
   await app.register(metricsPlugin, { poolStats: () => pool.stats() });
+  await app.register(resultCachePlugin, { maxBytes: config.resultCacheMb * 1024 * 1024, registry: app.metricsRegistry });
   await app.register(healthPlugin);
   void pool.ready().then(() => {
     app.solversReady = true;
@@ -124,7 +126,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   }
 
   await app.register(docsPlugin, { apiKeysConfigured: config.apiKeys.length > 0 });
-  await app.register(catalogueRoutes);
+  await app.register(catalogueRoutes, { apiKeysConfigured: config.apiKeys.length > 0 });
   await app.register(calculationRoutes, { pool });
   return app;
 }

@@ -29,6 +29,8 @@ export interface ServiceConfig {
   requestTimeoutMs: number;
   /** Idle keep-alive connections are closed after this long, ms. */
   keepAliveTimeoutMs: number;
+  /** Bound of the in-memory result cache (ETags of recent results, bodies of heavy ones), MB; 0 turns it off. */
+  resultCacheMb: number;
 }
 
 function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0): number {
@@ -70,6 +72,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
+    resultCacheMb: intFrom(env, 'OILSKIN_RESULT_CACHE_MB', 32),
   };
   // Node refuses a header limit longer than the whole-request limit.
   if (config.headersTimeoutMs > config.requestTimeoutMs) {

@@ -12,11 +12,16 @@ declare module 'fastify' {
   interface FastifyRequest {
     startedAt?: bigint;
   }
+  interface FastifyInstance {
+    /** The registry /metrics exposes; other plugins add their metrics to it. */
+    metricsRegistry: Registry;
+  }
 }
 
 export default fp(
   async function metricsPlugin(app: FastifyInstance, options: { poolStats: () => PoolStats }) {
     const registry = new Registry();
+    app.decorate('metricsRegistry', registry);
     collectDefaultMetrics({ register: registry, prefix: 'oilskin_', eventLoopMonitoringPrecision: 20 });
     const requests = new Counter({
       name: 'oilskin_http_requests_total',
