@@ -21,6 +21,16 @@ const errorResponses = {
   429: { description: 'Rate limited', content: problemContent },
   503: { description: 'Overloaded or shutting down', content: problemContent },
 };
+/** HTTP caching (RFC 9110): the validator a client sends back, the tag and policy it receives, the 304 it gets. */
+const conditionalHeaders = z.object({
+  'if-none-match': z.string().optional().openapi({ description: 'The ETag of a result the client holds; when it names this result the answer is 304 with no body (and, when the service remembers the tag, no compute).', example: '"5f2b…"' }),
+});
+const cachingHeaders = (cacheControl: string) => ({
+  ETag: { description: 'Strong entity tag: for a calculation, its inputs hash (provenance.inputsHash) in quotes; for a catalogue, the SHA-256 of its body.', schema: { type: 'string' as const } },
+  'Cache-Control': { description: cacheControl, schema: { type: 'string' as const } },
+});
+const CATALOGUE_CACHING = cachingHeaders('public, max-age=300 (private behind API keys): the catalogue is fixed while the service runs');
+const notModified = { 304: { description: 'Not modified: the If-None-Match tag names this result (no body)' } };
 const methodNotAllowed = { 405: { description: 'Method not allowed on this path', content: problemContent } };
 
 let cached: Record<string, unknown> | undefined;
@@ -39,8 +49,16 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       description: c.description,
       tags: ['calculations'],
       security: [{}, { apiKey: [] }],
-      request: { body: { required: true, content: { 'application/json': { schema: c.body, example: c.example } } } },
-      responses: { 200: { description: 'The result with its inputs, warnings, assumptions, references and provenance', content: { 'application/json': { schema: c.response } } }, ...errorResponses },
+      request: { headers: conditionalHeaders, body: { required: true, content: { 'application/json': { schema: c.body, example: c.example } } } },
+      responses: {
+        200: {
+          description: 'The result with its inputs, warnings, assumptions, references and provenance',
+          headers: cachingHeaders('no-cache: a client may keep the result and revalidate it with If-None-Match'),
+          content: { 'application/json': { schema: c.response } },
+        },
+        ...notModified,
+        ...errorResponses,
+      },
     });
   }
 
@@ -48,11 +66,13 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     method: 'get',
     path: '/v1/fluids',
     operationId: 'listFluids',
+    request: { headers: conditionalHeaders },
     summary: 'The built-in fluid catalogue',
     description: 'Every fluid with each property value at its reference temperature, unit, valid temperature range and source key, and the references those keys name.',
     tags: ['catalogues'],
     responses: {
-      200: { description: 'The catalogue', content: { 'application/json': { schema: FluidsResponse } } },
+      200: { description: 'The catalogue', headers: CATALOGUE_CACHING, content: { 'application/json': { schema: FluidsResponse } } },
+      ...notModified,
       429: errorResponses[429],
     },
   });
@@ -61,15 +81,14 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     method: 'get',
     path: '/v1/surfactants',
     operationId: 'listSurfactants',
+    request: { headers: conditionalHeaders },
     summary: 'The built-in surfactant catalogue',
     description:
       'Each surfactant with, per interface type (air–water, oil–water where data exist), maximum surface excess, Langmuir constant, rate constants, diffusivities, Gibbs prefactor and critical micelle concentration, each with its source.',
     tags: ['catalogues'],
     responses: {
-      200: {
-        description: 'The catalogue',
-        content: { 'application/json': { schema: SurfactantsResponse } },
-      },
+      200: { description: 'The catalogue', headers: CATALOGUE_CACHING, content: { 'application/json': { schema: SurfactantsResponse } } },
+      ...notModified,
       429: errorResponses[429],
     },
   });
