@@ -37,6 +37,8 @@ DESIGN = {
     "workingFluid": {"id": "water", "temperature": "20 degC"},
     "contactAngles": {"underWorkingFluid": {"advancing": 60, "receding": 20}},
     "flow": {"kind": "channel", "height": "2 mm", "bulkVelocity": "0.5 m/s"},
+    "waterQuality": {"surfactant": {"id": "sds"}, "bulkConcentration": "0.001 mM"},
+    "solid": {"thermalConductivity": "0.2 W/(m*K)", "substrateThickness": "20 um"},
     "options": {"method": "closed-form", "surfactantMethod": "scaling"},
 }
 REQUIREMENTS = {"minDragReduction": 0.01, "serviceTime": "2 h", "minRetainedFraction": 0.5}
@@ -129,6 +131,8 @@ def stream_sweep(base_url, sweep, on_progress=None, api_key=None):
     seen = 0
     with _request(base_url, "/v1/sweep", sweep, accept="application/x-ndjson", api_key=api_key) as response:
         for raw in response:
+            if not raw.strip():
+                continue
             line = json.loads(raw)
             kind = line["kind"]
             if kind == "progress":
