@@ -1,5 +1,6 @@
 /** What the harnesses share: the service as a child process on loopback, and a seeded random generator. */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { createServer } from 'node:net';
 import { fileURLToPath } from 'node:url';
 
 export interface ChildService {
@@ -18,9 +19,11 @@ export interface ChildService {
  */
 export async function startService(options: { sources: boolean; env?: Record<string, string> }): Promise<ChildService> {
   const root = fileURLToPath(new URL('..', import.meta.url));
+  // The port is chosen here (a free one from the kernel), not read from the service's log: the log level is the caller's.
+  const port = await freePort();
   const child = spawn(process.execPath, options.sources ? ['--import', 'tsx', 'src/api/server.ts'] : ['dist/src/api/server.js'], {
     cwd: root,
-    env: { ...process.env, OILSKIN_PORT: '0', OILSKIN_HOST: '127.0.0.1', OILSKIN_RATE_LIMIT: '0', OILSKIN_LOG_LEVEL: 'info', ...options.env },
+    env: { ...process.env, OILSKIN_PORT: String(port), OILSKIN_HOST: '127.0.0.1', OILSKIN_RATE_LIMIT: '0', OILSKIN_LOG_LEVEL: 'info', ...options.env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let log = '';
@@ -28,18 +31,6 @@ export async function startService(options: { sources: boolean; env?: Record<str
   child.stdout!.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-200_000)));
   child.stderr!.on('data', (c: Buffer) => (log = (log + c.toString()).slice(-200_000)));
   child.on('exit', (code, signal) => (died = `exit code ${code}, signal ${signal}`));
-  const port = await new Promise<number>((resolve, reject) => {
-    const timer = setInterval(() => {
-      const m = log.match(/Server listening at http:\/\/127\.0\.0\.1:(\d+)/);
-      if (m) {
-        clearInterval(timer);
-        resolve(Number(m[1]));
-      } else if (died) {
-        clearInterval(timer);
-        reject(new Error(`service did not start (${died}): ${log.slice(-2000)}`));
-      }
-    }, 50);
-  });
   const base = `http://127.0.0.1:${port}`;
   // Ready once its solver threads have loaded the model code (GET /readyz answers 200).
   for (let i = 0; i < 1200 && !died; i++) {
@@ -63,4 +54,17 @@ export function seededRandom(seed: number): () => number {
     t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
     return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
   };
+}
+
+/** A TCP port on 127.0.0.1 that is free right now. */
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address !== null ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
 }

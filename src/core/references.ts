@@ -5,8 +5,11 @@
  * tables, data sheets, surfactant compilations) live in
  * src/materials/references.ts; no key appears in both (a test checks).
  *
- * A detail that was recalled and not confirmed against the source while
- * writing says so in the citation text (`from memory`).
+ * A DOI is given only where it was read on a publisher page, in a
+ * Crossref-derived reference list or in the authors' own record. A detail
+ * that could not be confirmed against a readable source says so in its
+ * citation text, with what was searched; docs/citations-ledger.md holds the
+ * verdict for every entry.
  */
 
 export interface Reference {
@@ -39,7 +42,6 @@ export const REFERENCES = bibliography({
   dean1978: {
     citation:
       'Dean, R. B. (1978). Reynolds number dependence of skin friction and other bulk flow variables in two-dimensional rectangular duct flow. J. Fluids Eng. 100(2), 215–223.',
-    doi: '10.1115/1.3448633',
   },
   kim1987: {
     citation: 'Kim, J., Moin, P. & Moser, R. (1987). Turbulence statistics in fully developed channel flow at low Reynolds number. J. Fluid Mech. 177, 133–166.',
@@ -78,12 +80,10 @@ export const REFERENCES = bibliography({
   // --- Wetting -----------------------------------------------------------------------------------
   bico2002: {
     citation: 'Bico, J., Thiele, U. & Quéré, D. (2002). Wetting of textured surfaces. Colloids Surf. A 206, 41–46.',
-    doi: '10.1016/S0927-7757(02)00061-4',
   },
   smith2013: {
     citation:
       'Smith, J. D., Dhiman, R., Anand, S., Reza-Garduno, E., Cohen, R. E., McKinley, G. H. & Varanasi, K. K. (2013). Droplet mobility on lubricant-impregnated surfaces. Soft Matter 9, 1772–1780.',
-    doi: '10.1039/C2SM27032C',
   },
   fowkes1964: {
     citation: 'Fowkes, F. M. (1964). Attractive forces at interfaces. Ind. Eng. Chem. 56(12), 40–52.',
@@ -96,8 +96,8 @@ export const REFERENCES = bibliography({
 
   // --- Slip and drag -----------------------------------------------------------------------------
   philip1972: {
-    citation: 'Philip, J. R. (1972). Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. (ZAMP) 23, 353–372 (DOI from memory).',
-    doi: '10.1007/BF01595477',
+    citation:
+      'Philip, J. R. (1972). Flows satisfying mixed no-slip and no-shear conditions. Z. Angew. Math. Phys. (ZAMP) 23, 353–372 (volume, pages and the DOI from memory: no publisher page, Crossref-derived reference list or bibliography holding them was found by title, DOI or author; no DOI is given for that reason).',
   },
   laugaStone2003: {
     citation: 'Lauga, E. & Stone, H. A. (2003). Effective slip in pressure-driven Stokes flow. J. Fluid Mech. 489, 55–77.',
@@ -105,7 +105,7 @@ export const REFERENCES = bibliography({
   },
   belyaevVinogradova2010: {
     citation:
-      'Belyaev, A. V. & Vinogradova, O. I. (2010). Effective slip in pressure-driven flow past super-hydrophobic stripes. J. Fluid Mech. 652, 489–499 (DOI from memory).',
+      'Belyaev, A. V. & Vinogradova, O. I. (2010). Effective slip in pressure-driven flow past super-hydrophobic stripes. J. Fluid Mech. 652, 489–499; arXiv:0912.1430.',
     doi: '10.1017/S0022112010000741',
   },
   asmolovVinogradova2012: {
@@ -115,9 +115,12 @@ export const REFERENCES = bibliography({
   schoenecker2014: {
     citation:
       'Schönecker, C., Baier, T. & Hardt, S. (2014). Influence of the enclosed fluid on the flow over a microstructured surface in the Cassie state. J. Fluid Mech. 740, 168–195.',
+    doi: '10.1017/jfm.2013.647',
   },
-  bazantVinogradova2008: {
-    citation: 'Bazant, M. Z. & Vinogradova, O. I. (2008). Tensorial hydrodynamic slip. J. Fluid Mech. 613, 125–134 (pages from memory).',
+  kamrinBazantStone2010: {
+    citation:
+      'Kamrin, K., Bazant, M. Z. & Stone, H. A. (2010). Effective slip boundary conditions for arbitrary periodic surfaces: the surface mobility tensor. J. Fluid Mech. 658, 409–437.',
+    doi: '10.1017/S0022112010001801',
   },
   fukagata2006: {
     citation:
@@ -126,22 +129,20 @@ export const REFERENCES = bibliography({
   },
   ibrahim2021: {
     citation:
-      'Ibrahim, J. I., Gómez-de-Segura, G., Chung, D. & García-Mayoral, R. (2021). The smooth-wall-like behaviour of turbulence over drag-altering surfaces: a unifying virtual-origin framework. J. Fluid Mech. 915, A56 (authors and title from memory).',
+      'Ibrahim, J. I., Gómez-de-Segura, G., Chung, D. & García-Mayoral, R. (2021). The smooth-wall-like behaviour of turbulence over drag-altering surfaces: a unifying virtual-origin framework. J. Fluid Mech., published online 18 March 2021.',
   },
 
   // --- Retention ---------------------------------------------------------------------------------
   wexler2015: {
     citation: 'Wexler, J. S., Jacobi, I. & Stone, H. A. (2015). Shear-driven failure of liquid-infused surfaces. Phys. Rev. Lett. 114, 168301.',
-    doi: '10.1103/PhysRevLett.114.168301',
   },
   colosqui2016: {
     citation:
       'Colosqui, C. E., Wexler, J. S., Liu, Y. & Stone, H. A. (2016). Crossover from shear-driven to thermally activated drainage of liquid-infused microscale capillaries. Phys. Rev. Fluids 1, 064101.',
-    doi: '10.1103/PhysRevFluids.1.064101',
   },
   oliver1977: {
-    citation: 'Oliver, J. F., Huh, C. & Mason, S. G. (1977). Resistance to spreading of liquids by sharp edges. J. Colloid Interface Sci. 59, 568–581.',
-    doi: '10.1016/0021-9797(77)90052-2',
+    citation:
+      'Oliver, J. F., Huh, C. & Mason, S. G. (1977). Resistance to spreading of liquids by sharp edges. J. Colloid Interface Sci. 59, 568–581 (volume, pages and the DOI from memory: searched by title, DOI and author without a readable record; no DOI is given for that reason).',
   },
   furmidge1962: {
     citation:
@@ -157,8 +158,8 @@ export const REFERENCES = bibliography({
     citation: 'Lévêque, M. A. (1928). Les lois de la transmission de chaleur par convection. Ann. Mines 13, 201–299.',
   },
   shawHanratty1977: {
-    citation: 'Shaw, D. A. & Hanratty, T. J. (1977). Turbulent mass transfer rates to a wall for large Schmidt numbers. AIChE J. 23, 28–37 (pages from memory).',
-    doi: '10.1002/aic.690230106',
+    citation:
+      'Shaw, D. A. & Hanratty, T. J. (1977). Turbulent mass transfer rates to a wall for large Schmidt numbers. AIChE J. 23, 28–37 (volume, pages and the correlation constants 0.0889 and −0.704 used in physics/retention/dissolution.ts from memory: the paper, a record of it and a page quoting the correlation were searched for by title, DOI and constants without result).',
   },
   wilkeChang1955: {
     citation: 'Wilke, C. R. & Chang, P. (1955). Correlation of diffusion coefficients in dilute solutions. AIChE J. 1, 264–270.',
@@ -179,18 +180,16 @@ export const REFERENCES = bibliography({
   },
   miles1957: {
     citation: 'Miles, J. W. (1957). On the generation of surface waves by shear flows. J. Fluid Mech. 3(2), 185–204.',
-    doi: '10.1017/S0022112057000567',
   },
   farabeeCasarella1991: {
     citation:
-      'Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall pressure fluctuations beneath turbulent boundary layers. Phys. Fluids A 3(10), 2410–2420 (rms level 2.5–3.4 τ_w used here from memory).',
-    doi: '10.1063/1.858179',
+      'Farabee, T. M. & Casarella, M. J. (1991). Spectral features of wall pressure fluctuations beneath turbulent boundary layers. Phys. Fluids A 3(10), 2410–2420 (volume, pages and the rms band 2.5–3.4 τ_w used in physics/waves/criteria.ts from memory: searched by title, DOI, the rms relation and wall-pressure abstracts; the abstracts read say only that the inner-scaled wall-pressure variance grows logarithmically with the friction Reynolds number).',
   },
 
   // --- Surfactant --------------------------------------------------------------------------------
   landel2020: {
     citation:
-      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020). A theory for the slip and drag of superhydrophobic surfaces with surfactant. J. Fluid Mech. 883, A18 (arXiv:1904.01194; DOI 10.1017/jfm.2019.857 from memory).',
+      'Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. & Luzzatto-Fegiz, P. (2020). A theory for the slip and drag of superhydrophobic surfaces with surfactant. J. Fluid Mech. (2020); arXiv:1904.01194.',
   },
   peaudecerf2017: {
     citation:
@@ -199,19 +198,20 @@ export const REFERENCES = bibliography({
   },
   scharfetter1969: {
     citation:
-      'Scharfetter, D. L. & Gummel, H. K. (1969). Large-signal analysis of a silicon Read diode oscillator. IEEE Trans. Electron Devices 16, 64–77 (DOI 10.1109/T-ED.1969.16566 from memory).',
+      'Scharfetter, D. L. & Gummel, H. K. (1969). Large-signal analysis of a silicon Read diode oscillator. IEEE Trans. Electron Devices 16, 64–77.',
+    doi: '10.1109/T-ED.1969.16566',
   },
 
   // --- Heat transfer -----------------------------------------------------------------------------
   mikic1974: {
-    citation: 'Mikić, B. B. (1974). Thermal contact conductance; theoretical considerations. Int. J. Heat Mass Transfer 17, 205–214 (from memory, DOI too).',
+    citation: 'Mikić, B. B. (1974). Thermal contact conductance; theoretical considerations. Int. J. Heat Mass Transfer 17, 205–214.',
     doi: '10.1016/0017-9310(74)90082-9',
   },
   gnielinski1976: {
     citation: 'Gnielinski, V. (1976). New equations for heat and mass transfer in turbulent pipe and channel flow. Int. Chem. Eng. 16(2), 359–368.',
   },
   petukhov1970: {
-    citation: 'Petukhov, B. S. (1970). Heat transfer and friction in turbulent pipe flow with variable physical properties. Advances in Heat Transfer 6, 503–564 (DOI from memory).',
+    citation: 'Petukhov, B. S. (1970). Heat transfer and friction in turbulent pipe flow with variable physical properties. Advances in Heat Transfer 6, 503–564.',
     doi: '10.1016/S0065-2717(08)70153-9',
   },
   dittusBoelter1930: {
@@ -220,13 +220,29 @@ export const REFERENCES = bibliography({
     doi: '10.1016/0735-1933(85)90003-X',
   },
   kader1981: {
-    citation: 'Kader, B. A. (1981). Temperature and concentration profiles in fully turbulent boundary layers. Int. J. Heat Mass Transfer 24(9), 1541–1544 (DOI from memory).',
-    doi: '10.1016/0017-9310(81)90220-9',
+    citation: 'Kader, B. A. (1981). Temperature and concentration profiles in fully turbulent boundary layers. Int. J. Heat Mass Transfer 24(9), 1541–1544.',
   },
   wiener1912: {
     citation:
-      'Wiener, O. (1912). Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (from memory).',
+      'Wiener, O. (1912). Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (series, volume and pages from memory: searched by title and series without a readable record; the bounds themselves are the series and parallel conductances, derived where they are used).',
   },
+  // --- Numerical methods behind committed reference tables ------------------------------------
+  babuskaSuri1990: {
+    citation: 'Babuška, I. & Suri, M. (1990). The p- and h-p versions of the finite element method, an overview. Comput. Methods Appl. Mech. Eng. 80, 5–26.',
+  },
+  hecht2012: {
+    citation: 'Hecht, F. (2012). New development in FreeFem++. J. Numer. Math. 20(3–4), 251–265.',
+    doi: '10.1515/jnum-2012-0013',
+  },
+  taylorHood1973: {
+    citation: 'Taylor, C. & Hood, P. (1973). A numerical solution of the Navier–Stokes equations using the finite element technique. Comput. Fluids 1(1), 73–100.',
+    doi: '10.1016/0045-7930(73)90027-3',
+  },
+  schoeneckerHardt2013: {
+    citation:
+      'Schönecker, C. & Hardt, S. (2013). Longitudinal and transverse flow over a cavity containing a second immiscible fluid. J. Fluid Mech. (published online 1 February 2013); arXiv:1206.5967.',
+  },
+
   patankar1980: {
     citation: 'Patankar, S. V. (1980). Numerical Heat Transfer and Fluid Flow. Hemisphere, Washington, ch. 4.',
   },

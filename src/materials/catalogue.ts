@@ -2,7 +2,8 @@
  * The built-in fluid catalogue: water and seawater here, the lubricant
  * families in their own modules (alkanes, silicones, lubricants). Every
  * property names its source; a value that was recalled and could not be
- * confirmed against that source during writing carries `note: 'from memory …'`.
+ * confirmed against that source during writing carries the recalled-value tag
+ * of records.ts in its note.
  * Temperatures are kelvin, values SI.
  */
 import { REFERENCES, type Reference } from '../core/references.js';
@@ -27,6 +28,7 @@ import {
   seawaterThermalConductivity,
   seawaterViscosity,
 } from './seawater.js';
+import * as MATERIAL_REFERENCES from './references.js';
 import { SILICONE_OILS } from './silicones.js';
 import type { CatalogueFluid, PropertyRecord } from './types.js';
 import type { FluidPropertyName } from '../core/fluid.js';
@@ -44,7 +46,11 @@ import {
 // Water and seawater
 // ---------------------------------------------------------------------------------------------
 
-/** Normal boiling point of water at 101.325 kPa on ITS-90, K (IAPWS-95; from memory). */
+/**
+ * Normal boiling point of water at 101.325 kPa on ITS-90, K: saturated liquid of IAPWS-95 (W. Wagner & A. Pruß 2002,
+ * J. Phys. Chem. Ref. Data 31, 387), 373.1243 K as evaluated by the iapws package
+ * (fixtures/materials/water_seawater.json; checked in the water tests).
+ */
 const WATER_NORMAL_BOILING_POINT = 373.124;
 const WATER_LIQUID_RANGE: Range = { min: 273.15, max: 373.15 };
 
@@ -190,10 +196,25 @@ export interface FluidListing {
   properties: Partial<Record<FluidPropertyName, PropertyListing>>;
 }
 
-/** JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references its values cite. */
+/** Every catalogue source, so that a key named in a description or safety note can be listed with its citation. */
+const CITABLE: readonly Reference[] = [
+  ...Object.values(MATERIAL_REFERENCES).filter(
+    (value): value is Reference => typeof value === 'object' && value !== null && 'key' in value && 'citation' in value,
+  ),
+  REFERENCES.fowkes1964,
+];
+
+/**
+ * JSON-ready catalogue for `GET /v1/fluids`: every fluid, and the references it cites — those of its values
+ * and those whose keys its description or safety note names (a flash point's source, for instance).
+ */
 export function catalogueListing(): { fluids: FluidListing[]; references: Reference[] } {
   const references = new Map<string, Reference>();
   const fluids = FLUIDS.map((fluid) => {
+    const text = `${fluid.description} ${fluid.safety ?? ''}`;
+    for (const reference of CITABLE) {
+      if (text.includes(reference.key)) references.set(reference.key, reference);
+    }
     const properties: Partial<Record<FluidPropertyName, PropertyListing>> = {};
     for (const [name, record] of Object.entries(fluid.properties) as [FluidPropertyName, PropertyRecord][]) {
       references.set(record.source.key, record.source);

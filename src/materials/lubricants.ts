@@ -16,6 +16,7 @@ import {
   PACANSKY_WALTMAN_1997,
   PERFLUORODECALIN_DATA,
   PFPE_FLUID_DATA,
+  USP_LIGHT_MINERAL_OIL,
 } from './references.js';
 import { CELSIUS_ZERO, FROM_MEMORY, around, constant, fromFunction, tabulated } from './records.js';
 import type { CatalogueFluid } from './types.js';
@@ -34,6 +35,8 @@ export const PFPE_GENERIC: CatalogueFluid = {
     "typical of suppliers' product information and recalled: no handbook or peer-reviewed table of this " +
     'class could be read (searched: liquid-infused-surface papers that tabulate their lubricants, e.g. Smith ' +
     'et al. 2013 Soft Matter 9, 1772, and perfluoropolyether property papers); measure and override.',
+  // Pour point and upper limit of requests (taken as the decomposition onset on clean surfaces): recalled with the
+  // rest of this entry (from memory); the upper limit is a cap on requests, not a safe working temperature.
   freezingPoint: CELSIUS_ZERO - 36,
   boilingPoint: CELSIUS_ZERO + 300,
   referenceTemperature: 293.15,
@@ -41,8 +44,8 @@ export const PFPE_GENERIC: CatalogueFluid = {
     'Chemically inert and non-flammable, but hot perfluorinated ethers decompose to toxic gases, carbonyl ' +
     'fluoride among them, and Lewis-acidic surfaces such as aluminium fluoride catalyse the decomposition ' +
     `(${PACANSKY_WALTMAN_1997.key}); carbonyl fluoride hydrolyses to hydrogen fluoride in moist air (common ` +
-    'practice, no source). The onset near 300 °C on clean surfaces is recalled (from memory) and can be much ' +
-    'lower on oxide or metal surfaces: do not heat it in the open or smoke near it. Consult the supplier\'s SDS.',
+    'practice, no source). On oxide or metal surfaces decomposition starts at lower temperatures than on clean ' +
+    'inert ones: do not heat it in the open or smoke near it. Consult the supplier\'s SDS.',
   properties: {
     density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
@@ -65,18 +68,24 @@ export const PERFLUORODECALIN: CatalogueFluid = {
   role: 'lubricant',
   description:
     'Perfluorodecalin (C10F18, cis/trans mixture), a volatile low-viscosity perfluorocarbon lubricant. ' +
-    'Single values at 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
-    `and boiling points from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Density, viscosity and surface ` +
-    'tension are recalled: the J. Chem. Eng. Data and Liquids (2023) measurements found could be identified ' +
-    'but their tables not read.',
+    'Single values near 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
+    `and boiling points and density from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Viscosity and surface ` +
+    'tension are recalled: the J. Chem. Eng. Data and Liquids (2023) measurements found could be ' +
+    'identified but their tables not read.',
   freezingPoint: 264.95,
   boilingPoint: 416.15,
   referenceTemperature: 298.15,
   safety:
     'Non-flammable and of low toxicity; vapour is heavier than air. Thermal decomposition releases hydrogen ' +
-    "fluoride (from memory). Consult the supplier's safety data sheet.",
+    "fluoride (common practice, no source). Consult the supplier's safety data sheet.",
   properties: {
-    density: constant(1917, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    density: constant(
+      1930.525,
+      around(25, 5),
+      CRC_ORGANIC_CONSTANTS,
+      'the CRC Handbook density; the transcription read drops the temperature of the entry (20 or 25 °C), so the ' +
+        'range around 25 °C is ours',
+    ),
     viscosity: constant(5.1e-3, around(25, 3), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
     surfaceTension: constant(17.6e-3, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
     surfaceTensionDispersive: constant(
@@ -95,11 +104,18 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
   description:
     'Light white mineral oil (a mixture of saturated hydrocarbons). Properties vary between suppliers and ' +
     'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C, ' +
-    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found.',
+    'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found. ' +
+    `The pharmacopoeial grade (${USP_LIGHT_MINERAL_OIL.key}) only bounds it: specific gravity 0.818–0.880, ` +
+    'kinematic viscosity 3.0–34.4 mm²/s at 40 °C, a factor of ten.',
   referenceTemperature: 298.15,
   safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
   properties: {
-    density: constant(838, around(25, 5), MINERAL_OIL_DATA, `at 25 °C; ${FROM_MEMORY}`),
+    density: constant(
+      838,
+      around(25, 5),
+      MINERAL_OIL_DATA,
+      `at 25 °C; ${FROM_MEMORY}; inside the pharmacopoeial specific-gravity range 0.818–0.880 (${USP_LIGHT_MINERAL_OIL.key})`,
+    ),
     viscosity: constant(838 * 30e-6, around(25, 3), MINERAL_OIL_DATA, `≈ 30 cSt at 25 °C × density; ${FROM_MEMORY}`),
     surfaceTension: constant(30e-3, around(25, 5), MINERAL_OIL_DATA, `typical value; ${FROM_MEMORY}`),
     surfaceTensionDispersive: constant(

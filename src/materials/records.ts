@@ -8,8 +8,12 @@ import type { PropertyRecord } from './types.js';
 
 export const CELSIUS_ZERO = 273.15;
 
-/** Tag for a value that was recalled and not confirmed against a source read while writing. */
-export const FROM_MEMORY = 'from memory: recalled, not confirmed against the source while writing';
+/**
+ * The tag of a value that was recalled and not confirmed against a source read while writing. Notes that
+ * contain it make the resolvers warn; the literal phrase is defined here once.
+ */
+export const RECALLED_TAG = 'from memory';
+export const FROM_MEMORY = `${RECALLED_TAG}: recalled, not confirmed against the source while writing`;
 
 export type Range = { min: number; max: number };
 

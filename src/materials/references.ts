@@ -146,12 +146,10 @@ export const DARHUBER_2003: Reference = {
   key: 'darhuber2003',
   citation:
     'Surface tension of liquid polydimethylsiloxane, empirical fit to available data γ = 21.5 − 0.06·t mN/m ' +
-    '(t in °C, 0–100 °C) attributed to A. A. Darhuber et al. (2003) in G. Karniadakis, A. Beskok, N. Aluru ' +
+    '(t in °C, 0–100 °C), attributed to A. A. Darhuber et al. (2003) in G. Karniadakis, A. Beskok, N. Aluru ' +
     '(2005), Microflows and Nanoflows: Fundamentals and Simulation, Springer, Interdisciplinary Applied ' +
-    'Mathematics 29, section on surface tension (that passage read). Which 2003 paper of Darhuber and ' +
-    'co-workers holds the fit is not confirmed: Darhuber, Davis, Troian & Reisner, Thermocapillary actuation ' +
-    'of liquid flow on chemically patterned surfaces, Phys. Fluids 15 (2003) (manuscript found; volume from ' +
-    'memory), or Darhuber, Valentino, Troian & Wagner, J. Microelectromech. Syst. 12, 873 (2003) (from memory).',
+    'Mathematics 29, section on surface tension (that passage read; the 2003 paper it names was not identified, ' +
+    'so it is cited through the book).',
 };
 
 export const PFPE_FLUID_DATA: Reference = {
@@ -183,6 +181,14 @@ export const MINERAL_OIL_DATA: Reference = {
   citation:
     "Light white mineral oil (paraffinum liquidum, light grade): typical properties from suppliers' " +
     'product specifications (density at 25 °C; kinematic viscosity grade; recalled, not re-read).',
+};
+
+export const USP_LIGHT_MINERAL_OIL: Reference = {
+  key: 'usp32-light-mineral-oil',
+  citation:
+    'United States Pharmacopeia 32 – National Formulary 27 (2009), monograph Topical Light Mineral Oil (Light ' +
+    'Mineral Oil suitably packaged): specific gravity between 0.818 and 0.880; kinematic viscosity between 3.0 ' +
+    'and 34.4 mm²/s at 40.0 °C (capillary viscometer). Read in the drugfuture.com reproduction of the monograph.',
 };
 
 const CRC_2014 = 'W. M. Haynes (ed.) (2014), CRC Handbook of Chemistry and Physics, 95th ed., CRC Press';
@@ -224,10 +230,10 @@ export const ASSAEL_2012: Reference = {
   citation:
     'M. J. Assael, I. J. Armyra, J. Brillo, S. V. Stankus, J. Wu, W. A. Wakeham (2012), Reference data for the ' +
     'density and viscosity of liquid cadmium, cobalt, gallium, indium, mercury, silicon, thallium, and zinc, ' +
-    'J. Phys. Chem. Ref. Data 41, 033101: gallium density ρ = 6077 − 0.611 (T − 302.914 K) kg/m³ (303–1500 K, ' +
+    'J. Phys. Chem. Ref. Data: gallium density ρ = 6077 − 0.611 (T − 302.914 K) kg/m³ (303–1500 K, ' +
     'uncertainty 0.4 %) and viscosity log₁₀(η/mPa·s) = −0.4465 + 204.03 K/T (Eq. 2, Table 5; 304–800 K, ' +
-    `uncertainty 13.5 %), ${VIA_THERMOLIB}. Title, authors, year, journal, DOI and the uncertainties were read in ` +
-    'the catalogue record of the paper; volume 41 and article number 033101 are from memory.',
+    `uncertainty 13.5 %), ${VIA_THERMOLIB}. Title, authors, year, journal, DOI and the uncertainties read in the ` +
+    'scholar.archive.org record of the paper (volume and article number not shown there, so not given here).',
   doi: '10.1063/1.4729873',
 };
 
@@ -246,9 +252,9 @@ export const GALLIUM_OXIDE_SKIN: Reference = {
   citation:
     'Q. Xu, N. Oudalov, Q. Guo, H. M. Jaeger, E. Brown (2012), Effect of oxidation on the mechanical ' +
     'properties of liquid gallium and eutectic gallium-indium, arXiv:1201.4828 (title, authors and abstract ' +
-    'read); published in Phys. Fluids 24, 063101 (journal volume and article number from memory: not found ' +
-    'in the searched bibliographies): in air or neutral water an oxide skin gives a yield stress and a ' +
-    'surface stress that mimics surface tension, so apparent surface tensions and contact angles depend on ' +
+    'read; the journal version is not cited because no record of it was read): in air or neutral water an ' +
+    'oxide skin gives a yield stress and a surface stress that mimics surface tension, so apparent surface ' +
+    'tensions and contact angles depend on ' +
     'the oxidation state.',
 };
 
@@ -299,5 +305,5 @@ export const MUKERJEE_MYSELS_1971: Reference = {
 
 export const ROSEN_KUNJAPPU_2012: Reference = {
   key: 'rosen2012',
-  citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ (DOI 10.1002/9781118228920 from memory).',
+  citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
 };

@@ -23,6 +23,7 @@ import {
   DARHUBER_2003,
   MELINDER_2010,
   PDMS_FLUID_DATA,
+  SERAT_2017,
 } from './references.js';
 import { CELSIUS_ZERO, FROM_MEMORY, fromFunction, linearInCelsius, type Range } from './records.js';
 import type { CatalogueFluid } from './types.js';
@@ -44,38 +45,40 @@ const PDMS_SURFACE_TENSION = { intercept: 21.5e-3, slope: 0.06e-3, validRange: {
 
 /**
  * What was searched, without a readable table, for the grade values below (25 °C density and thermal
- * conductivity, pour and flash points) and for an interfacial tension against water: the polymer data
- * handbook entry for polydimethylsiloxane (A. C. M. Kuo 1999, Polymer Data Handbook, Oxford University
- * Press: opening pages only), the thermal-conductivity measurements on poly(methylsiloxane) liquids of
- * V. G. Nemzer et al. (1997, J. Chem. Eng. Data 42, 328: abstract only), the lubricant tables of
- * liquid-infused-surface papers (Smith et al. 2013, Soft Matter 9, 1772, and others: abstracts only), and
- * PDMS–water interfacial-tension measurements (none found). DIPPR flash points exist for the linear
- * oligomers only (Serat et al. 2017, up to C26H78O11Si12 at 182 °C), not for polydisperse grades.
+ * conductivity, pour point) and for an interfacial tension against water: the polymer data handbook entry
+ * for polydimethylsiloxane (A. C. M. Kuo 1999, Polymer Data Handbook, Oxford University Press: opening page
+ * only), the thermal-conductivity measurements on poly(methylsiloxane) liquids of V. G. Nemzer et al. (1997,
+ * J. Chem. Eng. Data 42, 328: abstract only), the European Pharmacopoeia dimeticone monograph (the part read
+ * has no density table), the lubricant tables of liquid-infused-surface papers (Smith et al. 2013, Soft
+ * Matter 9, 1772, and others: abstracts only), and PDMS–water interfacial-tension measurements (none found).
  */
 const GRADE_VALUES_SEARCHED =
   'searched without a readable table: the PDMS entry of the Polymer Data Handbook (Kuo 1999), Nemzer et al. ' +
-  '(1997, J. Chem. Eng. Data 42, 328), lubricant tables of liquid-infused-surface papers';
+  '(1997, J. Chem. Eng. Data 42, 328), the European Pharmacopoeia dimeticone monograph, lubricant tables of ' +
+  'liquid-infused-surface papers';
 
+/**
+ * The grade's kinematic viscosity at 25 °C is its definition; the other three numbers are typical values for
+ * the grade, recalled and not confirmed against a source (from memory; what was searched: above).
+ */
 interface SiliconeGrade {
   /** Nominal kinematic viscosity at 25 °C, cSt (mm²/s): the grade's definition. */
   grade: number;
-  /** kg/m³ at 25 °C (typical for the grade; from memory) */
+  /** kg/m³ at 25 °C (recalled). */
   density: number;
-  /** W/(m·K) at 25 °C (typical for the grade; from memory) */
+  /** W/(m·K) at 25 °C (recalled). */
   thermalConductivity: number;
-  /** Pour point, °C (from memory) */
+  /** Pour point, °C (recalled): requests colder than this are refused. */
   pourPointCelsius: number;
-  /** Open-cup flash point, °C (from memory) */
-  flashPointCelsius: number;
 }
 
 const SILICONE_GRADES: SiliconeGrade[] = [
-  { grade: 5, density: 913, thermalConductivity: 0.117, pourPointCelsius: -65, flashPointCelsius: 135 },
-  { grade: 10, density: 935, thermalConductivity: 0.134, pourPointCelsius: -65, flashPointCelsius: 163 },
-  { grade: 20, density: 950, thermalConductivity: 0.142, pourPointCelsius: -60, flashPointCelsius: 232 },
-  { grade: 50, density: 960, thermalConductivity: 0.151, pourPointCelsius: -55, flashPointCelsius: 280 },
-  { grade: 100, density: 965, thermalConductivity: 0.155, pourPointCelsius: -55, flashPointCelsius: 300 },
-  { grade: 1000, density: 970, thermalConductivity: 0.159, pourPointCelsius: -50, flashPointCelsius: 300 },
+  { grade: 5, density: 913, thermalConductivity: 0.117, pourPointCelsius: -65 },
+  { grade: 10, density: 935, thermalConductivity: 0.134, pourPointCelsius: -65 },
+  { grade: 20, density: 950, thermalConductivity: 0.142, pourPointCelsius: -60 },
+  { grade: 50, density: 960, thermalConductivity: 0.151, pourPointCelsius: -55 },
+  { grade: 100, density: 965, thermalConductivity: 0.155, pourPointCelsius: -55 },
+  { grade: 1000, density: 970, thermalConductivity: 0.159, pourPointCelsius: -50 },
 ];
 
 /** f(T)/f(25 °C) for one of Melinder's fits. */
@@ -116,8 +119,10 @@ function siliconeOil(data: SiliconeGrade): CatalogueFluid {
     freezingPoint: CELSIUS_ZERO + data.pourPointCelsius,
     referenceTemperature: REFERENCE_TEMPERATURE,
     safety:
-      `Low toxicity; combustible (flash point about ${data.flashPointCelsius} °C, from memory). Spills are very ` +
-      "slippery. Consult the supplier's safety data sheet.",
+      'Low toxicity; combustible. No flash point is listed for these polydisperse grades: the DIPPR flash points ' +
+      'of the linear dimethylsiloxane oligomers rise with chain length from 27 °C (octamethyltrisiloxane) to ' +
+      `182 °C (hexacosamethyldodecasiloxane, the largest listed) (${SERAT_2017.key}), so the light grades are ` +
+      "the most flammable. Spills are very slippery. Consult the supplier's safety data sheet.",
     properties: {
       density: fromFunction(
         (t) => data.density * DENSITY_RATIO(t),
@@ -130,7 +135,9 @@ function siliconeOil(data: SiliconeGrade): CatalogueFluid {
         (t) => kinematic * data.density * VISCOSITY_RATIO(t),
         range,
         MELINDER_2010,
-        `nominal grade ${data.grade} mm²/s at 25 °C (specified to a few per cent) × the 25 °C density; ${SCALED_NOTE}`,
+        `nominal grade ${data.grade} mm²/s at 25 °C × the 25 °C density (the European Pharmacopoeia dimeticone ` +
+          'monograph, 20–1300 mm²/s grades, allows 90–110 % of the nominal value at 25 °C, as reproduced on a ' +
+          `supplier's page); ${SCALED_NOTE}`,
       ),
       surfaceTension: tension,
       surfaceTensionDispersive: {

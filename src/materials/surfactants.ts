@@ -4,7 +4,8 @@
  * carries one parameter set per interface type for which data exist; a value
  * without a source stays out rather than being guessed. Every value carries
  * its source reference; values recalled but not confirmed against the
- * source say `from memory` in their note.
+ * source carry the recalled-value tag (records.ts) in their note, and the
+ * resolver warns when it uses one.
  *
  * Units (SI): surface excess mol/m², Langmuir constant m³/mol, adsorption
  * rate constant m³/(mol·s), desorption rate constant 1/s, diffusivities
@@ -15,6 +16,7 @@ import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
 import { DomainError } from '../core/errors.js';
 import type { Warning } from '../core/notes.js';
 import { REFERENCES, type Reference } from '../core/references.js';
+import { RECALLED_TAG } from './records.js';
 import { CHANG_FRANSES_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
 
 
@@ -23,7 +25,7 @@ import { CHANG_FRANSES_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_K
 export interface SourcedValue {
   value: number;
   source: Reference;
-  /** e.g. "from memory", "at 25 °C", "assumed equal to the bulk value by the source". */
+  /** e.g. the recalled-value tag, "at 25 °C", "assumed equal to the bulk value by the source". */
   note?: string;
 }
 
@@ -107,10 +109,10 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   },
   {
     id: 'triton-x-100',
-    name: 'Triton X-100 (octylphenol ethoxylate)',
+    name: 'octylphenol ethoxylate (about 9.5 ethylene-oxide units)',
     kind: 'nonionic',
     description:
-      'Nonionic surfactant, polydisperse ethoxylate (about 9.5 ethylene-oxide units). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
+      'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
     bulkDiffusivity: { value: 2.6e-10, source: R.chang1995, note: 'from memory' },
     criticalMicelleConcentration: { value: 0.24, source: R.mukerjee1971, note: 'about 0.2–0.3 mM at 25 °C; from memory' },
     interfaces: {
@@ -223,7 +225,7 @@ export function resolveSurfactant(spec: SurfactantResolveSpec, field = 'surfacta
     if (catalogue) {
       origins[name] = catalogue.source.key;
       refs.set(catalogue.source.key, catalogue.source);
-      if (catalogue.note?.includes('from memory')) {
+      if (catalogue.note?.includes(RECALLED_TAG)) {
         warnings.push({
           code: 'surfactant-value-from-memory',
           severity: 'caution',

@@ -1,7 +1,7 @@
 /**
  * Shapes of the built-in catalogue. Every property value has a source; a
  * value recalled but not confirmed against its source says so in `note`
- * (`from memory`). Temperatures are kelvin, everything else SI.
+ * (the recalled-value tag of records.ts). Temperatures are kelvin, everything else SI.
  */
 import type { FluidPropertyName } from '../core/fluid.js';
 import type { Reference } from '../core/references.js';
@@ -25,7 +25,7 @@ export interface PropertyRecord {
   validRange: { min: number; max: number };
   /** Where the value comes from (one entry may serve many properties). */
   source: Reference;
-  /** e.g. "from memory", "at 25 °C only", "nominal grade value". */
+  /** e.g. the recalled-value tag, "at 25 °C only", "nominal grade value". */
   note?: string;
 }
 

@@ -9,8 +9,9 @@
  * cells uses the series (harmonic) conductance of the two half cells,
  * G = A / (Δ₁/(2k₁) + Δ₂/(2k₂)), which is exact for a layered medium and
  * enforces continuity of φ and of the normal flux k ∂φ/∂n across a material
- * interface lying on a cell face (Patankar 1980, Numerical Heat Transfer and
- * Fluid Flow, Hemisphere, §4.2-3; from memory).
+ * interface lying on a cell face ([derived]: the two half cells conduct in
+ * series; the finite-volume setting is that of Patankar 1980, Numerical Heat
+ * Transfer and Fluid Flow, Hemisphere).
  *
  * The linear system is symmetric positive definite and is solved by the
  * conjugate-gradient method preconditioned with one symmetric multigrid cycle

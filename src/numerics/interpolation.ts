@@ -87,8 +87,8 @@ export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Int
 /**
  * Four-point Lagrange stencil on a uniform grid x_i = start + i·step, i = 0 … count − 1 (count ≥ 4):
  * the first of the four nodes and their weights, so that f(x) ≈ Σ_q weights[q]·f(x_{first+q}).
- * Cubic interpolation, error O(step⁴ f'''') (Abramowitz & Stegun 1964, Handbook of Mathematical
- * Functions, 25.2.13; from memory). x outside the grid is clamped to its ends (`clamped` tells which);
+ * Cubic interpolation, error O(step⁴ f'''') ([derived]: the Lagrange remainder f⁗(ξ)/4! · Π_q (x − x_q)).
+ * x outside the grid is clamped to its ends (`clamped` tells which);
  * the caller decides how to treat such points.
  */
 export interface UniformStencil {
@@ -128,7 +128,8 @@ export function applyStencil(stencil: UniformStencil, rows: readonly ArrayLike<n
 /**
  * Largest |p(t)| on [0, 1] of the polynomial interpolating `values` at the Chebyshev–Lobatto points
  * t_k = (1 − cos(πk/n))/2, k = 0 … n, evaluated by the barycentric formula (weights (−1)^k, halved
- * at both ends; Berrut & Trefethen 2004, SIAM Rev. 46, 501, eq. 5.2; from memory): a scan at 8n
+ * at both ends; Berrut, J.-P. & Trefethen, L. N. 2004, Barycentric Lagrange interpolation, SIAM Rev.
+ * 46(3), 501–517, eq. (5.4)): a scan at 8n
  * points, then golden-section refinement around the best one. Returns the value and its position t.
  */
 export function maxAbsChebyshevLobatto(values: ArrayLike<number>): { value: number; at: number } {

@@ -2,8 +2,8 @@
  * One-dimensional minimisation without derivatives: a coarse scan over a
  * grid (to find the basin of the global minimum among several local ones)
  * followed by golden-section refinement inside the bracketing cell (Kiefer
- * 1953, "Sequential minimax search for a maximum", Proc. Amer. Math. Soc. 4,
- * 502–506, pages from memory; Press et al. 2007, Numerical Recipes 3rd ed.,
+ * 1953, "Sequential minimax search for a maximum", Proc. Amer. Math. Soc. 4(3),
+ * 502–506, doi:10.1090/S0002-9939-1953-0055639-3; Press et al. 2007, Numerical Recipes 3rd ed.,
  * §10.2).
  */
 

@@ -11,12 +11,13 @@
  * scaled by 1/2. Why: aggregation keeps the coarse operators exact for any
  * coefficient jumps and masks (no geometric interpolation across material or
  * solid boundaries is needed), and the factor 1/2 compensates the known
- * over-stiffness of piecewise-constant coarse spaces (Braess 1995, Numer.
- * Linear Algebra Appl. 2, 47–61; Notay 2010, Electron. Trans. Numer. Anal. 37,
- * 123–146; both citations from memory). Smoother: alternating line Gauss–Seidel (rows, then columns) before
+ * over-stiffness of piecewise-constant coarse spaces (Braess, D. 1995, Towards
+ * algebraic multigrid for elliptic problems of second order, Computing 55;
+ * Notay, Y. 2010, An aggregation-based algebraic multigrid method, Electron.
+ * Trans. Numer. Anal. 37, 123–146). Smoother: alternating line Gauss–Seidel (rows, then columns) before
  * and the reverse sequence after the coarse correction, so one V-cycle is a symmetric positive definite
  * preconditioner for CG (Saad 2003, Iterative Methods for Sparse Linear
- * Systems, 2nd ed., SIAM, §9.2 and §13; from memory). The coarsest level is solved by a
+ * Systems, 2nd ed., SIAM, ch. 9 and ch. 13). The coarsest level is solved by a
  * dense Cholesky factorisation.
  */
 
@@ -86,7 +87,7 @@ export function applyFivePoint(op: FivePointOperator, x: Float64Array, y: Float6
  * sequence, so pre- and post-smoothing are adjoint and the cycle stays
  * symmetric. Why lines: graded meshes give cells of aspect ratio ≫ 1, for
  * which point Gauss–Seidel no longer smooths (Trottenberg, Oosterlee &
- * Schüller 2001, Multigrid, Academic Press, §5.1; from memory).
+ * Schüller 2001, Multigrid, Academic Press).
  */
 class LineRelaxation {
   /** Row systems, factored once: Thomas multipliers (lower, modified upper, pivots; dividing by the pivot, not multiplying by its inverse, keeps the rounding of the plain Thomas algorithm). */
@@ -149,7 +150,7 @@ class LineRelaxation {
       let gamma = 0;
       if (periodicX && nx > 2 && (upper[nx - 1] !== 0 || lower[0] !== 0)) {
         // Sherman–Morrison splitting of the corner entries (Press et al. 2007, Numerical Recipes
-        // 3rd ed., §2.7.2; from memory): A = A' + u vᵀ, u = (γ, 0…0, α), v = (1, 0…0, β/γ).
+        // 3rd ed., section "Cyclic Tridiagonal Systems"): A = A' + u vᵀ, u = (γ, 0…0, α), v = (1, 0…0, β/γ).
         alpha = upper[nx - 1];
         beta = lower[0];
         gamma = -main[0];

@@ -11,8 +11,9 @@
  * iteration starts as a damped, physically ordered time march and ends as
  * Newton's method (Kelley, C. T. & Keyes, D. E. 1998, Convergence analysis
  * of pseudo-transient continuation, SIAM J. Numer. Anal. 35, 508–523,
- * doi:10.1137/S0036142996304796, DOI from memory; Mulder, W. A. & van Leer,
- * B. 1985, J. Comput. Phys. 59, 232–246, for the SER rule, from memory).
+ * doi:10.1137/S0036142996304796; Mulder, W. A. & van Leer, B. 1985,
+ * Experiments with implicit upwind methods for the Euler equations,
+ * J. Comput. Phys. 59, 232–246, for the SER rule).
  * Backtracking as in Dennis & Schnabel (1996, SIAM, §6.3).
  *
  * Convergence is judged on the residual relative to a per-row magnitude the

@@ -1,8 +1,8 @@
 /**
  * Two-dimensional Stokes flow across one period of a grooved wall with a flat,
  * impermeable interface (the transverse groove cell), on a staggered (MAC)
- * tensor-product mesh (Harlow & Welch 1965, Phys. Fluids 8, 2182,
- * doi:10.1063/1.1761178, from memory):
+ * tensor-product mesh (Harlow, F. H. & Welch, J. E. 1965, Phys. Fluids 8(12),
+ * 2182–2189, doi:10.1063/1.1761178):
  *
  *     −div(μ grad u) + ∂p/∂x = 0,  −div(μ grad v) + ∂p/∂y = 0,  ∂u/∂x + ∂v/∂y = 0
  *
@@ -18,10 +18,12 @@
  * on S p = −D A⁻¹ f with S = D A⁻¹ Dᵀ (symmetric positive semidefinite, null
  * space = one constant per fluid region), each application of A⁻¹ done by the
  * multigrid-preconditioned CG of ./multigrid.ts, preconditioned by the
- * viscosity-weighted inverse pressure mass matrix μ/|cell|, which is
- * spectrally equivalent to S⁻¹ uniformly in the mesh and in viscosity jumps
- * between regions (Elman, Silvester & Wathen 2014, Finite Elements and Fast
- * Iterative Solvers, 2nd ed., Oxford, §9.2 and §9.3; from memory).
+ * viscosity-weighted inverse pressure mass matrix μ/|cell|. For one viscosity
+ * this is the pressure mass-matrix preconditioner of the Stokes Schur
+ * complement, spectrally equivalent to S⁻¹ uniformly in the mesh (Elman,
+ * Silvester & Wathen 2014, Finite Elements and Fast Iterative Solvers, 2nd ed.,
+ * Oxford University Press); the cell-by-cell 1/μ weighting for the viscosity
+ * jump between the regions is our extension of it, not taken from the book.
  */
 
 import { MultigridPreconditioner, solvePcg, type FivePointOperator } from './multigrid.js';

@@ -4,7 +4,7 @@
  * the inverse B, and the rest follows from the displacement identity
  * B(i+1, j+1) = B(i, j) + (b_{i+1} b_{j+1} − b_{n−1−i} b_{n−1−j})/b_0 (Trench's
  * algorithm; Golub, G. H. & Van Loan, C. F. 2013, Matrix Computations, 4th
- * ed., Johns Hopkins, §4.7, from memory; the identity is checked numerically
+ * ed., Johns Hopkins University Press; the identity is checked numerically
  * in the tests: T·B = I). A dense LU costs O(n³).
  */
 

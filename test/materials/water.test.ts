@@ -10,6 +10,7 @@ import {
   waterViscosity,
   waterViscosityAtDensity,
 } from '../../src/materials/water.js';
+import { getFluid } from '../../src/materials/index.js';
 
 interface WaterPoint {
   temperature: number;
@@ -24,7 +25,7 @@ interface WaterPoint {
 // releases), frozen by fixtures/materials/generate_water_seawater.py.
 const fixture = JSON.parse(
   readFileSync(new URL('../../fixtures/materials/water_seawater.json', import.meta.url), 'utf8'),
-) as { water: WaterPoint[] };
+) as { water: WaterPoint[]; waterDensityMaximumTemperature: number; waterNormalBoilingPoint: number };
 
 function relativeError(actual: number, expected: number): number {
   return Math.abs(actual - expected) / Math.abs(expected);
@@ -40,10 +41,15 @@ describe('density of liquid water at 0.1 MPa (IAPWS SR6-08)', () => {
       expect(relativeError(waterDensity(point.temperature), point.density)).toBeLessThan(1e-6);
     }
   });
-  it('has its maximum near 4 °C (3.98 °C, well-known anomaly of water; from memory)', () => {
-    const d = (t: number) => waterDensity(273.15 + t);
-    expect(d(3.98)).toBeGreaterThan(d(3.0));
-    expect(d(3.98)).toBeGreaterThan(d(5.0));
+  it('has its maximum where IAPWS-95 has it, 3.978 °C at 0.1 MPa (iapws package fixture), to 0.01 K', () => {
+    const tMax = fixture.waterDensityMaximumTemperature;
+    expect(tMax - 273.15).toBeCloseTo(3.978, 3);
+    expect(waterDensity(tMax)).toBeGreaterThan(waterDensity(tMax - 0.01));
+    expect(waterDensity(tMax)).toBeGreaterThan(waterDensity(tMax + 0.01));
+  });
+  it('boils where IAPWS-95 saturates at 101.325 kPa, 373.1243 K (iapws package fixture), as the catalogue lists', () => {
+    expect(fixture.waterNormalBoilingPoint).toBeCloseTo(373.1243, 4);
+    expect(getFluid('water')!.boilingPoint).toBeCloseTo(fixture.waterNormalBoilingPoint, 3);
   });
 });
 

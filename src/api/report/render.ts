@@ -33,9 +33,15 @@ export const COLOURS = {
 } as const;
 
 /**
- * Colours for the requirements that limit a design window, in order: the
- * colour-blind-safe set of Okabe & Ito, "Color Universal Design" (2008,
- * from memory), without its black and without the green kept for "feasible".
+ * Colours for the requirements that limit a design window, in order: six of
+ * the eight colours of M. Okabe & K. Ito, "Color Universal Design (CUD): How
+ * to make figures and presentations that are friendly to Colorblind people"
+ * (J*Fly web page, 2002, modified 2008, jfly.uni-koeln.de/color/; title,
+ * authors and dates read, its RGB table not reached: the hex values are the
+ * ones independent implementations of the set agree on), without its black
+ * and without its bluish green, so that green stays the colour of
+ * "feasible"; the seventh, grey #999999, is our addition, not one of the
+ * eight.
  */
 export const CATEGORY_COLOURS = ['#E69F00', '#56B4E9', '#D55E00', '#0072B2', '#CC79A7', '#F0E442', '#999999'] as const;
 

@@ -94,7 +94,7 @@ export const MODELS = {
   'slip.stripe-closed-form': {
     summary: 'Belyaev–Vinogradova stripes with the lubricant-filled groove’s mean local slip; slip tensor for oblique flow.',
     implementation: belyaevVinogradovaSlipLengthLongitudinal,
-    references: ['philip1972', 'laugaStone2003', 'belyaevVinogradova2010', 'asmolovVinogradova2012', 'schoenecker2014', 'bazantVinogradova2008'],
+    references: ['philip1972', 'laugaStone2003', 'belyaevVinogradova2010', 'asmolovVinogradova2012', 'schoenecker2014', 'kamrinBazantStone2010'],
   },
   'slip.groove-cell-field': {
     summary: 'Exact flat-interface groove-cell field solution (finite volumes, longitudinal and transverse).',

@@ -30,12 +30,12 @@
  * finite-difference reference (fixtures/groove-cell).
  *
  * References
- * 1. Philip J.R. (1972) Flows satisfying mixed no-slip and no-shear conditions.
- *    ZAMP 23, 353–372 (pages and doi:10.1007/BF01595477 from memory).
+ * 1. Philip J.R. (1972) Flows satisfying mixed no-slip and no-shear conditions
+ *    (philip1972, whose citation says which details are unconfirmed).
  * 2. Lauga E., Stone H.A. (2003) Effective slip in pressure-driven Stokes flow.
  *    J. Fluid Mech. 489, 55–77. doi:10.1017/S0022112003004695 (confirmed).
  * 3. Patankar S.V. (1980) Numerical Heat Transfer and Fluid Flow. Hemisphere, §4.2.
- * 4. Richardson L.F. (1911) Phil. Trans. R. Soc. A 210, 307–357 (from memory).
+ * 4. Richardson L.F. (1911) Phil. Trans. R. Soc. Lond. A 210, 307–357. doi:10.1098/rsta.1911.0009.
  */
 
 import { solveCellDiffusion, CellInputError } from '../../numerics/cell-diffusion.js';

@@ -98,7 +98,8 @@ const SHOOTING_STEPS = 1600;
  *  - 'plates-both': η from the mid-plane (L = H/2), g = 0, U = (1 − η² + 4x)/(2/3 + 4x),
  *    s = 2 b_t/H, Nu = 4λ²; limits 7.5407 (x = 0, Shah & London (Shah & London 1978)) and π² (plug).
  *  - 'one-wall': η from the adiabatic no-slip wall (L = H), g = 0,
- *    U = (η − η² + cη)/(1/6 + c/2), c = x/(1 + x), s = b_t/H, Nu = 2λ²; 4.8607 at x = 0 ([1], from memory).
+ *    U = (η − η² + cη)/(1/6 + c/2), c = x/(1 + x), s = b_t/H, Nu = 2λ²; 4.8607 at x = 0 (independent scipy shooting,
+ *    fixtures/heat/laminar.json: 4.86074).
  *  - 'tube': r/R, g = 1, U = (1 − r² + 2β)/(1/2 + 2β), β = b/R, s = b_t/R, Nu = λ²;
  *    limits 3.6568 (Shah & London (Shah & London 1978)) and j₀,₁² = 5.7832 (plug).
  * The ODE is integrated by RK4 (../numerics/ode.ts); λ by Brent's method.

@@ -43,7 +43,8 @@ export function thermalSlipAdiabaticGrooves(pitch: number, interfaceFraction: nu
  * exp(−2πnz/P) and raises the surface temperature by a_n q P/(2πn k_w).
  * Averaging over the ridge multiplies mode n by sin(nπφ_s)/(nπφ_s); summing
  * gives the series. It is the strip form of the constriction (spreading)
- * resistance used for contact conductance by Mikić (Mikić 1974) (from memory).
+ * resistance used for contact conductance (cf. Mikić 1974, mikic1974: context, not the source of the
+ * series, which is derived above).
  * @param pitch P, m (> 0)
  * @param interfaceFraction φ = w/P, 0 < φ < 1
  * @returns b_t, m (> 0); → 0 as φ → 0; for φ → 1, ≈ (P/π) ln(1/(πφ_s)) + (3P/2π) (narrow strip).
@@ -93,7 +94,9 @@ export function grooveThermalResistanceLength(
  * Striped-surface homogenisation with a finite local slip b_s on the stripes
  * (here: thermal slip over the groove mouths, isothermal ridges):
  *   b_eff = (P/π) ln sec(πφ/2) / [1 + (P/(π b_s)) ln(sec(πφ/2) + tan(πφ/2))]
- * (Belyaev & Vinogradova 2010 (Belyaev & Vinogradova 2010), longitudinal stripes; form from memory).
+ * (Belyaev & Vinogradova 2010, belyaevVinogradova2010, longitudinal stripes; form from memory: the paper's
+ * abstract and record were read and arXiv:0912.1430 is open, but its formulas were not reachable with the
+ * search tools; the limits below are checked in the tests).
  * Limits: b_s → ∞ gives the adiabatic-groove result (Philip (Philip 1972)); b_s → 0
  * gives b_eff ≈ b_s ln sec/ln(sec + tan), which reads low against the
  * area average φ b_s for narrow stripes (known deficiency of the formula).

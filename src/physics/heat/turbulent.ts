@@ -52,7 +52,9 @@ export const KADER_THERMAL_SLOPE = 2.12;
 
 /**
  * Kader's (1981) (Kader 1981) additive constant of the thermal log law,
- * β(Pr) = (3.85 Pr^(1/3) − 1.3)² + 2.12 ln Pr (form from memory). Example: Pr = 0.71 → 3.85.
+ * β(Pr) = (3.85 Pr^(1/3) − 1.3)² + 2.12 ln Pr (form from memory: the paper's first page was read, the formula
+ * is further in; two independent wall-law implementations citing Kader use the same form, corroboration only).
+ * Example: Pr = 0.71 → 3.8306 (evaluated).
  */
 export function kaderThermalConstant(prandtl: number): number {
   requirePositive(prandtl, 'prandtlNumber');

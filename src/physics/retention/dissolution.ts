@@ -5,10 +5,10 @@
  * dissolution flux with clean fluid outside. Mass-transfer coefficient k_m:
  * laminar, the Lévêque mean over the groove length L in the wall shear rate
  * S = τ_w/μ_w, k_m = [3/(2 Γ(4/3) 9^(1/3))] (D² S/L)^(1/3) = 0.8075 (D² S/L)^(1/3)
- * (Lévêque 1928, leveque1928; mean coefficient as in Bird, Stewart & Lightfoot
- * 2002, Transport Phenomena, 2nd ed., §12.2, from memory); turbulent, Shaw &
- * Hanratty's high-Schmidt correlation k_m = 0.0889 u_τ Sc^(−0.704)
- * (shawHanratty1977, constants from memory), or the Lévêque value if larger
+ * (Lévêque 1928, leveque1928; the coefficient is the mean over the length of the
+ * Lévêque similarity solution [derived], 3/(2 Γ(4/3) 9^(1/3)) = 0.80755); turbulent,
+ * Shaw & Hanratty's high-Schmidt correlation k_m = 0.0889 u_τ Sc^(−0.704)
+ * (shawHanratty1977, whose citation says that its constants are unconfirmed), or the Lévêque value if larger
  * (short strips). Diffusivity of the lubricant in water from Wilke & Chang
  * (1955, wilkeChang1955): D = 7.4×10⁻⁸ (φ M_w)^½ T/(μ_w V_b^0.6) cm²/s (μ_w in
  * cP, V_b the molar volume at the normal boiling point in cm³/mol, φ = 2.6 for

@@ -50,7 +50,7 @@
  *      liquid-infused surfaces. Phys. Rev. Lett. 114, 168301. doi:10.1103/PhysRevLett.114.168301
  *  [2] Shah, R. K. & London, A. L. 1978 Laminar Flow Forced Convection in Ducts. Academic Press.
  *  [3] Oliver, J. F., Huh, C. & Mason, S. G. 1977 Resistance to spreading of liquids
- *      by sharp edges. J. Colloid Interface Sci. 59, 568–581 (from memory). doi:10.1016/0021-9797(77)90052-2
+ *      by sharp edges (oliver1977, whose citation says which details are unconfirmed).
  *  [4] Colosqui, C. E., Wexler, J. S., Liu, Y. & Stone, H. A. 2016 Crossover from
  *      shear-driven to thermally activated drainage of liquid-infused microscale
  *      capillaries. Phys. Rev. Fluids 1, 064101. doi:10.1103/PhysRevFluids.1.064101

@@ -58,7 +58,7 @@ export function drainageTimeline(input: TimelineInput, notes: Notes): Timeline {
   try {
     const { retainedLength: _retainedLength, finiteVolume: _finiteVolume, ...model } = input;
     // A stalled integration must fail fast (the request has a time budget); the lumped model then answers.
-    const drainage = solveDrainage({ ...model, segments: solvedSegments, maxSteps: 8_000 });
+    const drainage = solveDrainage({ ...model, segments: solvedSegments, maxSteps: 2_000 });
     notes.model('retention.drainage-finite-volume');
     return {
       timeline: drainage.timeline,

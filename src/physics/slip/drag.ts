@@ -83,7 +83,8 @@ export function laminarPipeFlowRateRatio(pipeRadius: number, slipLength: number)
  * The streamwise slip moves the mean profile up by ℓ_x⁺; spanwise slip lets the
  * quasi-streamwise vortices approach the wall, displacing the turbulence origin
  * by ℓ_z⁺ for small ℓ_z⁺ and by at most about 4 wall units (the form of the
- * saturation is from memory, not confirmed against [2]).
+ * saturation and its constant 4 are from memory: not in the abstracts of [1] and [2] read on the publisher
+ * pages; the full text of [2] and later papers quoting the form were searched for by the formula without result).
  * @param streamwiseSlipPlus ℓ_x⁺ = b_x u_τ/ν, ≥ 0
  * @param spanwiseSlipPlus ℓ_z⁺ = b_z u_τ/ν, ≥ 0
  * @returns ΔU⁺, dimensionless (positive = drag reduction).

@@ -205,7 +205,7 @@ export function evaluateSlip(input: SlipInput): Outcome<SlipResult> {
     REFERENCES.belyaevVinogradova2010,
     REFERENCES.asmolovVinogradova2012,
     REFERENCES.schoenecker2014,
-    REFERENCES.bazantVinogradova2008,
+    REFERENCES.kamrinBazantStone2010,
     REFERENCES.shahLondon1978, REFERENCES.white2006,
   );
   notes.assume('Flat lubricant–working-liquid interface pinned at the groove edges; Stokes flow inside the texture.');

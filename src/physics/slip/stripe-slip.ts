@@ -92,15 +92,16 @@ export function belyaevVinogradovaSlipLengthTransverse(pitch: number, grooveWidt
 
 /**
  * Effective slip tensor of a striped wall seen by a mean flow at angle θ to the
- * stripes [1, 2]: along the flow b(θ) = b_∥ cos²θ + b_⊥ sin²θ, across it
+ * stripes ([derived]: the slip length is a symmetric tensor with eigenvalues b_∥ and b_⊥ [1, 2], rotated by θ):
+ * along the flow b(θ) = b_∥ cos²θ + b_⊥ sin²θ, across it
  * (the slip velocity component perpendicular to the mean shear, per unit of it)
  * b_×(θ) = (b_∥ − b_⊥) sin θ cos θ.
  * @param slipLengthLongitudinal b_∥, m
  * @param slipLengthTransverse b_⊥, m
  * @param flowAngle θ, degrees (0 = flow along the grooves)
  * @returns { alongFlow, crossFlow } in m.
- * References: [1] Bazant & Vinogradova 2008, J. Fluid Mech. 613, 125 (tensorial slip);
- * [2] Belyaev & Vinogradova 2010, J. Fluid Mech. 652, 489.
+ * References: [1] Kamrin, Bazant & Stone 2010 (kamrinBazantStone2010: the surface mobility tensor);
+ * [2] Belyaev & Vinogradova 2010 (belyaevVinogradova2010: eigenvalues of the slip-length tensor).
  */
 export function obliqueSlipLengths(
   slipLengthLongitudinal: number,

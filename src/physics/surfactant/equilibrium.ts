@@ -6,8 +6,8 @@
  * References:
  * [1] Chang, C.-H. & Franses, E. I. (1995) Colloids Surf. A 100, 1–45,
  *     doi:10.1016/0927-7757(94)03061-4 (Langmuir isotherm and the
- *     Szyszkowski/Langmuir equation of state, their eqs. for the Langmuir
- *     framework; equation numbers not re-checked: from memory).
+ *     Szyszkowski/Langmuir equation of state of the Langmuir framework; no
+ *     equation numbers are cited).
  * [2] Prosser, A. J. & Franses, E. I. (2001) Colloids Surf. A 178, 1–40,
  *     doi:10.1016/S0927-7757(00)00706-8 (prefactor n = 2 for ionic
  *     surfactants without salt in the Gibbs equation).

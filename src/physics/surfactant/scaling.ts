@@ -37,9 +37,8 @@
  * (surfactant-solver.ts), which carries the local drag explicitly.
  *
  * References:
- * [1] Landel et al. (2020) J. Fluid Mech. 883, A18, doi:10.1017/jfm.2019.857 (DOI from memory), arXiv:1904.01194.
- * [2] Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions.
- *     Z. Angew. Math. Phys. 23, 353–372, doi:10.1007/BF01595477 (DOI from memory).
+ * [1] Landel et al. (2020) J. Fluid Mech., arXiv:1904.01194 (landel2020).
+ * [2] Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions (philip1972).
  */
 import { solveDense } from '../../numerics/linalg.js';
 import { GAS_CONSTANT } from '../../core/constants.js';

@@ -33,8 +33,8 @@
  *
  * References:
  * [1] Landel, J. R., Peaudecerf, F. J., Temprano-Coleto, F., Gibou, F., Goldstein, R. E. &
- *     Luzzatto-Fegiz, P. (2020) J. Fluid Mech. 883, A18, arXiv:1904.01194.
- * [2] Philip, J. R. (1972) Z. Angew. Math. Phys. 23, 353–372, doi:10.1007/BF01595477 (DOI from memory).
+ *     Luzzatto-Fegiz, P. (2020) J. Fluid Mech., arXiv:1904.01194 (landel2020).
+ * [2] Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions (philip1972).
  * [3] Peaudecerf, F. J., Landel, J. R., Goldstein, R. E. & Luzzatto-Fegiz, P. (2017) Traces of
  *     surfactants can severely limit the drag reduction of superhydrophobic surfaces.
  *     Proc. Natl Acad. Sci. USA 114, 7254–7259, doi:10.1073/pnas.1702469114.

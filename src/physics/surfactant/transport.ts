@@ -24,7 +24,7 @@
  * Flux: finite volumes with the exponentially fitted (Scharfetter–Gummel /
  * Il'in) flux, exact for constant coefficients and stable at any cell Péclet
  * number (Scharfetter & Gummel 1969, IEEE Trans. Electron Devices 16, 64–77,
- * doi:10.1109/T-ED.1969.16566, DOI from memory).
+ * doi:10.1109/T-ED.1969.16566).
  *
  * References:
  * [1] Landel et al. (2020) J. Fluid Mech. 883, A18, arXiv:1904.01194.

@@ -33,7 +33,11 @@ export type WaveCriterion = 'inertial-capillary' | 'kelvin-helmholtz' | 'depinni
 export const CALM_LIMIT = 0.5;
 export const SCALING_WAVY_LIMIT = 2;
 export const PHYSICAL_WAVY_LIMIT = 1;
-/** p′_rms/τ_w band (Farabee & Casarella 1991, from memory). */
+/**
+ * p′_rms/τ_w band attributed to Farabee & Casarella 1991 (farabeeCasarella1991, whose citation says the band
+ * is unconfirmed). Safety: the upper value is what triggers the depinning warning; a higher true level would
+ * make depinning start at lower flow.
+ */
 export const PRESSURE_FLUCTUATION_LOW = 2.5;
 export const PRESSURE_FLUCTUATION_HIGH = 3.4;
 

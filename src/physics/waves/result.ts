@@ -81,7 +81,7 @@ export interface WavesResult {
   staticChecks: {
     /** 2γ/w, Pa. */
     depinningPressure: number;
-    /** p′_rms range, Pa: 2.5 and 3.4 ρu_τ² (Farabee & Casarella 1991, from memory); 0 in laminar flow. */
+    /** p′_rms range, Pa: 2.5 and 3.4 ρu_τ² (PRESSURE_FLUCTUATION_LOW/HIGH in ./criteria.ts); 0 in laminar flow. */
     wallPressureFluctuationLow: number;
     wallPressureFluctuationHigh: number;
     /** p′_rms(high)/(2γ/w). */

@@ -24,7 +24,7 @@
  *
  * References (full citations under these keys in src/core/references.ts):
  * chandrasekhar1961, lamb1932, drazinReid1981, miles1957,
- * farabeeCasarella1991 (p′_rms/τ_w ≈ 2.5–3.4 from memory), spalding1961.
+ * farabeeCasarella1991 (p′_rms/τ_w ≈ 2.5–3.4, see ./criteria.ts), spalding1961.
  */
 import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome, type Warning } from '../../core/notes.js';

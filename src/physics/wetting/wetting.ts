@@ -25,7 +25,7 @@
  * is taken, in this order: as given; from the in-air angles by Young's law,
  *   cos θ_os(w) = (γ_oa cos θ_os(a) − γ_wa cos θ_ws(a))/γ_ow   [derived, ref. 2];
  * or from the advancing and receding angles under the working fluid by Tadmor's
- * relation [4] (formula from memory).
+ * relation [4] (tadmorEquilibriumAngle below, with the status of its formula).
  *
  * Missing interfacial tension: catalogue value against water for water and
  * seawater, otherwise the Fowkes estimate [3] γ_ow = γ_o + γ_w − 2√(γ_o^d γ_w^d).
@@ -48,7 +48,10 @@ import { REFERENCES } from '../../core/references.js';
 import type { Texture } from '../scenario.js';
 import type { SourcedNumber, Verdict } from '../../core/values.js';
 
-/** Dispersive part of water's surface tension, N/m (Fowkes 1964, 21.8 ± 0.7 mN/m at 20 °C; from memory). */
+/**
+ * Dispersive part of water's surface tension, N/m: 21.8 mN/m (Fowkes 1964; the ±0.7 and 20 °C from memory:
+ * the paper was not reachable; probe-liquid tables read list the same 21.8 mN/m, corroboration only).
+ */
 export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
 
 /** Contact angles (degrees) of the lubricant on the flat solid under the working fluid, through the lubricant. */
@@ -173,7 +176,9 @@ export function fowkesInterfacialTension(
 
 /**
  * Young angle from the advancing and receding angles by Tadmor's relation [4]
- * (from memory): cos θ₀ = (Γ_A cos θ_A + Γ_R cos θ_R)/(Γ_A + Γ_R),
+ * (formula from memory: the paper's record and abstract were read — it back-calculates θ₀ from θ_A and
+ * θ_R — but not the formula; an open-source contact-angle boundary condition citing the paper uses the
+ * same form, which is corroboration, not a source): cos θ₀ = (Γ_A cos θ_A + Γ_R cos θ_R)/(Γ_A + Γ_R),
  * Γ_X = (sin³θ_X/(2 − 3cos θ_X + cos³θ_X))^(1/3). Degrees in, degrees out.
  */
 export function tadmorEquilibriumAngle(advancing: number, receding: number): number {

@@ -31,7 +31,7 @@ describe('transverse slip core: published limits', () => {
     expect(r.localSlipAtCentre).toBeNull();
   });
 
-  it('N = 0 centre velocity (Philip profile, form from memory) agrees with the N → 0 limit of the Galerkin solution (our solver, limit)', () => {
+  it('N = 0 centre velocity (Philip profile, derived in the source comment) agrees with the N → 0 limit of the Galerkin solution (our solver, limit)', () => {
     for (const phi of [0.2, 0.5, 0.9]) {
       expect(relative(cell(phi, 1, 1e-9).centreInterfaceVelocity, cell(phi, 1, 0).centreInterfaceVelocity)).toBeLessThan(1e-3);
     }

@@ -84,16 +84,13 @@ describe('pressure-driven groove with a stress-free lid', () => {
 });
 
 describe('rectangular duct f·Re', () => {
-  // Shah & London (1978), Laminar Flow Forced Convection in Ducts, rectangular-duct table (values from memory).
-  const table: [number, number][] = [
-    [1, 14.227],
-    [0.5, 15.548],
-    [0.25, 18.233],
-    [0.125, 20.585],
-  ];
-  for (const [alpha, fRe] of table) {
-    it(`aspect ${alpha}: f·Re = ${fRe} (Shah & London 1978, from memory)`, () => {
-      expect(rectangularDuctFrictionReynolds(alpha)).toBeCloseTo(fRe, 3);
+  // Exact series summed to 30 digits with mpmath by fixtures/heat/generate_ducts.py.
+  const ducts = JSON.parse(readFileSync(new URL('../../../fixtures/heat/ducts.json', import.meta.url), 'utf8')) as {
+    ducts: { aspectRatio: number; frictionFactorReynolds: number }[];
+  };
+  for (const { aspectRatio, frictionFactorReynolds } of ducts.ducts) {
+    it(`aspect ${aspectRatio}: f·Re = ${frictionFactorReynolds.toFixed(4)} (exact series, fixtures/heat/ducts.json)`, () => {
+      expect(Math.abs(rectangularDuctFrictionReynolds(aspectRatio) / frictionFactorReynolds - 1)).toBeLessThan(1e-9);
     });
   }
   it('parallel plates: f·Re → 24 as α → 0 (exact plane Poiseuille flow); α and 1/α are the same duct', () => {

@@ -43,10 +43,11 @@ describe('laminar uniform-flux closed forms', () => {
 });
 
 describe('laminar uniform-temperature eigenproblem (shooting)', () => {
-  it('Shah & London (1978): plates 7.541, tube 3.657; one wall heated other insulated 4.861 (from memory)', () => {
-    expect(nusseltUniformTemperature('plates-both', 0, 0).nusselt).toBeCloseTo(7.541, 3);
-    expect(nusseltUniformTemperature('tube', 0, 0).nusselt).toBeCloseTo(3.657, 3);
-    expect(nusseltUniformTemperature('one-wall', 0, 0).nusselt).toBeCloseTo(4.861, 3);
+  it('no slip: plates 7.5407, tube 3.6568, one wall heated other insulated 4.8607 (scipy DOP853 shooting, fixtures/heat/laminar.json)', () => {
+    const noSlip = (laminar.uniformTemperature as { x: number; y: number; platesBoth: number; oneWall: number; tube: number }[]).find((p) => p.x === 0 && p.y === 0)!;
+    expect(nusseltUniformTemperature('plates-both', 0, 0).nusselt).toBeCloseTo(noSlip.platesBoth, 8);
+    expect(nusseltUniformTemperature('tube', 0, 0).nusselt).toBeCloseTo(noSlip.tube, 8);
+    expect(nusseltUniformTemperature('one-wall', 0, 0).nusselt).toBeCloseTo(noSlip.oneWall, 8);
   });
   it('plug-flow limits π² (plates) and j₀,₁² = 5.783 (tube) (exact: cos and J₀ eigenfunctions)', () => {
     expect(nusseltUniformTemperature('plates-both', 1e8, 0).nusselt).toBeCloseTo(Math.PI ** 2, 5);

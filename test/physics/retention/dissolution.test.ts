@@ -36,7 +36,8 @@ describe('dissolution lifetime', () => {
       flow: evaluateFlow({ density: 998, viscosity: 1.0e-3 }, { kind: 'channel', height: 0.01, bulkVelocity: 1 }).result,
       interfacialTension: 0.02,
     };
-    // Decane: solubility about 0.05 mg/L, M = 0.142 kg/mol, Le Bas volume about 229 cm³/mol (all from memory).
+    // Decane: M = 0.14228 kg/mol (C10H22); solubility about 0.05 mg/L and Le Bas volume about 229 cm³/mol from memory
+    // (not searched; an order-of-magnitude test: either value would have to be off by ×10 to change its outcome).
     const solubility = { value: 5.2e-5, unit: 'kg/m3' as const, molarMass: 0.14228, molarVolumeAtBoilingPoint: 229e-6 };
     const r = dissolutionLifetime({ solubility, scenario, grooveLength: 0.05 }, new Notes());
     const months = r.lifetime! / (30 * 86400);

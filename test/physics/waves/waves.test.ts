@@ -10,7 +10,7 @@ import type { WaveRegime } from '../../../src/physics/waves/criteria.js';
 import { velocityPlusAtWallDistance } from '../../../src/physics/flow/wall-profile.js';
 
 // Fluids: water at 20 °C (ρ = 998.2 kg/m³, μ = 1.002 mPa·s; IAPWS values, common practice),
-// n-hexadecane (ρ ≈ 773 kg/m³, γ_ow ≈ 0.053 N/m; from memory) — inputs, not check values.
+// a hexadecane-like oil (ρ = 773 kg/m³, γ_ow = 0.053 N/m, round values near the catalogue's n-hexadecane) — inputs, not check values.
 function fluid(name: string, density: number, viscosity: number): FluidState {
   return { id: 'custom', name, temperature: 293.15, density, viscosity, origins: {}, references: [], warnings: [] };
 }
@@ -223,7 +223,7 @@ describe('evaluateWaves: design outputs', () => {
     expect(least / kh.criticalVelocityDifference - 1).toBeLessThan(2e-3); // curve spacing 6 % in k around a quadratic minimum
   });
 
-  it('depinning: p′_rms band 2.5–3.4 τ_w (Farabee & Casarella 1991, from memory) against 2γ/w, warning once exceeded', () => {
+  it('depinning: the p′_rms band of waves/criteria.ts (2.5–3.4 τ_w; its source is unconfirmed, see farabeeCasarella1991) against 2γ/w, warning once exceeded', () => {
     const checks = worked.result.staticChecks;
     expect(checks.wallPressureFluctuationLow / (2.5 * 3.65)).toBeCloseTo(1, 2);
     expect(checks.wallPressureFluctuationHigh / (3.4 * 3.65)).toBeCloseTo(1, 2);

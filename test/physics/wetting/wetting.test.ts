@@ -18,14 +18,15 @@ const hexadecane = fluid('custom-hexadecane', { density: 773, viscosity: 3.0e-3,
 const texture: Texture = { grooveWidth: 50e-6, pitch: 100e-6, grooveDepth: 20e-6, flowAngle: 0 };
 
 describe('interfacial tension (Fowkes 1964)', () => {
-  it('n-hexadecane/water: 51.3 mN/m against the measured 53.3 mN/m', () => {
+  it('n-hexadecane/water: 51.3 mN/m against the measured 53.5 mN/m', () => {
     const value = fowkesInterfacialTension(0.0275, 0.0275, 0.0728, 0.0218);
     // Exact arithmetic of the Fowkes rule with Fowkes' own inputs (γ_w = 72.8, γ_w^d = 21.8, γ_o = 27.5 mN/m):
     expect(value).toBeCloseTo(0.0275 + 0.0728 - 2 * Math.sqrt(0.0275 * 0.0218), 15);
     expect(value * 1e3).toBeCloseTo(51.33, 2);
-    // Measured n-hexadecane/water at 20 °C, 53.3 mN/m: Goebel & Lunkenheimer 1997, Langmuir 13, 369 (value from memory).
-    // The estimate must fall within 5 % of the measurement.
-    expect(Math.abs(value * 1e3 - 53.3) / 53.3).toBeLessThan(0.05);
+    // Measured n-hexadecane/water, 53.5 mN/m: the published value that D. Wu & V. Hornof (1999), Chem. Eng. Commun.
+    // 172, 85–106, quote and reproduce by drop-volume tensiometry (abstract read; room temperature). The catalogue
+    // lists the same value with the same source. The estimate must fall within 5 % of the measurement (it is 4.1 % below).
+    expect(Math.abs(value * 1e3 - 53.5) / 53.5).toBeLessThan(0.05);
   });
 
   it('evaluateWetting uses Fowkes when neither input nor catalogue gives it, with a warning', () => {

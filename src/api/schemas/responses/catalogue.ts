@@ -8,7 +8,7 @@ export const CatalogueValueSchema = z
     unit: z.string(),
     source: z.string().openapi({ description: 'Key of the source in the listing’s references' }),
     validRange: z.strictObject({ min: z.number(), max: z.number() }).optional().openapi({ description: 'Temperature range of the source, K (fluids)' }),
-    note: z.string().optional().openapi({ description: 'e.g. "from memory", "at 25 °C only"' }),
+    note: z.string().optional().openapi({ description: 'e.g. "at 25 °C only"; a value recalled and not confirmed against its source says so here' }),
   })
   .openapi('CatalogueValue');
 
