@@ -1491,7 +1491,7 @@ export interface components {
                 min: number;
                 max: number;
             };
-            /** @description e.g. "from memory", "at 25 °C only" */
+            /** @description e.g. "at 25 °C only"; a value recalled and not confirmed against its source says so here */
             note?: string;
         };
         SurfactantsResponse: {
