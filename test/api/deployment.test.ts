@@ -47,7 +47,8 @@ describe('Kubernetes manifests', () => {
 describe('Dockerfile and compose', () => {
   const dockerfile = read('Dockerfile');
   it('is multi-stage on an official slim image of a supported Node LTS, runs as non-root, has a HEALTHCHECK on /healthz', () => {
-    // Node 20 reached end of life on 2026-04-30; 22 is supported to 2027-04-30, 24 to 2028-04-30 (Node.js release schedule, from memory).
+    // Node.js release policy (nodejs.org/en/about/releases): an even release is supported to April 30 three years after its
+    // April release (v18: 2022-04-19 to 2025-04-30), so v20 ended on 2026-04-30; v22 runs to 2027, v24 to 2028.
     expect(dockerfile.match(/^FROM node:(22|24)[\w.-]*slim/gm)?.length).toBeGreaterThanOrEqual(2);
     expect(dockerfile).not.toMatch(/^FROM node:(1\d|20|21|23)\b/m);
     expect(dockerfile).toMatch(/--omit=dev/);

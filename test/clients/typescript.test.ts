@@ -85,11 +85,12 @@ describe('TypeScript client against a live service', () => {
     const answer = await client.flow(design);
     expectTypeOf(answer.result.wallShearStress).toEqualTypeOf<number>();
     expectTypeOf(answer).toEqualTypeOf<ResultOf<'/v1/flow'>>();
-    // Dean (1978), J. Fluids Eng. 100, 215: c_f = 0.073 Re_m^(-1/4), Re_m = U·H/ν on the full height; water at 20 °C:
-    // ρ = 998.21 kg/m³ (IAPWS-95), μ = 1.0016 mPa·s (IAPWS 2008) (both from memory); τ_w = c_f ρ U²/2.
-    const density = 998.21;
-    const reynolds = (density * 1 * 0.01) / 1.0016e-3;
-    expect(answer.result.wallShearStress).toBeCloseTo(0.5 * 0.073 * reynolds ** -0.25 * density * 1 ** 2, 2);
+    // Dean (1978), J. Fluids Eng. 100, 215: c_f = 0.073 Re_m^(-1/4), Re_m = U·H/ν on the full height, τ_w = c_f ρ U²/2,
+    // evaluated with the water properties the answer echoes as its inputs (U = 1 m/s, H = 10 mm).
+    const water = answer.inputs.workingFluid!;
+    const density = water.density!.value;
+    const reynolds = (density * 1 * 0.01) / water.viscosity!.value;
+    expect(answer.result.wallShearStress).toBeCloseTo(0.5 * 0.073 * reynolds ** -0.25 * density * 1 ** 2, 6);
     const fluids = await client.fluids();
     expect(fluids.fluids.map((f) => f.id)).toContain('water');
   });
