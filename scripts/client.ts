@@ -3,8 +3,8 @@
  * clients/typescript/schema.d.ts, from the committed OpenAPI document
  * (openapi-typescript). --check exits 1 on any drift, like openapi:check.
  */
-import { readFileSync, writeFileSync } from 'node:fs';
 import openapiTS, { astToString } from 'openapi-typescript';
+import { writeOrCheck } from './generated-file.js';
 
 const source = new URL('../openapi/openapi.json', import.meta.url);
 const target = new URL('../clients/typescript/schema.d.ts', import.meta.url);
@@ -15,26 +15,8 @@ const HEADER = `/**
 
 `;
 
-const generated = HEADER + astToString(await openapiTS(source));
-const mode = process.argv[2];
-
-if (mode === '--write') {
-  writeFileSync(target, generated);
-  console.log('clients/typescript/schema.d.ts written');
-} else if (mode === '--check') {
-  let committed = '';
-  try {
-    committed = readFileSync(target, 'utf8');
-  } catch {
-    console.error('clients/typescript/schema.d.ts is missing; run npm run client:write');
-    process.exit(1);
-  }
-  if (committed !== generated) {
-    console.error('clients/typescript/schema.d.ts differs from openapi/openapi.json; run npm run client:write and commit it');
-    process.exit(1);
-  }
-  console.log('clients/typescript/schema.d.ts matches openapi/openapi.json');
-} else {
-  console.error('usage: tsx scripts/client.ts --write | --check');
-  process.exit(2);
-}
+writeOrCheck(process.argv[2], target, HEADER + astToString(await openapiTS(source)), {
+  file: 'clients/typescript/schema.d.ts',
+  write: 'npm run client:write',
+  script: 'scripts/client.ts',
+});
