@@ -18,9 +18,9 @@ let service: ChildService;
 let client: OilskinClient;
 beforeAll(async () => {
   // PORT and HOST, not OILSKIN_PORT/OILSKIN_HOST: the container-platform convention must reach a real process.
-  service = await startService({ sources: true, env: { OILSKIN_PORT: '', OILSKIN_HOST: '', PORT: '0', HOST: '127.0.0.1', OILSKIN_WORKERS: '1' } });
+  service = await startService({ sources: true, platformVariables: true, env: { OILSKIN_WORKERS: '1' } });
   client = oilskinClient({ baseUrl: service.base });
-}, 120_000);
+}, 300_000);
 afterAll(() => {
   service?.child.kill('SIGTERM');
 });

@@ -27,7 +27,7 @@ beforeAll(async () => {
   services = await Promise.all([0, 1].map(() => startService({ sources: true, env: { OILSKIN_WORKERS: '1' } })));
   const document = (await (await fetch(`${services[0]!.base}/openapi.json`)).json()) as { paths: Record<string, unknown> };
   routes = Object.keys(document.paths);
-}, 180_000);
+}, 300_000);
 afterAll(() => {
   for (const s of services) s.child.kill('SIGTERM');
   if (dir) rmSync(dir, { recursive: true, force: true });
