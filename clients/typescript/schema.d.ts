@@ -245,6 +245,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         /** @description The parts of the design the calculation used, after unit conversion and catalogue look-up (SI) */
@@ -407,6 +409,20 @@ export interface components {
             citation: string;
             doi?: string;
         };
+        SafetyNote: {
+            /** @description Catalogue id of the fluid or surfactant */
+            id: string;
+            name: string;
+            /** @description Where the design uses it */
+            parts: ("lubricant" | "workingFluid" | "waterQuality.surfactant")[];
+            /**
+             * @description built-in catalogue, or the lab’s user catalogue
+             * @enum {string}
+             */
+            origin: "built-in" | "user";
+            /** @description Flammability, decomposition, handling, as the catalogue states them; the product’s own safety data sheet and local rules govern */
+            note: string;
+        };
         Provenance: {
             service: string;
             version: string;
@@ -416,6 +432,15 @@ export interface components {
             inputsHash: string;
             /** @description Compute time of the calculation, ms */
             computeMs: number;
+            /** @description Present when the calculation used an entry of the user catalogue */
+            userCatalogue?: {
+                /** @description File name of the user catalogue (OILSKIN_CATALOGUE_FILE or --catalogue) */
+                file: string;
+                /** @description SHA-256 of the file as read at start-up */
+                sha256: string;
+                /** @description Ids of the user entries this response used */
+                entries: string[];
+            };
         };
         /** @description RFC 9457 problem details */
         Problem: {
@@ -723,7 +748,7 @@ export interface components {
         /** @description The surfactant in the working fluid and its concentration */
         WaterQuality: {
             surfactant: components["schemas"]["Surfactant"];
-            /** @description Bulk concentration, or a list (at most 50) for a curve */
+            /** @description Bulk concentration (molar; "1 mg/L" and "1 ppm" are converted with the molar mass), or a list (at most 50) for a curve */
             bulkConcentration: (number | string) | (number | string)[];
         };
         /** @description A catalogue surfactant and/or explicit adsorption parameters for the interface in question (explicit values override the catalogue), referenced like a fluid */
@@ -771,10 +796,15 @@ export interface components {
              */
             gibbsPrefactor?: number;
             /**
-             * @description Critical micelle concentration
-             * @example 0.1 mM
+             * @description Critical micelle concentration (molar, or by mass like the bulk concentration)
+             * @example 1 mg/L
              */
             criticalMicelleConcentration?: number | string;
+            /**
+             * @description Molar mass, for concentrations given by mass (default: the catalogue value)
+             * @example 288.38 g/mol
+             */
+            molarMass?: number | string;
         };
         /** @description The textured solid, for heat transfer */
         Solid: {
@@ -850,6 +880,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         WettingResult: {
@@ -900,6 +932,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         RetentionResult: {
@@ -1010,6 +1044,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         SlipResult: {
@@ -1129,6 +1165,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         WavesResult: {
@@ -1267,6 +1305,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         SurfactantResult: {
@@ -1390,6 +1430,8 @@ export interface components {
             warnings: components["schemas"]["Warning"][];
             assumptions: string[];
             references: components["schemas"]["Reference"][];
+            /** @description Safety notes of the catalogue fluids and surfactants the calculation used, one per entry */
+            safety: components["schemas"]["SafetyNote"][];
             provenance: components["schemas"]["Provenance"];
         };
         HeatResult: {
@@ -1469,7 +1511,13 @@ export interface components {
             boilingPoint: number | null;
             /** @description K */
             referenceTemperature: number;
+            /** @description Handling and safety notes (flammability, decomposition); repeated in the `safety` list of every response that uses the fluid */
             safety: string | null;
+            /**
+             * @description built-in: the service’s own catalogue; user: an entry of the lab’s catalogue file (OILSKIN_CATALOGUE_FILE), its values the lab’s own
+             * @enum {string}
+             */
+            origin: "built-in" | "user";
             properties: {
                 density?: components["schemas"]["CatalogueValue"];
                 viscosity?: components["schemas"]["CatalogueValue"];
@@ -1506,6 +1554,14 @@ export interface components {
             description: string;
             bulkDiffusivity?: components["schemas"]["CatalogueValue"];
             criticalMicelleConcentration?: components["schemas"]["CatalogueValue"];
+            molarMass?: components["schemas"]["CatalogueValue"];
+            /** @description Handling and safety notes; repeated in the `safety` list of every response that uses the surfactant */
+            safety: string | null;
+            /**
+             * @description built-in: the service’s own catalogue; user: an entry of the lab’s catalogue file (OILSKIN_CATALOGUE_FILE), its values the lab’s own
+             * @enum {string}
+             */
+            origin: "built-in" | "user";
             /** @description Adsorption data per interface type */
             interfaces: {
                 "air-water"?: {

@@ -18,6 +18,7 @@ import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
 import { createSolverPool, type SolverPool } from './pool.js';
 import { computeSafely } from './worker.js';
+import { loadUserCatalogue } from './user-catalogue-file.js';
 
 declare module 'fastify' {
   interface FastifyInstance {
@@ -41,6 +42,8 @@ export function isProtectedRoute(routeUrl: string | undefined): boolean {
 }
 
 export async function buildApp(config: ServiceConfig, options: { logStream?: NodeJS.WritableStream } = {}): Promise<FastifyInstance> {
+  // A bad user catalogue stops start-up here (CatalogueFileError naming the entry and field), before anything listens.
+  const userCatalogue = config.catalogueFile === undefined ? undefined : loadUserCatalogue(config.catalogueFile);
   const app = Fastify({
     logger: {
       level: config.logLevel,
@@ -76,6 +79,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     solveTimeoutMs: config.solveTimeoutMs,
     workerMemoryMb: config.workerMemoryMb,
     inline: computeSafely,
+    ...(userCatalogue === undefined ? {} : { userCatalogue }),
     onThreadError: (error) => app.log.error({ err: error }, 'solver thread failed'),
   });
   app.decorate('solverPool', pool);
@@ -126,6 +130,12 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     });
   }
 
+  if (userCatalogue !== undefined) {
+    app.log.info(
+      { file: userCatalogue.file, sha256: userCatalogue.sha256, fluids: userCatalogue.fluids.map((f) => f.id), surfactants: userCatalogue.surfactants.map((s) => s.id) },
+      'user catalogue added',
+    );
+  }
   await app.register(docsPlugin, { apiKeysConfigured: config.apiKeys.length > 0 });
   await app.register(catalogueRoutes, { apiKeysConfigured: config.apiKeys.length > 0 });
   await app.register(calculationRoutes, { pool });

@@ -129,5 +129,5 @@ export function runInline<Body extends ZodType>(definition: CalculationDefinitio
     if (p.status >= 500) throw error;
     throw new ProblemError(p);
   }
-  return envelope(out, performance.now() - start);
+  return envelope(out, performance.now() - start, input as object);
 }

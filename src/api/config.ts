@@ -31,6 +31,18 @@ export interface ServiceConfig {
   keepAliveTimeoutMs: number;
   /** Bound of the in-memory result cache (ETags of recent results, bodies of heavy ones), MB; 0 turns it off. */
   resultCacheMb: number;
+  /** A lab's own fluids and surfactants (JSON or YAML), added to the built-in catalogue at start-up. */
+  catalogueFile?: string;
+}
+
+/** The value of `--catalogue file` (or `--catalogue=file`) in command-line arguments, if given. */
+export function catalogueFlag(argv: readonly string[]): string | undefined {
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i]!;
+    if (arg === '--catalogue') return argv[i + 1];
+    if (arg.startsWith('--catalogue=')) return arg.slice('--catalogue='.length);
+  }
+  return undefined;
 }
 
 function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0): number {
@@ -52,7 +64,9 @@ function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
     .filter((s) => s !== '');
 }
 
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig {
+export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: readonly string[] = []): ServiceConfig {
+  // The command-line flag wins over the environment.
+  const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
   const config: ServiceConfig = {
     // Container platforms (Cloud Run, Heroku-style hosts, many PaaS) set PORT and sometimes HOST: ours win when set.
     port: intFrom(env, env.OILSKIN_PORT ? 'OILSKIN_PORT' : 'PORT', 8080),
@@ -73,6 +87,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServiceConfig 
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
     resultCacheMb: intFrom(env, 'OILSKIN_RESULT_CACHE_MB', 32),
+    ...(catalogueFile === undefined ? {} : { catalogueFile }),
   };
   // Node refuses a header limit longer than the whole-request limit.
   if (config.headersTimeoutMs > config.requestTimeoutMs) {

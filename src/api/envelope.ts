@@ -7,6 +7,8 @@ import { hash } from 'node:crypto';
 import type { ModelId } from '../core/models.js';
 import type { Reference } from '../core/references.js';
 import type { Warning } from '../core/notes.js';
+import { catalogueNotes, type SafetyNote, type UserCatalogueProvenance } from './catalogue-notes.js';
+import { concentrationNotes } from './schemas/concentration.js';
 
 export const SERVICE_NAME = 'oilskin';
 export const SERVICE_VERSION = '0.1.0';
@@ -111,24 +113,44 @@ export interface CalculationOutput {
 }
 
 export interface Envelope extends Omit<CalculationOutput, 'models'> {
-  provenance: { service: string; version: string; models: readonly ModelId[]; inputsHash: string; computeMs: number };
+  /** Safety notes of the catalogue fluids and surfactants the calculation used, one per entry. */
+  safety: SafetyNote[];
+  provenance: {
+    service: string;
+    version: string;
+    models: readonly ModelId[];
+    inputsHash: string;
+    computeMs: number;
+    /** Present when a user catalogue entry was used. */
+    userCatalogue?: UserCatalogueProvenance;
+  };
 }
 
-export function envelope(output: CalculationOutput, computeMs: number): Envelope {
+/**
+ * The response around a calculation's output. `document` is the parsed
+ * request: the unit conversions made while parsing it join the assumptions
+ * when the question used that part.
+ */
+export function envelope(output: CalculationOutput, computeMs: number, document?: object): Envelope {
   const { models, ...rest } = output;
+  const catalogue = catalogueNotes(rest.inputs);
+  const usedWaterQuality = typeof rest.inputs === 'object' && rest.inputs !== null && 'waterQuality' in rest.inputs;
+  const conversions = document !== undefined && usedWaterQuality ? concentrationNotes(document) : [];
   return {
     inputs: rest.inputs,
     result: rest.result,
     ...(rest.verdict === undefined ? {} : { verdict: rest.verdict }),
-    warnings: rest.warnings,
-    assumptions: rest.assumptions,
+    warnings: catalogue.warnings.length === 0 ? rest.warnings : [...rest.warnings, ...catalogue.warnings],
+    assumptions: conversions.length === 0 ? rest.assumptions : [...rest.assumptions, ...conversions],
     references: rest.references,
+    safety: catalogue.safety,
     provenance: {
       service: SERVICE_NAME,
       version: SERVICE_VERSION,
       models,
       inputsHash: inputsHash(rest.inputs),
       computeMs: Math.round(computeMs * 1000) / 1000,
+      ...(catalogue.userCatalogue === undefined ? {} : { userCatalogue: catalogue.userCatalogue }),
     },
   };
 }

@@ -20,6 +20,7 @@ import { MessageChannel, type MessagePort } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import type { CalculationOutput } from './envelope.js';
 import type { ComputeFailure } from './calculation.js';
+import type { UserCatalogueData } from '../materials/user-catalogue.js';
 import { problem, ProblemError } from './problem.js';
 
 export interface SolverPool {
@@ -48,6 +49,8 @@ export interface PoolOptions {
   solveTimeoutMs: number;
   /** Heap limit of one solver thread, MB: a thread that exceeds it dies alone (one request fails), not the process. */
   workerMemoryMb: number;
+  /** The validated user catalogue, installed in every solver thread before it takes a task. */
+  userCatalogue?: UserCatalogueData;
   /** Inline runner used when threads = 0. */
   inline: (name: string, input: unknown) => CalculationOutput | ComputeFailure;
   /** Told about thread failures that belong to no request (logged by the app). */
@@ -112,6 +115,8 @@ export function createSolverPool(options: PoolOptions): SolverPool {
     maxThreads: options.threads,
     idleTimeout: Number.POSITIVE_INFINITY,
     resourceLimits: { maxOldGenerationSizeMb: options.workerMemoryMb },
+    // Validated once in the main thread; the threads install the same data (src/api/worker.ts), never re-read the file.
+    workerData: { userCatalogue: options.userCatalogue },
   });
   // piscina emits 'error' for a thread that fails with no task on it; unheard, that would end the process.
   piscina.on('error', (error: unknown) => options.onThreadError?.(error));

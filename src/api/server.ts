@@ -9,11 +9,24 @@
  * kills the pod after its grace period, so the drain limit must stay below it
  * (docker/k8s/deployment.yaml: preStop 5 s + drain 10 s < 30 s).
  */
+import type { FastifyInstance } from 'fastify';
 import { buildApp } from './app.js';
-import { loadConfig } from './config.js';
+import { loadConfig, type ServiceConfig } from './config.js';
+import { CatalogueFileError } from './user-catalogue-file.js';
 
-const config = loadConfig();
-const app = await buildApp(config);
+let config: ServiceConfig;
+let app: FastifyInstance;
+try {
+  config = loadConfig(process.env, process.argv.slice(2));
+  app = await buildApp(config);
+} catch (error) {
+  // A configuration mistake (a bad user catalogue, a malformed setting) is reported in one message, not a stack trace.
+  if (error instanceof CatalogueFileError || (error instanceof Error && /^OILSKIN_/.test(error.message))) {
+    process.stderr.write(`oilskin: cannot start: ${error.message}\n`);
+    process.exit(78);
+  }
+  throw error;
+}
 
 let closing = false;
 async function shutdown(signal: string) {

@@ -6,15 +6,26 @@
 import { create, all, type Unit } from 'mathjs';
 
 const math = create(all);
-// Units the trade uses that mathjs lacks: the stokes (kinematic viscosity) and
-// molar concentration (M = mol/L).
+// Units the trade uses that mathjs lacks: the stokes (kinematic viscosity),
+// molar concentration (M = mol/L), and parts per million / billion, read as
+// mass fractions (the water-quality convention: 1 ppm = 1 mg/kg).
 math.createUnit('St', { definition: '1e-4 m^2/s', prefixes: 'short' });
 math.createUnit('M', { definition: '1 mol/L', prefixes: 'short' });
+math.createUnit('ppm', { definition: '1e-6 kg/kg' });
+math.createUnit('ppb', { definition: '1e-9 kg/kg' });
 
 export class UnitError extends Error {
   constructor(message: string) {
     super(message);
     this.name = 'UnitError';
+  }
+}
+
+/** A readable quantity whose dimension is not the one asked for. */
+export class DimensionError extends UnitError {
+  constructor(message: string) {
+    super(message);
+    this.name = 'DimensionError';
   }
 }
 
@@ -51,6 +62,23 @@ export function parseQuantity(text: string, siUnit: string): number {
   return value;
 }
 
+/**
+ * Convert a quantity string to the first of several SI units whose dimension
+ * it has (a surfactant concentration may be molar, mass per volume or a mass
+ * fraction). A bare number in a string takes the first unit. Throws
+ * {@link UnitError} when it is unreadable or fits none of them.
+ */
+export function parseQuantityAs<Unit extends string>(text: string, siUnits: readonly Unit[]): { unit: Unit; value: number } {
+  for (const unit of siUnits) {
+    try {
+      return { unit, value: parseQuantity(text, unit) };
+    } catch (error) {
+      if (!(error instanceof DimensionError)) throw error;
+    }
+  }
+  throw new DimensionError(`"${text}" has the wrong dimension: expected a quantity convertible to ${siUnits.join(' or ')}`);
+}
+
 const CACHE_LIMIT = 10_000;
 const cache = new Map<string, number>();
 
@@ -68,7 +96,7 @@ function convert(text: string, siUnit: string): number {
   if (unit.value === null) throw new UnitError(`"${text}" has a unit but no number`);
   const reference = math.unit(siUnit);
   if (!unit.equalBase(reference)) {
-    throw new UnitError(`"${text}" has the wrong dimension: expected a quantity convertible to ${siUnit}`);
+    throw new DimensionError(`"${text}" has the wrong dimension: expected a quantity convertible to ${siUnit}`);
   }
   const value = unit.toNumber(siUnit);
   if (!Number.isFinite(value)) throw new UnitError(`"${text}" is not a finite quantity`);

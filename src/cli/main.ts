@@ -1,24 +1,49 @@
 /**
- * Command line: `oilskin <calculation> <scenario.json | ->` runs the same
- * validation and compute as POST /v1/<calculation> and prints the same JSON.
+ * Command line: `oilskin [--catalogue lab.json] <calculation> <scenario.json | ->`
+ * runs the same validation and compute as POST /v1/<calculation> and prints
+ * the same JSON. `--catalogue` (else OILSKIN_CATALOGUE_FILE) adds a lab's own
+ * fluids and surfactants, as it does for the service.
  * Exit 0 with the envelope on stdout; exit 2 with the problem document on
- * stderr for bad input; exit 1 for anything else.
+ * stderr for bad input, or the reasons on stderr for a bad catalogue file;
+ * exit 1 for anything else.
  */
 import { readFileSync } from 'node:fs';
+import { uninstallUserCatalogue } from '../materials/user-catalogue.js';
 import { runInline, problemFromError } from '../api/calculation.js';
+import { catalogueFlag } from '../api/config.js';
+import { CatalogueFileError, loadUserCatalogue } from '../api/user-catalogue-file.js';
 import { ProblemError } from '../api/problem.js';
 import { safeStringify } from '../api/envelope.js';
 import { CALCULATIONS, calculationByName } from '../api/routes/index.js';
 
 function usage(): string {
-  return `usage: oilskin <calculation> <file.json | ->\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}`;
+  return `usage: oilskin [--catalogue lab.json] <calculation> <file.json | ->\ncalculations: ${CALCULATIONS.map((c) => c.name).join(', ')}`;
 }
 
-export function runCli(argv: readonly string[], readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8')): {
-  code: number;
-  stdout: string;
-  stderr: string;
-} {
+type CliResult = { code: number; stdout: string; stderr: string };
+
+export function runCli(
+  argv: readonly string[],
+  readInput: (path: string) => string = (p) => readFileSync(p === '-' ? 0 : p, 'utf8'),
+  env: NodeJS.ProcessEnv = process.env,
+): CliResult {
+  const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
+  const rest = argv.filter((arg, i) => !(arg === '--catalogue' || arg.startsWith('--catalogue=') || (i > 0 && argv[i - 1] === '--catalogue')));
+  if (catalogueFile === undefined) return runCalculation(rest, readInput);
+  try {
+    loadUserCatalogue(catalogueFile);
+  } catch (error) {
+    if (error instanceof CatalogueFileError) return { code: 2, stdout: '', stderr: `oilskin: ${error.message}\n` };
+    throw error;
+  }
+  try {
+    return runCalculation(rest, readInput);
+  } finally {
+    uninstallUserCatalogue();
+  }
+}
+
+function runCalculation(argv: readonly string[], readInput: (path: string) => string): CliResult {
   const [name, file] = argv;
   if (!name || name === '--help' || name === '-h') return { code: name ? 0 : 2, stdout: name ? usage() + '\n' : '', stderr: name ? '' : usage() + '\n' };
   const definition = calculationByName(name);

@@ -31,6 +31,7 @@ import {
 import * as MATERIAL_REFERENCES from './references.js';
 import { SILICONE_OILS } from './silicones.js';
 import type { CatalogueFluid, PropertyRecord } from './types.js';
+import { userFluid, userFluids, type CatalogueOrigin } from './user-catalogue.js';
 import type { FluidPropertyName } from '../core/fluid.js';
 import { PROPERTY_UNITS } from './types.js';
 import {
@@ -157,14 +158,19 @@ export const FLUIDS: readonly CatalogueFluid[] = Object.freeze([
 
 const BY_ID = new Map(FLUIDS.map((fluid) => [fluid.id, fluid]));
 
-/** Catalogue ids in catalogue order. */
+/** Catalogue ids in catalogue order, the user catalogue's (src/materials/user-catalogue.ts) after the built-in ones. */
 export function fluidIds(): string[] {
-  return FLUIDS.map((fluid) => fluid.id);
+  return [...FLUIDS, ...userFluids()].map((fluid) => fluid.id);
 }
 
-/** The catalogue entry with this id, or undefined. */
+/** The catalogue entry with this id (built-in, else the user catalogue's), or undefined. */
 export function getFluid(id: string): CatalogueFluid | undefined {
-  return BY_ID.get(id);
+  return BY_ID.get(id) ?? userFluid(id);
+}
+
+/** Whether an id is a built-in entry or one of the user catalogue's; undefined when it is neither. */
+export function fluidOrigin(id: string): CatalogueOrigin | undefined {
+  return BY_ID.has(id) ? 'built-in' : userFluid(id) === undefined ? undefined : 'user';
 }
 
 /**
@@ -193,6 +199,8 @@ export interface FluidListing {
   boilingPoint: number | null;
   referenceTemperature: number;
   safety: string | null;
+  /** built-in, or user: from the lab's catalogue file, not reviewed with the built-in catalogue. */
+  origin: CatalogueOrigin;
   properties: Partial<Record<FluidPropertyName, PropertyListing>>;
 }
 
@@ -210,7 +218,7 @@ const CITABLE: readonly Reference[] = [
  */
 export function catalogueListing(): { fluids: FluidListing[]; references: Reference[] } {
   const references = new Map<string, Reference>();
-  const fluids = FLUIDS.map((fluid) => {
+  const fluids = [...FLUIDS, ...userFluids()].map((fluid): FluidListing => {
     const text = `${fluid.description} ${fluid.safety ?? ''}`;
     for (const reference of CITABLE) {
       if (text.includes(reference.key)) references.set(reference.key, reference);
@@ -235,6 +243,7 @@ export function catalogueListing(): { fluids: FluidListing[]; references: Refere
       boilingPoint: fluid.boilingPoint ?? null,
       referenceTemperature: fluid.referenceTemperature,
       safety: fluid.safety ?? null,
+      origin: BY_ID.has(fluid.id) ? 'built-in' : 'user',
       properties,
     };
   });

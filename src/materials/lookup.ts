@@ -9,6 +9,7 @@ import type { FluidState } from '../core/fluid.js';
 import type { InterfaceType } from '../core/surfactant.js';
 import { resolveFluid } from './resolve.js';
 import { getSurfactant, resolveSurfactant } from './surfactants.js';
+import { userCatalogueGeneration } from './user-catalogue.js';
 
 const fluidCache = new Map<string, FluidState>();
 const FLUID_CACHE_LIMIT = 2_000;
@@ -17,7 +18,8 @@ function fluidKey(spec: FluidSpec, field: string): string {
   const entries = Object.entries(spec)
     .filter(([, v]) => v !== undefined)
     .sort(([a], [b]) => (a < b ? -1 : 1));
-  return `${field}|${JSON.stringify(entries)}`;
+  // The user catalogue is installed at start-up; its generation keeps a test's re-install from reading stale entries.
+  return `${userCatalogueGeneration()}|${field}|${JSON.stringify(entries)}`;
 }
 
 /** A copy the caller may change without touching the cached state. */

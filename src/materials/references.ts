@@ -307,3 +307,11 @@ export const ROSEN_KUNJAPPU_2012: Reference = {
   key: 'rosen2012',
   citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
 };
+
+export const IUPAC_ATOMIC_WEIGHTS_1995: Reference = {
+  key: 'iupac-atomic-weights-1995',
+  citation:
+    'Coplen, T. B. (1996). Atomic weights of the elements 1995 (IUPAC Technical Report). Pure and Applied ' +
+    'Chemistry 68(12), 2339–2359, Table 2 (C 12.0107, H 1.00794, O 15.9994, Na 22.989770, S 32.066). Molar ' +
+    'masses of the catalogue surfactants are computed from their formulas with these weights.',
+};

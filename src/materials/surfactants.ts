@@ -16,8 +16,9 @@ import type { InterfaceType, ResolvedSurfactant } from '../core/surfactant.js';
 import { DomainError } from '../core/errors.js';
 import type { Warning } from '../core/notes.js';
 import { REFERENCES, type Reference } from '../core/references.js';
+import { userSurfactant, userSurfactants, type CatalogueOrigin } from './user-catalogue.js';
 import { RECALLED_TAG } from './records.js';
-import { CHANG_FRANSES_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
+import { CHANG_FRANSES_1995, IUPAC_ATOMIC_WEIGHTS_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
 
 
 
@@ -54,6 +55,10 @@ export interface CatalogueSurfactant {
   bulkDiffusivity?: SourcedValue;
   /** Critical micelle concentration in water at 25 °C, mol/m³. */
   criticalMicelleConcentration?: SourcedValue;
+  /** Molar mass, kg/mol: converts mass concentrations ("1 mg/L", "1 ppm") to molar ones. */
+  molarMass?: SourcedValue;
+  /** Handling and safety notes (irritation, data sheet advice), repeated in the responses that use the entry. */
+  safety?: string;
   interfaces: Partial<Record<InterfaceType, InterfaceAdsorptionData>>;
 }
 
@@ -64,6 +69,7 @@ const R = {
   landel2020: REFERENCES.landel2020,
   mukerjee1971: MUKERJEE_MYSELS_1971,
   rosen2012: ROSEN_KUNJAPPU_2012,
+  atomicWeights: IUPAC_ATOMIC_WEIGHTS_1995,
 };
 
 
@@ -84,6 +90,7 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
       source: R.mukerjee1971,
       note: 'about 8.2 mM at 25 °C without added salt; from memory (the compilation lists values near 8.1–8.3 mM)',
     },
+    molarMass: { value: 0.28838, source: R.atomicWeights, note: 'C12H25NaO4S: 288.38 g/mol' },
     interfaces: {
       'air-water': {
         maximumSurfaceExcess: { value: 3.9e-6, source: R.chang1995, note: 'as used by Landel et al. (2020) from Chang & Franses (1995)' },
@@ -115,6 +122,11 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
       'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
     bulkDiffusivity: { value: 2.6e-10, source: R.chang1995, note: 'from memory' },
     criticalMicelleConcentration: { value: 0.24, source: R.mukerjee1971, note: 'about 0.2–0.3 mM at 25 °C; from memory' },
+    molarMass: {
+      value: 0.62482,
+      source: R.atomicWeights,
+      note: 'mean of the polydisperse ethoxylate, C14H22O(C2H4O)n with the n = 9.5 the description states: 624.82 g/mol',
+    },
     interfaces: {
       'air-water': {
         maximumSurfaceExcess: { value: 2.9e-6, source: R.rosen2012, note: 'from memory' },
@@ -125,8 +137,14 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   },
 ];
 
+/** The catalogue surfactant with this id (built-in, else the user catalogue's), or undefined. */
 export function getSurfactant(id: string): CatalogueSurfactant | undefined {
-  return SURFACTANTS.find((s) => s.id === id);
+  return SURFACTANTS.find((s) => s.id === id) ?? userSurfactant(id);
+}
+
+/** Whether an id is a built-in surfactant or one of the user catalogue's; undefined when it is neither. */
+export function surfactantOrigin(id: string): CatalogueOrigin | undefined {
+  return SURFACTANTS.some((s) => s.id === id) ? 'built-in' : userSurfactant(id) === undefined ? undefined : 'user';
 }
 
 const VALUE_UNITS = {
@@ -138,6 +156,7 @@ const VALUE_UNITS = {
   gibbsPrefactor: '1',
   bulkDiffusivity: 'm^2/s',
   criticalMicelleConcentration: 'mol/m^3',
+  molarMass: 'kg/mol',
 } as const;
 
 interface ListedValue {
@@ -158,12 +177,13 @@ export function surfactantListing(): {
   references: Reference[];
 } {
   const refs = new Map<string, Reference>();
-  const surfactants = SURFACTANTS.map((s) => {
+  const surfactants = [...SURFACTANTS, ...userSurfactants()].map((s) => {
     const collect = (v: SourcedValue | undefined): void => {
       if (v) refs.set(v.source.key, v.source);
     };
     collect(s.bulkDiffusivity);
     collect(s.criticalMicelleConcentration);
+    collect(s.molarMass);
     const interfaces: Record<string, Record<string, ListedValue>> = {};
     for (const [type, data] of Object.entries(s.interfaces) as [InterfaceType, InterfaceAdsorptionData][]) {
       const entry: Record<string, ListedValue> = {};
@@ -179,6 +199,10 @@ export function surfactantListing(): {
     if (bulk) out.bulkDiffusivity = bulk;
     const cmc = listValue('criticalMicelleConcentration', s.criticalMicelleConcentration);
     if (cmc) out.criticalMicelleConcentration = cmc;
+    const molarMass = listValue('molarMass', s.molarMass);
+    if (molarMass) out.molarMass = molarMass;
+    out.safety = s.safety ?? null;
+    out.origin = surfactantOrigin(s.id);
     out.interfaces = interfaces;
     return out;
   });

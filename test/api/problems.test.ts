@@ -75,13 +75,23 @@ describe('problem titles say what happened and paths name the request field', ()
     expect(body.errors?.[0].path).toBe('texture.grooveWidth');
   });
 
-  it('bulkConcentration "1 mg/L" says which units are accepted (molar, with the example and how to convert)', async () => {
+  it('bulkConcentration by mass without a known molar mass names waterQuality.surfactant.molarMass; a wrong dimension lists every accepted form', async () => {
     const surfactant = (await import('../../src/api/routes/surfactant.js')).surfactantCalculation.example as object;
+    const quality = (surfactant as { waterQuality: object }).waterQuality;
+    // A surfactant given by its values has no catalogue molar mass: "1 mg/L" cannot be converted.
+    const byValues = { name: 'lab surfactant', maximumSurfaceExcess: 3e-6, langmuirConstant: 0.2, bulkDiffusivity: 5e-10, gibbsPrefactor: 1 };
+    for (const value of ['1 mg/L', ['0.1 mM', '1 ppm']]) {
+      const { status, body } = await post('/v1/surfactant', { ...surfactant, waterQuality: { surfactant: byValues, bulkConcentration: value } });
+      expect(status).toBe(422);
+      const error = body.errors?.[0];
+      expect(error?.path).toBe('waterQuality.surfactant.molarMass');
+      expect(error?.message).toMatch(/mass concentration/);
+      expect(error?.message).toMatch(/g\/mol/);
+    }
     for (const [value, path] of [
-      ['1 mg/L', 'waterQuality.bulkConcentration'],
-      [['0.1 mM', '1 mg/L'], 'waterQuality.bulkConcentration[1]'],
+      ['1 m/s', 'waterQuality.bulkConcentration'],
+      [['0.1 mM', '1 m/s'], 'waterQuality.bulkConcentration[1]'],
     ] as const) {
-      const quality = (surfactant as { waterQuality: object }).waterQuality;
       const { status, body } = await post('/v1/surfactant', { ...surfactant, waterQuality: { ...quality, bulkConcentration: value } });
       expect(status).toBe(422);
       const error = body.errors?.[0];
@@ -89,7 +99,8 @@ describe('problem titles say what happened and paths name the request field', ()
       expect(error?.message).toMatch(/wrong dimension/);
       expect(error?.message).toMatch(/mol\/m³/);
       expect(error?.message).toMatch(/0\.1 mM/);
-      expect(error?.message).toMatch(/molar mass/);
+      expect(error?.message).toMatch(/1 mg\/L/);
+      expect(error?.message).toMatch(/1 ppm/);
     }
   });
 

@@ -84,7 +84,7 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
         out = r;
       }
       cache.computed(definition.name);
-      const result = envelope(out, performance.now() - start);
+      const result = envelope(out, performance.now() - start, input as object);
       const etag = `"${result.provenance.inputsHash}"`;
       // Serialised by the typed response schema (fastify's compiled serializer), once, so heavy bodies can be kept.
       const body = (reply.getSerializationFunction('200') as (payload: unknown) => string)(result);

@@ -10,7 +10,6 @@ import type { DesignDocument } from '../../physics/design/document.js';
 import { z } from './zod.js';
 import {
   AdsorptionRate,
-  Concentration,
   ContactAngle,
   Density,
   DesorptionRate,
@@ -24,6 +23,7 @@ import {
   KinematicViscosity,
   LangmuirConstant,
   MassConcentration,
+  MolarMass,
   Roughness,
   Salinity,
   ShearStress,
@@ -36,6 +36,7 @@ import {
   Velocity,
   WallInclination,
 } from './quantities.js';
+import { molarConcentrations, SurfactantConcentration } from './concentration.js';
 
 const catalogueId = (what: string, listing: string, example: string) =>
   z.string().min(1).max(64).openapi({ description: `Catalogue id of the ${what} (${listing})`, example });
@@ -164,7 +165,8 @@ export const SurfactantSchema = z
     bulkDiffusivity: Diffusivity.optional().openapi({ description: 'Bulk diffusivity D' }),
     surfaceDiffusivity: Diffusivity.optional().openapi({ description: 'Surface diffusivity D_s' }),
     gibbsPrefactor: GibbsPrefactor.optional(),
-    criticalMicelleConcentration: Concentration.optional().openapi({ description: 'Critical micelle concentration' }),
+    criticalMicelleConcentration: SurfactantConcentration.optional().openapi({ description: 'Critical micelle concentration (molar, or by mass like the bulk concentration)' }),
+    molarMass: MolarMass.optional().openapi({ description: 'Molar mass, for concentrations given by mass (default: the catalogue value)' }),
   })
   .openapi('Surfactant', {
     description: 'A catalogue surfactant and/or explicit adsorption parameters for the interface in question (explicit values override the catalogue), referenced like a fluid',
@@ -173,7 +175,9 @@ export const SurfactantSchema = z
 export const WaterQualitySchema = z
   .strictObject({
     surfactant: SurfactantSchema,
-    bulkConcentration: z.union([Concentration, z.array(Concentration).min(1).max(50)]).openapi({ description: 'Bulk concentration, or a list (at most 50) for a curve' }),
+    bulkConcentration: z
+      .union([SurfactantConcentration, z.array(SurfactantConcentration).min(1).max(50)])
+      .openapi({ description: 'Bulk concentration (molar; "1 mg/L" and "1 ppm" are converted with the molar mass), or a list (at most 50) for a curve' }),
   })
   .openapi('WaterQuality', { description: 'The surfactant in the working fluid and its concentration' });
 
@@ -227,6 +231,8 @@ export const DesignSchema = z
     heating: HeatingSchema.optional(),
     options: OptionsSchema.optional(),
   })
+  // Mass concentrations to molar ones, once the surfactant and working fluid are known (./concentration.ts).
+  .transform(molarConcentrations)
   .openapi('Design', {
     description:
       'A design and its service conditions, the same document for every calculation. Each endpoint uses the parts its question needs and answers 422 "missing required property" naming a part it lacks.',

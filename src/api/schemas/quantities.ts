@@ -269,7 +269,18 @@ export const Concentration = quantity({
   max: 1e4,
   description: 'Molar bulk concentration (1 mM = 1 mol/m³)',
   example: '0.1 mM',
-  hint: 'a mass concentration such as mg/L needs the molar mass: mg/L divided by g/mol gives mol/m³ (= mM)',
+});
+
+export const MolarMass = quantity({
+  quantity: 'molar mass',
+  siUnit: 'kg/mol',
+  unitLabel: 'kg/mol',
+  min: 0,
+  minInclusive: false,
+  // A large protein is about 1000 kg/mol; nothing dissolved as a surfactant is heavier.
+  max: 1000,
+  description: 'Molar mass (converts a mass concentration to a molar one)',
+  example: '288.38 g/mol',
 });
 
 export const MassConcentration = quantity({

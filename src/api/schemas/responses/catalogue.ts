@@ -14,6 +14,10 @@ export const CatalogueValueSchema = z
 
 const value = CatalogueValueSchema.optional();
 
+const ORIGIN = z
+  .enum(['built-in', 'user'])
+  .openapi({ description: 'built-in: the service’s own catalogue; user: an entry of the lab’s catalogue file (OILSKIN_CATALOGUE_FILE), its values the lab’s own' });
+
 export const FluidListingSchema = z
   .strictObject({
     id: z.string(),
@@ -23,7 +27,8 @@ export const FluidListingSchema = z
     freezingPoint: z.number().nullable().openapi({ description: 'K; null when the catalogue has no limit' }),
     boilingPoint: z.number().nullable().openapi({ description: 'K; null when the catalogue has no limit' }),
     referenceTemperature: z.number().openapi({ description: 'K' }),
-    safety: z.string().nullable(),
+    safety: z.string().nullable().openapi({ description: 'Handling and safety notes (flammability, decomposition); repeated in the `safety` list of every response that uses the fluid' }),
+    origin: ORIGIN,
     properties: z.strictObject({
       density: value,
       viscosity: value,
@@ -55,6 +60,9 @@ export const SurfactantListingSchema = z
     description: z.string(),
     bulkDiffusivity: value,
     criticalMicelleConcentration: value,
+    molarMass: value,
+    safety: z.string().nullable().openapi({ description: 'Handling and safety notes; repeated in the `safety` list of every response that uses the surfactant' }),
+    origin: ORIGIN,
     interfaces: z.strictObject({ 'air-water': adsorption.optional(), 'oil-water': adsorption.optional() }).openapi({ description: 'Adsorption data per interface type' }),
   })
   .openapi('SurfactantListing');

@@ -30,8 +30,26 @@ export const ProvenanceSchema = z
     models: z.array(z.enum(MODEL_IDS)).openapi({ description: 'Identifiers of the models that produced the result (registry: src/physics/design/models.ts)' }),
     inputsHash: z.string().openapi({ description: 'SHA-256 of the canonical JSON of the normalised inputs' }),
     computeMs: z.number().openapi({ description: 'Compute time of the calculation, ms' }),
+    userCatalogue: z
+      .strictObject({
+        file: z.string().openapi({ description: 'File name of the user catalogue (OILSKIN_CATALOGUE_FILE or --catalogue)' }),
+        sha256: z.string().openapi({ description: 'SHA-256 of the file as read at start-up' }),
+        entries: z.array(z.string()).openapi({ description: 'Ids of the user entries this response used' }),
+      })
+      .optional()
+      .openapi({ description: 'Present when the calculation used an entry of the user catalogue' }),
   })
   .openapi('Provenance');
+
+export const SafetyNoteSchema = z
+  .strictObject({
+    id: z.string().openapi({ description: 'Catalogue id of the fluid or surfactant' }),
+    name: z.string(),
+    parts: z.array(z.enum(['lubricant', 'workingFluid', 'waterQuality.surfactant'])).openapi({ description: 'Where the design uses it' }),
+    origin: z.enum(['built-in', 'user']).openapi({ description: 'built-in catalogue, or the lab’s user catalogue' }),
+    note: z.string().openapi({ description: 'Flammability, decomposition, handling, as the catalogue states them; the product’s own safety data sheet and local rules govern' }),
+  })
+  .openapi('SafetyNote');
 
 export const VerdictSchema = z
   .strictObject({
@@ -137,6 +155,7 @@ export function envelopeSchema(name: string, result: z.ZodType, verdict = false)
       warnings: z.array(WarningSchema),
       assumptions: z.array(z.string()),
       references: z.array(ReferenceSchema),
+      safety: z.array(SafetyNoteSchema).openapi({ description: 'Safety notes of the catalogue fluids and surfactants the calculation used, one per entry' }),
       provenance: ProvenanceSchema,
     })
     .openapi(name);
