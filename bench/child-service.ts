@@ -17,13 +17,24 @@ export interface ChildService {
  * 127.0.0.1 with a free port and no rate limit; `env` adds or overrides
  * variables. Resolves once it is ready (its solver threads loaded).
  */
-export async function startService(options: { sources: boolean; env?: Record<string, string> }): Promise<ChildService> {
+export async function startService(options: {
+  sources: boolean;
+  env?: Record<string, string>;
+  /** Give the port and address as the platform's PORT and HOST instead of OILSKIN_PORT and OILSKIN_HOST. */
+  platformVariables?: boolean;
+}): Promise<ChildService> {
   const root = fileURLToPath(new URL('..', import.meta.url));
   // The port is chosen here (a free one from the kernel), not read from the service's log: the log level is the caller's.
   const port = await freePort();
   const child = spawn(process.execPath, options.sources ? ['--import', 'tsx', 'src/api/server.ts'] : ['dist/src/api/server.js'], {
     cwd: root,
-    env: { ...process.env, OILSKIN_PORT: String(port), OILSKIN_HOST: '127.0.0.1', OILSKIN_RATE_LIMIT: '0', OILSKIN_LOG_LEVEL: 'info', ...options.env },
+    env: {
+      ...process.env,
+      ...(options.platformVariables ? { OILSKIN_PORT: '', OILSKIN_HOST: '', PORT: String(port), HOST: '127.0.0.1' } : { OILSKIN_PORT: String(port), OILSKIN_HOST: '127.0.0.1' }),
+      OILSKIN_RATE_LIMIT: '0',
+      OILSKIN_LOG_LEVEL: 'info',
+      ...options.env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let log = '';

@@ -12,6 +12,7 @@ import { problem } from './problem.js';
 import errorsPlugin, { sendProblem } from './plugins/errors.js';
 import metricsPlugin from './plugins/metrics.js';
 import healthPlugin from './plugins/health.js';
+import resultCachePlugin from './plugins/result-cache.js';
 import docsPlugin from './plugins/docs.js';
 import calculationRoutes from './routes/calculations.js';
 import catalogueRoutes from './routes/catalogue.js';
@@ -86,11 +87,12 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
   app.decorate('solverPool', pool);
   app.addHook('onClose', async () => pool.close());
 
-  app.addHook('onSend', async (request, reply, payload) => {
+  // Callback-style hooks on every request: an async hook costs a promise and a microtask turn per request (bench/http.ts).
+  app.addHook('onSend', (request, reply, payload, done) => {
     reply.header('x-request-id', request.id);
     // Draining: a keep-alive client gets its answer and then the connection is closed, so it reconnects elsewhere.
     if (app.draining) reply.header('connection', 'close');
-    return payload;
+    done(null, payload);
   });
 
   if (config.corsOrigins.length > 0) {
@@ -110,6 +112,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
     });
   }
   await app.register(metricsPlugin, { poolStats: () => pool.stats() });
+  await app.register(resultCachePlugin, { maxBytes: config.resultCacheMb * 1024 * 1024, registry: app.metricsRegistry });
   await app.register(healthPlugin);
   void pool.ready().then(() => {
     app.solversReady = true;
@@ -135,8 +138,8 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
       'user catalogue added',
     );
   }
-  await app.register(docsPlugin);
-  await app.register(catalogueRoutes);
+  await app.register(docsPlugin, { apiKeysConfigured: config.apiKeys.length > 0 });
+  await app.register(catalogueRoutes, { apiKeysConfigured: config.apiKeys.length > 0 });
   await app.register(calculationRoutes, { pool });
   await app.register(sweepRoutes, { pool, config });
   await app.register(designWindowRoutes, { pool, config });

@@ -29,6 +29,8 @@ export interface ServiceConfig {
   requestTimeoutMs: number;
   /** Idle keep-alive connections are closed after this long, ms. */
   keepAliveTimeoutMs: number;
+  /** Bound of the in-memory result cache (ETags of recent results, bodies of heavy ones), MB; 0 turns it off. */
+  resultCacheMb: number;
   /** A lab's own fluids and surfactants (JSON or YAML), added to the built-in catalogue at start-up. */
   catalogueFile?: string;
   /** Most points one sweep request (one shard) may compute (413 beyond). */
@@ -55,6 +57,10 @@ function intFrom(env: NodeJS.ProcessEnv, name: string, fallback: number, min = 0
   return n;
 }
 
+function nonEmpty(value: string | undefined): string | undefined {
+  return value === undefined || value.trim() === '' ? undefined : value.trim();
+}
+
 function listFrom(env: NodeJS.ProcessEnv, name: string): string[] {
   return (env[name] ?? '')
     .split(',')
@@ -66,8 +72,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: readonly 
   // The command-line flag wins over the environment.
   const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
   const config: ServiceConfig = {
-    port: intFrom(env, 'OILSKIN_PORT', 8080),
-    host: env.OILSKIN_HOST ?? '0.0.0.0',
+    // Container platforms (Cloud Run, Heroku-style hosts, many PaaS) set PORT and sometimes HOST: ours win when set.
+    port: intFrom(env, env.OILSKIN_PORT ? 'OILSKIN_PORT' : 'PORT', 8080),
+    host: nonEmpty(env.OILSKIN_HOST) ?? nonEmpty(env.HOST) ?? '0.0.0.0',
     logLevel: env.OILSKIN_LOG_LEVEL ?? 'info',
     bodyLimit: intFrom(env, 'OILSKIN_BODY_LIMIT', 262_144),
     apiKeys: listFrom(env, 'OILSKIN_API_KEYS'),
@@ -83,6 +90,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: readonly 
     headersTimeoutMs: intFrom(env, 'OILSKIN_HEADERS_TIMEOUT_MS', 10_000, 1),
     requestTimeoutMs: intFrom(env, 'OILSKIN_REQUEST_TIMEOUT_MS', 30_000, 1),
     keepAliveTimeoutMs: intFrom(env, 'OILSKIN_KEEP_ALIVE_TIMEOUT_MS', 5_000, 1),
+    resultCacheMb: intFrom(env, 'OILSKIN_RESULT_CACHE_MB', 32),
     ...(catalogueFile === undefined ? {} : { catalogueFile }),
     sweepMaxPoints: intFrom(env, 'OILSKIN_SWEEP_MAX_POINTS', 100_000, 1),
     sweepPointTimeoutMs: intFrom(env, 'OILSKIN_SWEEP_POINT_TIMEOUT_MS', 20_000, 1),

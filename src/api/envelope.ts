@@ -3,7 +3,7 @@
  * normalised inputs, and the guard that keeps NaN and Infinity out of
  * responses.
  */
-import { createHash } from 'node:crypto';
+import { hash } from 'node:crypto';
 import type { ModelId } from '../core/models.js';
 import type { Reference } from '../core/references.js';
 import type { Warning } from '../core/notes.js';
@@ -13,46 +13,62 @@ import { concentrationNotes } from './schemas/concentration.js';
 export const SERVICE_NAME = 'oilskin';
 export const SERVICE_VERSION = '0.1.0';
 
-/** Canonical JSON: object keys sorted at every level, no whitespace. */
+/**
+ * Canonical JSON: object keys sorted at every level (UTF-16 code-unit order), undefined members left out, no
+ * whitespace. The inputs hash is a SHA-256 of this text, and clients keep that hash (ETag, LIMS records): the output
+ * must never change for the same value. Written as one string-building walk, because it runs on every request (a
+ * version with entries/filter/sort/map arrays cost about 3× as much, mostly in garbage collection).
+ */
 export function canonicalJson(value: unknown): string {
+  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : 'null';
   if (value === null || typeof value !== 'object') return JSON.stringify(value) ?? 'null';
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
-  const entries = Object.entries(value as Record<string, unknown>)
-    .filter(([, v]) => v !== undefined)
-    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
+  if (Array.isArray(value)) {
+    let text = '[';
+    for (let i = 0; i < value.length; i++) text += (i === 0 ? '' : ',') + canonicalJson(value[i]);
+    return `${text}]`;
+  }
+  const record = value as Record<string, unknown>;
+  const keys = Object.keys(record).sort();
+  let text = '{';
+  let first = true;
+  for (const key of keys) {
+    const member = record[key];
+    if (member === undefined) continue;
+    text += `${first ? '' : ','}${JSON.stringify(key)}:${canonicalJson(member)}`;
+    first = false;
+  }
+  return `${text}}`;
 }
 
 /** SHA-256 (hex) of the canonical JSON of the normalised inputs, so a LIMS can cache results. */
 export function inputsHash(inputs: unknown): string {
-  return createHash('sha256').update(canonicalJson(inputs)).digest('hex');
+  // One-shot hash (Node ≥ 20.12): half the cost of a Hash object for a short text.
+  return hash('sha256', canonicalJson(inputs), 'hex');
 }
 
-/** Whether any number in a value is NaN or infinite (no allocation: the common, all-finite case stays cheap). */
-function containsNonFinite(value: unknown): boolean {
-  if (typeof value === 'number') return !Number.isFinite(value);
-  if (value === null || typeof value !== 'object') return false;
+/** True when every number in a value is finite: the fast check every response passes, no paths built. */
+function allFinite(value: unknown): boolean {
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (value === null || typeof value !== 'object') return true;
   if (ArrayBuffer.isView(value)) {
     const view = value as unknown as ArrayLike<number>;
-    for (let i = 0; i < view.length; i++) if (!Number.isFinite(view[i])) return true;
-    return false;
+    for (let i = 0; i < view.length; i++) if (!Number.isFinite(view[i])) return false;
+    return true;
   }
   if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) if (containsNonFinite(value[i])) return true;
-    return false;
+    for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
+    return true;
   }
-  for (const k in value) if (Object.hasOwn(value, k) && containsNonFinite((value as Record<string, unknown>)[k])) return true;
-  return false;
+  for (const key in value) {
+    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key])) return false;
+  }
+  return true;
 }
 
 /** Path of the first non-finite number in a value, or null when every number is finite. */
 export function findNonFinite(value: unknown, path = ''): string | null {
-  return containsNonFinite(value) ? locateNonFinite(value, path) : null;
-}
-
-function locateNonFinite(value: unknown, path: string): string | null {
-  if (typeof value === 'number') return Number.isFinite(value) ? null : path || '(root)';
-  if (value === null || typeof value !== 'object') return null;
+  if (allFinite(value)) return null;
+  if (typeof value === 'number') return path || '(root)';
   if (ArrayBuffer.isView(value)) {
     const view = value as unknown as ArrayLike<number>;
     for (let i = 0; i < view.length; i++) if (!Number.isFinite(view[i])) return `${path}[${i}]`;
@@ -60,13 +76,13 @@ function locateNonFinite(value: unknown, path: string): string | null {
   }
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
-      const p = locateNonFinite(value[i], `${path}[${i}]`);
+      const p = findNonFinite(value[i], `${path}[${i}]`);
       if (p) return p;
     }
     return null;
   }
   for (const [k, v] of Object.entries(value as Record<string, unknown>)) {
-    const p = locateNonFinite(v, path ? `${path}.${k}` : k);
+    const p = findNonFinite(v, path ? `${path}.${k}` : k);
     if (p) return p;
   }
   return null;

@@ -23,6 +23,16 @@ const errorResponses = {
   429: { description: 'Rate limited', content: problemContent },
   503: { description: 'Overloaded or shutting down', content: problemContent },
 };
+/** HTTP caching (RFC 9110): the validator a client sends back, the tag and policy it receives, the 304 it gets. */
+const conditionalHeaders = z.object({
+  'if-none-match': z.string().optional().openapi({ description: 'The ETag of a result the client holds; when it names this result the answer is 304 with no body (and, when the service remembers the tag, no compute).', example: '"5f2b…"' }),
+});
+const cachingHeaders = (cacheControl: string) => ({
+  ETag: { description: 'Strong entity tag: for a calculation, its inputs hash (provenance.inputsHash) in quotes; for a catalogue, the SHA-256 of its body.', schema: { type: 'string' as const } },
+  'Cache-Control': { description: cacheControl, schema: { type: 'string' as const } },
+});
+const CATALOGUE_CACHING = cachingHeaders('public, max-age=300 (private behind API keys): the catalogue is fixed while the service runs');
+const notModified = { 304: { description: 'Not modified: the If-None-Match tag names this result (no body)' } };
 const methodNotAllowed = { 405: { description: 'Method not allowed on this path', content: problemContent } };
 
 let cached: Record<string, unknown> | undefined;
@@ -41,15 +51,17 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       description: c.description,
       tags: ['calculations'],
       security: [{}, { apiKey: [] }],
-      request: { body: { required: true, content: { 'application/json': { schema: c.body, example: c.example } } } },
+      request: { headers: conditionalHeaders, body: { required: true, content: { 'application/json': { schema: c.body, example: c.example } } } },
       responses: {
         200: {
           description: 'The result with its inputs, warnings, assumptions, references and provenance',
+          headers: cachingHeaders('no-cache: a client may keep the result and revalidate it with If-None-Match'),
           content: {
             'application/json': { schema: c.response },
             ...Object.fromEntries(Object.entries(c.present?.contentTypes ?? {}).map(([type, description]) => [type, { schema: { type: 'string', description } }])),
           },
         },
+        ...notModified,
         ...errorResponses,
       },
     });
@@ -62,11 +74,13 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     method: 'get',
     path: '/v1/fluids',
     operationId: 'listFluids',
+    request: { headers: conditionalHeaders },
     summary: 'The built-in fluid catalogue',
     description: 'Every fluid with each property value at its reference temperature, unit, valid temperature range and source key, and the references those keys name.',
     tags: ['catalogues'],
     responses: {
-      200: { description: 'The catalogue', content: { 'application/json': { schema: FluidsResponse } } },
+      200: { description: 'The catalogue', headers: CATALOGUE_CACHING, content: { 'application/json': { schema: FluidsResponse } } },
+      ...notModified,
       429: errorResponses[429],
     },
   });
@@ -75,15 +89,14 @@ export function buildOpenApiDocument(): Record<string, unknown> {
     method: 'get',
     path: '/v1/surfactants',
     operationId: 'listSurfactants',
+    request: { headers: conditionalHeaders },
     summary: 'The built-in surfactant catalogue',
     description:
       'Each surfactant with, per interface type (air–water, oil–water where data exist), maximum surface excess, Langmuir constant, rate constants, diffusivities, Gibbs prefactor and critical micelle concentration, each with its source.',
     tags: ['catalogues'],
     responses: {
-      200: {
-        description: 'The catalogue',
-        content: { 'application/json': { schema: SurfactantsResponse } },
-      },
+      200: { description: 'The catalogue', headers: CATALOGUE_CACHING, content: { 'application/json': { schema: SurfactantsResponse } } },
+      ...notModified,
       429: errorResponses[429],
     },
   });
@@ -118,7 +131,8 @@ export function buildOpenApiDocument(): Record<string, unknown> {
       title: 'oilskin',
       version: SERVICE_VERSION,
       description:
-        'Calculation service for liquid-infused surfaces: flow conditions, wetting state, lubricant retention, interface waves, slip and drag, surfactant sensitivity and heat transfer. Numbers are SI; strings with units are converted; angles are degrees. Errors are RFC 9457 problem details.',
+        'Calculation service for liquid-infused surfaces: flow conditions, wetting state, lubricant retention, interface waves, slip and drag, surfactant sensitivity and heat transfer. Numbers are SI; strings with units are converted; angles are degrees. Errors are RFC 9457 problem details.\n\n' +
+        '**Caution.** Results are engineering estimates from published models within stated validity ranges, not a design approval. Where a result feeds a decision about a pressurised line, a food- or medical-contact coating, or the handling of lubricants, solvents and surfactants, follow the applicable codes and standards and the safety data sheets of the products actually used, and have the decision checked by a qualified engineer. Read the warnings of every response: a result outside its validity range says so there.',
       license: { name: 'Proprietary', identifier: 'LicenseRef-Proprietary' },
       contact: { name: 'oilskin team' },
     },

@@ -46,11 +46,19 @@ describe('Kubernetes manifests', () => {
 
 describe('Dockerfile and compose', () => {
   const dockerfile = read('Dockerfile');
-  it('is multi-stage on an official Node 20 slim image, runs as non-root, has a HEALTHCHECK on /healthz', () => {
-    expect(dockerfile.match(/^FROM node:20[\w.-]*slim/gm)?.length).toBeGreaterThanOrEqual(2);
+  it('is multi-stage on an official slim image of a supported Node LTS, runs as non-root, has a HEALTHCHECK on /healthz', () => {
+    // Node.js release policy (nodejs.org/en/about/releases): an even release is supported to April 30 three years after its
+    // April release (v18: 2022-04-19 to 2025-04-30), so v20 ended on 2026-04-30; v22 runs to 2027, v24 to 2028.
+    expect(dockerfile.match(/^FROM node:(22|24)[\w.-]*slim/gm)?.length).toBeGreaterThanOrEqual(2);
+    expect(dockerfile).not.toMatch(/^FROM node:(1\d|20|21|23)\b/m);
     expect(dockerfile).toMatch(/--omit=dev/);
     expect(dockerfile).toMatch(/^USER node/m);
     expect(dockerfile).toMatch(/HEALTHCHECK[\s\S]*\/healthz/);
+  });
+  it('leaves PORT and HOST to the platform: the image sets neither OILSKIN_PORT nor OILSKIN_HOST, the health check follows PORT', () => {
+    expect(dockerfile).not.toMatch(/^ENV[^\n]*OILSKIN_(PORT|HOST)/m);
+    expect(dockerfile).not.toMatch(/^\s+OILSKIN_(PORT|HOST)=/m);
+    expect(dockerfile).toMatch(/HEALTHCHECK[\s\S]*process\.env\.PORT/);
   });
   it('starts the compiled server that `npm run build` produces', () => {
     const pkg = JSON.parse(read('package.json'));

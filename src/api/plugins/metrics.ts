@@ -12,11 +12,16 @@ declare module 'fastify' {
   interface FastifyRequest {
     startedAt?: bigint;
   }
+  interface FastifyInstance {
+    /** The registry /metrics exposes; other plugins add their metrics to it. */
+    metricsRegistry: Registry;
+  }
 }
 
 export default fp(
   async function metricsPlugin(app: FastifyInstance, options: { poolStats: () => PoolStats }) {
     const registry = new Registry();
+    app.decorate('metricsRegistry', registry);
     collectDefaultMetrics({ register: registry, prefix: 'oilskin_', eventLoopMonitoringPrecision: 20 });
     const requests = new Counter({
       name: 'oilskin_http_requests_total',
@@ -56,15 +61,18 @@ export default fp(
       },
     });
 
-    app.addHook('onRequest', async (request) => {
+    // Callback-style: these run on every request, and an async hook costs a promise and a microtask turn each.
+    app.addHook('onRequest', (request, _reply, done) => {
       request.startedAt = process.hrtime.bigint();
+      done();
     });
-    app.addHook('onResponse', async (request, reply) => {
+    app.addHook('onResponse', (request, reply, done) => {
       // Unmatched URLs share one label so scanners cannot blow up the label set.
       const route = request.routeOptions.url ?? 'unmatched';
       const labels = { route, method: request.method, status_code: String(reply.statusCode) };
       requests.inc(labels);
       if (request.startedAt !== undefined) duration.observe(labels, Number(process.hrtime.bigint() - request.startedAt) / 1e9);
+      done();
     });
 
     app.get('/metrics', { schema: { hide: true } }, async (_request, reply) => {

@@ -3,6 +3,8 @@
  * pool. The 200 response is serialised from the calculation's typed response
  * schema (fastify compiles it), not by the app's generic serializer: fields the
  * schema does not list never reach the wire, and serialisation is faster.
+ * Results carry their inputs hash as a strong ETag; the result cache
+ * (plugins/result-cache.ts) answers If-None-Match and repeated heavy requests.
  */
 import type { FastifyInstance, FastifyReply } from 'fastify';
 import type { ZodType } from 'zod';
@@ -13,6 +15,9 @@ import { computeCalculation } from '../worker.js';
 import { ProblemError } from '../problem.js';
 import { z } from '../schemas/zod.js';
 import { CALCULATIONS } from './index.js';
+import { etagMatches, sendNotModified } from '../plugins/result-cache.js';
+
+const JSON_TYPE = 'application/json; charset=utf-8';
 
 /** JSON Schema of a response schema, as fastify's serializer compiler takes it. */
 export function responseJsonSchema(schema: ZodType): Record<string, unknown> {
@@ -31,14 +36,35 @@ function clientGoneSignal(reply: FastifyReply): { signal: AbortSignal; release: 
   return { signal: controller.signal, release: () => response.off('close', onClose) };
 }
 
+/** Calculation responses may be stored by a client but must be revalidated (If-None-Match with the ETag). */
+const CALCULATION_CACHE_CONTROL = 'no-cache';
+
 export default async function calculationRoutes(app: FastifyInstance, options: { pool: SolverPool }) {
+  const cache = app.resultCache;
   for (const definition of CALCULATIONS) {
     app.post(definition.path, { schema: { response: { 200: responseJsonSchema(definition.response) } } }, async (request, reply) => {
       const input = parseBody(definition, request.body);
       const wanted = { accept: request.headers.accept ?? '', query: (request.query ?? {}) as Record<string, unknown> };
       definition.present?.check?.(wanted);
-      const start = performance.now();
       const heavy = typeof definition.heavy === 'function' ? definition.heavy(input) : definition.heavy;
+      const ifNoneMatch = request.headers['if-none-match'];
+      // A calculation with other representations (assess: HTML, SVG) is not cached: its key would need the Accept header and query.
+      const key = cache.lru.enabled && !definition.present ? cache.key(definition.name, input) : undefined;
+      if (key !== undefined) {
+        const known = cache.lru.get(key);
+        if (known && etagMatches(ifNoneMatch, known.etag)) {
+          cache.hit(definition.name);
+          return sendNotModified(reply, known.etag, CALCULATION_CACHE_CONTROL);
+        }
+        if (known?.body) {
+          cache.hit(definition.name);
+          reply.header('etag', known.etag).header('cache-control', CALCULATION_CACHE_CONTROL).type(JSON_TYPE);
+          return reply.send(known.body);
+        }
+        cache.miss(definition.name);
+      }
+
+      const start = performance.now();
       let out;
       if (heavy) {
         const gone = clientGoneSignal(reply);
@@ -60,17 +86,21 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
         if ('failed' in r) throw new ProblemError(r.problem);
         out = r;
       }
-      reply.header('cache-control', 'no-store');
-      const answer = envelope(out, performance.now() - start, input as object);
-      const other = definition.present ? await definition.present.render(answer, input, wanted) : undefined;
+      cache.computed(definition.name);
+      const result = envelope(out, performance.now() - start, input as object);
+      const other = definition.present ? await definition.present.render(result, input, wanted) : undefined;
       if (other) {
-        reply.type(other.contentType);
+        reply.header('cache-control', 'no-store').type(other.contentType);
         // (The route's reply type knows only the JSON schema; another representation is a string.)
         return (reply as FastifyReply).send(other.body);
       }
-      reply.type('application/json; charset=utf-8');
-      reply.serializer(reply.getSerializationFunction('200') as (payload: unknown) => string);
-      return answer;
+      const etag = `"${result.provenance.inputsHash}"`;
+      // Serialised by the typed response schema (fastify's compiled serializer), once, so heavy bodies can be kept.
+      const body = (reply.getSerializationFunction('200') as (payload: unknown) => string)(result);
+      if (key !== undefined) cache.lru.set(key, heavy ? { etag, body: Buffer.from(body) } : { etag });
+      if (etagMatches(ifNoneMatch, etag)) return sendNotModified(reply, etag, CALCULATION_CACHE_CONTROL);
+      reply.header('etag', etag).header('cache-control', CALCULATION_CACHE_CONTROL).type(JSON_TYPE);
+      return reply.send(body);
     });
   }
 }

@@ -80,6 +80,6 @@ export const AssessResultSchema = z
   .openapi('AssessResult');
 
 /** The common envelope, with the requirements in effect echoed among the inputs (they are part of what was answered). */
-export const AssessResponse = envelopeSchema('AssessResponse', AssessResultSchema)
+export const AssessResponse = envelopeSchema('AssessEnvelope', AssessResultSchema)
   .extend({ inputs: DesignEchoSchema.extend({ requirements: z.record(z.string(), z.number().nullable()).optional() }) })
   .openapi('AssessResponse');

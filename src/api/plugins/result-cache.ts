@@ -1,0 +1,148 @@
+/**
+ * HTTP caching of calculations: the strong ETag of a result is its inputs hash
+ * (`provenance.inputsHash`, which identifies the calculation), and a bounded
+ * in-memory LRU remembers, per normalised request, the ETag of its result and,
+ * for heavy calculations, the serialised response itself.
+ *
+ * - A request whose `If-None-Match` names the remembered ETag is answered 304
+ *   without computing (a calculation POST is safe and idempotent: a query with
+ *   a body, so a conditional request is treated as for GET).
+ * - A repeated heavy request is answered from the remembered bytes.
+ * - Light results keep only their ETag (about 0.5 kB per entry): recomputing
+ *   them costs less than keeping them.
+ *
+ * The key is the calculation name and the JSON of the parsed document: the
+ * schema has normalised units and put the keys in schema order, so "10 mm"
+ * and 0.01 share an entry. Sizes are counted in bytes (key + body); the
+ * oldest entries go first. `OILSKIN_RESULT_CACHE_MB` sets the bound (0 turns
+ * the cache off; ETags and 304 after a compute still work).
+ */
+import type { FastifyInstance, FastifyReply } from 'fastify';
+import fp from 'fastify-plugin';
+import { Counter, Gauge, type Registry } from 'prom-client';
+
+export interface CachedResult {
+  /** Strong entity tag, quoted: `"<inputsHash>"`. */
+  etag: string;
+  /** The serialised 200 body (heavy results only). */
+  body?: Buffer;
+}
+
+export interface ResultCacheStats {
+  entries: number;
+  bytes: number;
+  maxBytes: number;
+}
+
+/** A least-recently-used map bounded by the bytes of its keys and bodies. */
+export class ResultLru {
+  private readonly entries = new Map<string, CachedResult>();
+  private size = 0;
+
+  constructor(readonly maxBytes: number) {}
+
+  get enabled(): boolean {
+    return this.maxBytes > 0;
+  }
+
+  private static cost(key: string, entry: CachedResult): number {
+    // UTF-16 key in the heap, the body's bytes, the tag and the Map's own overhead (about 100 bytes, common practice, no source).
+    return 2 * key.length + (entry.body?.byteLength ?? 0) + 2 * entry.etag.length + 100;
+  }
+
+  get(key: string): CachedResult | undefined {
+    const entry = this.entries.get(key);
+    if (entry) {
+      this.entries.delete(key);
+      this.entries.set(key, entry);
+    }
+    return entry;
+  }
+
+  set(key: string, entry: CachedResult): void {
+    const cost = ResultLru.cost(key, entry);
+    if (cost > this.maxBytes) return;
+    const old = this.entries.get(key);
+    if (old) {
+      this.size -= ResultLru.cost(key, old);
+      this.entries.delete(key);
+    }
+    this.entries.set(key, entry);
+    this.size += cost;
+    for (const [oldestKey, oldest] of this.entries) {
+      if (this.size <= this.maxBytes) break;
+      this.entries.delete(oldestKey);
+      this.size -= ResultLru.cost(oldestKey, oldest);
+    }
+  }
+
+  stats(): ResultCacheStats {
+    return { entries: this.entries.size, bytes: this.size, maxBytes: this.maxBytes };
+  }
+}
+
+/**
+ * Does an `If-None-Match` field value name this tag? Weak comparison, as RFC 9110
+ * §13.1.2 prescribes for If-None-Match (a `W/` prefix is ignored); `*` names any tag.
+ */
+export function etagMatches(ifNoneMatch: string | string[] | undefined, etag: string): boolean {
+  if (ifNoneMatch === undefined) return false;
+  const field = Array.isArray(ifNoneMatch) ? ifNoneMatch.join(',') : ifNoneMatch;
+  if (field.trim() === '*') return true;
+  return field.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag);
+}
+
+/** Answer 304 Not Modified with the tag (RFC 9110 §15.4.5: no body, validators kept). */
+export function sendNotModified(reply: FastifyReply, etag: string, cacheControl: string): FastifyReply {
+  return reply.code(304).header('etag', etag).header('cache-control', cacheControl).send();
+}
+
+/** What a calculation route needs from the cache: the LRU and its counters. */
+export interface ResultCache {
+  lru: ResultLru;
+  /** The cache key of a parsed request. */
+  key(calculation: string, input: unknown): string;
+  hit(calculation: string): void;
+  miss(calculation: string): void;
+  computed(calculation: string): void;
+}
+
+declare module 'fastify' {
+  interface FastifyInstance {
+    resultCache: ResultCache;
+  }
+}
+
+export default fp(
+  async function resultCachePlugin(app: FastifyInstance, options: { maxBytes: number; registry: Registry }) {
+    const lru = new ResultLru(options.maxBytes);
+    const registers = [options.registry];
+    const hits = new Counter({ name: 'oilskin_result_cache_hits_total', help: 'Calculation requests answered from the result cache (304 or remembered body), by calculation', labelNames: ['calculation'], registers });
+    const misses = new Counter({ name: 'oilskin_result_cache_misses_total', help: 'Calculation requests the result cache could not answer, by calculation', labelNames: ['calculation'], registers });
+    const computed = new Counter({ name: 'oilskin_calculations_computed_total', help: 'Calculations actually computed (inline or on a solver thread), by calculation', labelNames: ['calculation'], registers });
+    new Gauge({
+      name: 'oilskin_result_cache_entries',
+      help: 'Entries in the result cache',
+      registers,
+      collect() {
+        this.set(lru.stats().entries);
+      },
+    });
+    new Gauge({
+      name: 'oilskin_result_cache_bytes',
+      help: 'Bytes held by the result cache (keys and bodies), bounded by OILSKIN_RESULT_CACHE_MB',
+      registers,
+      collect() {
+        this.set(lru.stats().bytes);
+      },
+    });
+    app.decorate('resultCache', {
+      lru,
+      key: (calculation: string, input: unknown) => `${calculation}\n${JSON.stringify(input)}`,
+      hit: (calculation: string) => hits.inc({ calculation }),
+      miss: (calculation: string) => misses.inc({ calculation }),
+      computed: (calculation: string) => computed.inc({ calculation }),
+    } satisfies ResultCache);
+  },
+  { name: 'oilskin-result-cache', dependencies: ['oilskin-metrics'] },
+);
