@@ -3254,6 +3254,62 @@ export interface operations {
         };
         requestBody: {
             content: {
+                /**
+                 * @example {
+                 *       "design": {
+                 *         "texture": {
+                 *           "grooveWidth": "50 um",
+                 *           "pitch": "100 um",
+                 *           "grooveDepth": "25 um",
+                 *           "grooveLength": "20 mm"
+                 *         },
+                 *         "lubricant": {
+                 *           "id": "n-decane",
+                 *           "temperature": "20 degC"
+                 *         },
+                 *         "workingFluid": {
+                 *           "id": "water",
+                 *           "temperature": "20 degC"
+                 *         },
+                 *         "contactAngles": {
+                 *           "underWorkingFluid": {
+                 *             "advancing": 120,
+                 *             "receding": 80
+                 *           }
+                 *         },
+                 *         "flow": {
+                 *           "kind": "channel",
+                 *           "height": "10 mm",
+                 *           "bulkVelocity": "1 m/s"
+                 *         },
+                 *         "options": {
+                 *           "method": "closed-form"
+                 *         }
+                 *       },
+                 *       "search": {
+                 *         "grooveWidth": {
+                 *           "min": "5 um",
+                 *           "max": "300 um"
+                 *         },
+                 *         "interfaceFraction": {
+                 *           "min": 0.5,
+                 *           "max": 0.5
+                 *         },
+                 *         "grooveDepth": {
+                 *           "min": "2 um",
+                 *           "max": "200 um"
+                 *         },
+                 *         "coarsePoints": 3,
+                 *         "refinements": 1
+                 *       },
+                 *       "requirements": {
+                 *         "minDragReduction": 0.02,
+                 *         "minRetainedFraction": 0.5,
+                 *         "serviceTime": "2 h"
+                 *       },
+                 *       "objective": "dragReduction"
+                 *     }
+                 */
                 "application/json": components["schemas"]["DesignWindowRequest"];
             };
         };

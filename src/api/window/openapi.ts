@@ -46,6 +46,27 @@ export const DesignWindowResponseSchema = z
   })
   .openapi('DesignWindowResponse');
 
+/** A small window (3 × 3 coarse lattice, one refinement) over the invented demo channel of examples/design-window.json. */
+const EXAMPLE = {
+  design: {
+    texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '25 um', grooveLength: '20 mm' },
+    lubricant: { id: 'n-decane', temperature: '20 degC' },
+    workingFluid: { id: 'water', temperature: '20 degC' },
+    contactAngles: { underWorkingFluid: { advancing: 120, receding: 80 } },
+    flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
+    options: { method: 'closed-form' },
+  },
+  search: {
+    grooveWidth: { min: '5 um', max: '300 um' },
+    interfaceFraction: { min: 0.5, max: 0.5 },
+    grooveDepth: { min: '2 um', max: '200 um' },
+    coarsePoints: 3,
+    refinements: 1,
+  },
+  requirements: { minDragReduction: 0.02, minRetainedFraction: 0.5, serviceTime: '2 h' },
+  objective: 'dragReduction',
+};
+
 export function registerWindowPaths(registry: OpenAPIRegistry, problemContent: ZodContentObject, errorResponses: Record<number, ResponseConfig>): void {
   registry.registerPath({
     method: 'post',
@@ -56,7 +77,7 @@ export function registerWindowPaths(registry: OpenAPIRegistry, problemContent: Z
       'Adaptive search of groove width, pitch (or interface fraction) and depth within bounds, for each candidate lubricant: the coarse lattice, then cells whose corners differ refined by halving. Returns the feasible designs, the boundary, the Pareto front (drag reduction, retained share, waves margin), the best design by the objective, the share of candidates each requirement limits, the number of designs evaluated; Accept: image/svg+xml returns the plot of the width × depth plane through the best design.',
     tags: ['calculations'],
     security: [{}, { apiKey: [] }],
-    request: { body: { required: true, content: { 'application/json': { schema: WindowRequestSchema } } } },
+    request: { body: { required: true, content: { 'application/json': { schema: WindowRequestSchema, example: EXAMPLE } } } },
     responses: {
       200: {
         description: 'The window',
