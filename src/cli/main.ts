@@ -42,16 +42,23 @@ export function runCli(
   const catalogueFile = catalogueFlag(argv) ?? (env.OILSKIN_CATALOGUE_FILE || undefined);
   const rest = withoutCatalogueFlag(argv);
   if (catalogueFile === undefined) return runCalculation(rest, readInput);
-  try {
-    loadUserCatalogue(catalogueFile);
-  } catch (error) {
-    if (error instanceof CatalogueFileError) return { code: 2, stdout: '', stderr: `oilskin: ${error.message}\n` };
-    throw error;
-  }
+  const refused = installCatalogueFile(catalogueFile);
+  if (refused !== undefined) return { code: 2, stdout: '', stderr: refused };
   try {
     return runCalculation(rest, readInput);
   } finally {
     uninstallUserCatalogue();
+  }
+}
+
+/** Load a lab's catalogue file; the message for stderr when the file is refused, else undefined. */
+function installCatalogueFile(file: string): string | undefined {
+  try {
+    loadUserCatalogue(file);
+    return undefined;
+  } catch (error) {
+    if (error instanceof CatalogueFileError) return `oilskin: ${error.message}\n`;
+    throw error;
   }
 }
 
@@ -114,14 +121,10 @@ export async function main(argv: readonly string[], io: CliIo = nodeIo()): Promi
   const streaming = name !== undefined && Object.hasOwn(STREAMING, name) ? STREAMING[name] : undefined;
   if (streaming) {
     const catalogueFile = catalogueFlag(argv) ?? (process.env.OILSKIN_CATALOGUE_FILE || undefined);
-    if (catalogueFile !== undefined) {
-      try {
-        loadUserCatalogue(catalogueFile);
-      } catch (error) {
-        if (!(error instanceof CatalogueFileError)) throw error;
-        io.stderr.write(`oilskin: ${error.message}\n`);
-        return 2;
-      }
+    const refused = catalogueFile === undefined ? undefined : installCatalogueFile(catalogueFile);
+    if (refused !== undefined) {
+      io.stderr.write(refused);
+      return 2;
     }
     return streaming(rest, io);
   }
