@@ -82,8 +82,8 @@ export const PERFLUORODECALIN: CatalogueFluid = {
     'Single values near 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
     `and boiling points and density from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Viscosity and surface ` +
     'tension are recalled: the measurements found could be identified but their tables not read (searched ' +
-    'again: M. G. Freire et al. 2006, J. Chem. Eng. Data 51, 1820, surface tensions of perfluorocarbons at ' +
-    '283–327 K, abstract only; Liquids 3 (2023) 48, density and viscosity, abstract only; no NIST TRC ThermoML ' +
+    'again: "Surface tension of liquid fluorocompounds", J. Chem. Eng. Data 51 (2006) 1820, 283–327 K, ' +
+    'abstract only; Liquids 3 (2023) 48, density and viscosity, abstract only; no NIST TRC ThermoML ' +
     'record of either was found).',
   freezingPoint: 264.95,
   boilingPoint: 416.15,
