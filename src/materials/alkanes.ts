@@ -128,7 +128,9 @@ function alkane(data: AlkaneData): CatalogueFluid {
 
 /**
  * An alkane–water interfacial tension at 25 °C that Zeppieri et al. (2001) measured (10–60 °C, abstract read)
- * but whose tables could not be read: the value itself is recalled.
+ * but whose tables could not be read: the value itself is recalled. Searched again for a readable value: the
+ * NIST TRC ThermoML records of J. Chem. Eng. Data (none for this paper or for a decane– or dodecane–water
+ * tension near 25 °C and 0.1 MPa was found) and abstracts of pendant-drop studies (none states the value).
  */
 function recalledAgainstZeppieri(value: number): AlkaneData['interfacialTensionWater'] {
   return {

@@ -25,6 +25,20 @@ import type { CatalogueFluid } from './types.js';
 // Fluorinated lubricants and mineral oil (single values near room temperature)
 // ---------------------------------------------------------------------------------------------
 
+/** Recalled surface tensions, each used for the total and (apolar liquids) for its dispersive part. */
+const PFPE_SURFACE_TENSION = constant(17e-3, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`);
+const PERFLUORODECALIN_SURFACE_TENSION = constant(17.6e-3, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`);
+const MINERAL_OIL_SURFACE_TENSION = constant(30e-3, around(25, 5), MINERAL_OIL_DATA, `typical value; ${FROM_MEMORY}`);
+
+/**
+ * Note of the dispersive part of a fluorinated oil's surface tension. Taking it equal to the total for an apolar
+ * fluorinated liquid is common practice, no source. The number is the entry's total surface tension, whose own
+ * note marks it as recalled; it is tagged there once rather than twice.
+ */
+const DISPERSIVE_EQUALS_TOTAL_FLUORINATED =
+  'taken equal to the total surface tension, an apolar fluorinated liquid (common practice, no source); the number ' +
+  'is the total above, whose note marks it as recalled';
+
 export const PFPE_GENERIC: CatalogueFluid = {
   id: 'pfpe-generic',
   name: 'Perfluoropolyether oil, about 80 cSt at 20 °C (poly(hexafluoropropylene oxide))',
@@ -34,7 +48,9 @@ export const PFPE_GENERIC: CatalogueFluid = {
     'used in the first slippery liquid-infused porous surfaces. Single values near room temperature, ' +
     "typical of suppliers' product information and recalled: no handbook or peer-reviewed table of this " +
     'class could be read (searched: liquid-infused-surface papers that tabulate their lubricants, e.g. Smith ' +
-    'et al. 2013 Soft Matter 9, 1772, and perfluoropolyether property papers); measure and override.',
+    'et al. 2013 Soft Matter 9, 1772, and Sett et al. 2017 ACS Appl. Mater. Interfaces, whose lubricant tables ' +
+    'were not reachable; J. Chem. Eng. Data perfluoropolyether measurements and the NIST TRC ThermoML records of ' +
+    'that journal, none found); measure and override.',
   // Pour point and upper limit of requests (taken as the decomposition onset on clean surfaces): recalled with the
   // rest of this entry (from memory); the upper limit is a cap on requests, not a safe working temperature.
   freezingPoint: CELSIUS_ZERO - 36,
@@ -49,13 +65,8 @@ export const PFPE_GENERIC: CatalogueFluid = {
   properties: {
     density: constant(1910, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     viscosity: constant(1910 * 82e-6, around(20, 3), PFPE_FLUID_DATA, `82 cSt at 20 °C × density; ${FROM_MEMORY}`),
-    surfaceTension: constant(17e-3, around(20, 5), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
-    surfaceTensionDispersive: constant(
-      17e-3,
-      around(20, 5),
-      PFPE_FLUID_DATA,
-      `taken equal to the total surface tension (apolar fluorinated oil); ${FROM_MEMORY}`,
-    ),
+    surfaceTension: PFPE_SURFACE_TENSION,
+    surfaceTensionDispersive: { ...PFPE_SURFACE_TENSION, note: DISPERSIVE_EQUALS_TOTAL_FLUORINATED },
     interfacialTensionWater: constant(49e-3, around(20, 5), PFPE_FLUID_DATA, FROM_MEMORY),
     thermalConductivity: constant(0.087, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
     specificHeat: constant(1000, around(20, 10), PFPE_FLUID_DATA, `typical value; ${FROM_MEMORY}`),
@@ -70,8 +81,10 @@ export const PERFLUORODECALIN: CatalogueFluid = {
     'Perfluorodecalin (C10F18, cis/trans mixture), a volatile low-viscosity perfluorocarbon lubricant. ' +
     'Single values near 25 °C. It evaporates noticeably at room temperature, so films thin over time. Melting ' +
     `and boiling points and density from the CRC Handbook (${CRC_ORGANIC_CONSTANTS.key}). Viscosity and surface ` +
-    'tension are recalled: the J. Chem. Eng. Data and Liquids (2023) measurements found could be ' +
-    'identified but their tables not read.',
+    'tension are recalled: the measurements found could be identified but their tables not read (searched ' +
+    'again: "Surface tension of liquid fluorocompounds", J. Chem. Eng. Data 51 (2006) 1820, 283–327 K, ' +
+    'abstract only; Liquids 3 (2023) 48, density and viscosity, abstract only; no NIST TRC ThermoML ' +
+    'record of either was found).',
   freezingPoint: 264.95,
   boilingPoint: 416.15,
   referenceTemperature: 298.15,
@@ -87,13 +100,8 @@ export const PERFLUORODECALIN: CatalogueFluid = {
         'range around 25 °C is ours',
     ),
     viscosity: constant(5.1e-3, around(25, 3), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
-    surfaceTension: constant(17.6e-3, around(25, 5), PERFLUORODECALIN_DATA, `at 25 °C; ${FROM_MEMORY}`),
-    surfaceTensionDispersive: constant(
-      17.6e-3,
-      around(25, 5),
-      PERFLUORODECALIN_DATA,
-      `taken equal to the total surface tension (apolar perfluorocarbon); ${FROM_MEMORY}`,
-    ),
+    surfaceTension: PERFLUORODECALIN_SURFACE_TENSION,
+    surfaceTensionDispersive: { ...PERFLUORODECALIN_SURFACE_TENSION, note: DISPERSIVE_EQUALS_TOTAL_FLUORINATED },
   },
 };
 
@@ -106,7 +114,8 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
     'lots by tens of per cent in viscosity: measure and override where it matters. Single values at 25 °C, ' +
     'recalled: as a mixture it has no handbook entry, and no peer-reviewed table of a light grade was found. ' +
     `The pharmacopoeial grade (${USP_LIGHT_MINERAL_OIL.key}) only bounds it: specific gravity 0.818–0.880, ` +
-    'kinematic viscosity 3.0–34.4 mm²/s at 40 °C, a factor of ten.',
+    'kinematic viscosity 3.0–34.4 mm²/s at 40 °C, a factor of ten (searched again for a measured light grade: ' +
+    'only suppliers\' and popular pages).',
   referenceTemperature: 298.15,
   safety: "Combustible; aspiration hazard if swallowed. Consult the supplier's safety data sheet.",
   properties: {
@@ -117,13 +126,14 @@ export const MINERAL_OIL_LIGHT: CatalogueFluid = {
       `at 25 °C; ${FROM_MEMORY}; inside the pharmacopoeial specific-gravity range 0.818–0.880 (${USP_LIGHT_MINERAL_OIL.key})`,
     ),
     viscosity: constant(838 * 30e-6, around(25, 3), MINERAL_OIL_DATA, `≈ 30 cSt at 25 °C × density; ${FROM_MEMORY}`),
-    surfaceTension: constant(30e-3, around(25, 5), MINERAL_OIL_DATA, `typical value; ${FROM_MEMORY}`),
-    surfaceTensionDispersive: constant(
-      30e-3,
-      around(25, 5),
-      REFERENCES.fowkes1964,
-      `equal to the total for saturated hydrocarbons (Fowkes 1964); total ${FROM_MEMORY}`,
-    ),
+    surfaceTension: MINERAL_OIL_SURFACE_TENSION,
+    surfaceTensionDispersive: {
+      ...MINERAL_OIL_SURFACE_TENSION,
+      source: REFERENCES.fowkes1964,
+      note:
+        'equal to the total for saturated hydrocarbons (Fowkes 1964); the number is the total surface tension above, ' +
+        'whose note marks it as recalled',
+    },
   },
 };
 

@@ -51,6 +51,9 @@ const PDMS_SURFACE_TENSION = { intercept: 21.5e-3, slope: 0.06e-3, validRange: {
  * J. Chem. Eng. Data 42, 328: abstract only), the European Pharmacopoeia dimeticone monograph (the part read
  * has no density table), the lubricant tables of liquid-infused-surface papers (Smith et al. 2013, Soft
  * Matter 9, 1772, and others: abstracts only), and PDMS–water interfacial-tension measurements (none found).
+ * Searched again without a readable table: the Kuo (1999) entry in a full reproduction (only its opening is
+ * reachable), V. G. Nemzer & L. V. Nemzer (1998, J. Chem. Eng. Data 43, thermophysical properties of liquid
+ * poly(methylsiloxane)s: title only), and J. Chem. Eng. Data records in the NIST TRC ThermoML archive.
  */
 const GRADE_VALUES_SEARCHED =
   'searched without a readable table: the PDMS entry of the Polymer Data Handbook (Kuo 1999), Nemzer et al. ' +

@@ -72,7 +72,17 @@ const R = {
   atomicWeights: IUPAC_ATOMIC_WEIGHTS_1995,
 };
 
-
+/*
+ * Values whose note carries the recalled tag (the SDS critical micelle concentration; the octylphenol ethoxylate
+ * diffusivity, critical micelle concentration, maximum surface excess and Langmuir constant) were searched for
+ * again without a readable table: NSRDS-NBS 36 (title page and abstract only), the study the octylphenol
+ * ethoxylate set is usually traced to (Lin, McKeigue & Maldarelli 1990, AIChE J.: an unconfirmed lead, not
+ * found), Chatterjee et al. (2001, J. Surface Sci. Technol. 17, 1: abstract only, no values) and abstracts of
+ * conductivity and fluorescence studies. Corroboration, not confirmation, for SDS: an abstract gives 8 mM
+ * (pyrene fluorescence), and a two-line fit to the SDS conductivity data that Al-Soufi, Piñeiro &
+ * Novo publish with their concentration model (J. Colloid Interface Sci. 370 (2012) 102) breaks at 8.22 mM
+ * (computed while writing; the data set's temperature is not stated beside it). docs/citations-ledger.md has the log.
+ */
 export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   {
     id: 'sds',
