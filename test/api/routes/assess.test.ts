@@ -61,11 +61,11 @@ describe('POST /v1/assess: the facts of the trade', () => {
   // The kind of study the fact comes from: direct numerical simulations of turbulent channels with liquid-infused
   // streamwise grooves and a deformable interface, in which waves appear when the tension is small or the grooves wide,
   // and act as roughness (Sundin, Zaleski & Bagheri 2021, J. Fluid Mech. 915, doi:10.1017/jfm.2021.241; abstract read,
-  // the fact's figures not found in it). Conventions (from memory, not confirmed in a paper's body): bulk Reynolds and
-  // Weber numbers U_b h/ν and ρU_b²h/γ on the half-height h, U_b h/ν ≈ 2800–3000 being the Re_τ ≈ 180 channel of Kim,
-  // Moin & Moser 1987 (J. Fluid Mech. 177, 133; abstract: 3300 on the centreline velocity and half-width); grooves some
-  // wall units wide.
-  // Invented demo in those conventions: water at 1 m/s in a 6 mm channel (U_b h/ν ≈ 2990, Re_τ ≈ 193 by Dean 1978),
+  // the fact's figures not found in it). Which lengths such simulations put in their Reynolds and Weber numbers was not
+  // found in what we read; we chose the half-height h for both, U_b h/ν and ρU_b²h/γ, the length of the low-Reynolds-
+  // number channel of Kim, Moin & Moser 1987 (J. Fluid Mech. 177, 133; abstract: 3300 on the centreline velocity and
+  // half-width), and grooves some wall units wide, not the single wall unit of the earlier demo.
+  // Invented demo in that convention: water at 1 m/s in a 6 mm channel (U_b h/ν ≈ 2990, Re_τ ≈ 193 by Dean 1978),
   // grooves 140 µm wide and deep at 175 µm pitch (w⁺ ≈ 9.0, P⁺ ≈ 11.2), a lubricant of water's viscosity and density,
   // γ = ρU_b²h/We = 29.9 mN/m at We = 100 and 15.0 mN/m at We = 200.
   // Our models (measured): drag reduction 7.5 % closed-form (8.6 % exact core); We = 100: Λ = 1.16, Π_Λ = 1.57,

@@ -141,10 +141,9 @@ describe('evaluateWaves: scaling, trends and the regime boundary', () => {
     expect(atMinimum.scaling.inertialCapillaryNumber).toBeCloseTo(2 ** (-1 / 3), 8);
   });
 
-  // Conventions of turbulent-channel simulations of liquid-infused grooves (from memory, not confirmed in a paper's
-  // body): bulk Reynolds number U_b h/ν and Weber number ρU_b²h/γ both on the half-height h; U_b h/ν ≈ 2800–3000 is the
-  // Re_τ ≈ 180 channel of Kim, Moin & Moser (1987, J. Fluid Mech. 177, 133; abstract: Reynolds number 3300 on the
-  // centreline velocity and the half-width).
+  // Convention chosen (see test/api/routes/assess.test.ts): bulk Reynolds number U_b h/ν and Weber number ρU_b²h/γ both
+  // on the half-height h, the length of Kim, Moin & Moser's channel (1987, J. Fluid Mech. 177, 133; abstract: Reynolds
+  // number 3300 on the centreline velocity and the half-width).
   it('channel at U_b h/ν ≈ 3000 (half-height h): doubling the bulk Weber number ρU_b²h/γ (halving γ) raises Λ by 2^(1/3) and doubles every load ratio (definitions: each ratio ∝ 1/γ without gravity)', () => {
     const flow = evaluateFlow({ density: water.density, viscosity: water.viscosity }, { kind: 'channel', height: 6.02e-3, bulkVelocity: 1 }).result;
     expect(Math.abs(flow.reynoldsNumber! / 2 - 3000)).toBeLessThan(10);
