@@ -58,24 +58,41 @@ describe('POST /v1/assess: the facts of the trade', () => {
     expect(r.couplings.filledFractionAtServiceTime).toBeLessThan(0.75);
   });
 
-  // Equal viscosity and density, bulk Re ≈ 3000 (3 mm channel at 1 m/s), bulk Weber number ρU²w/γ = 100 on the groove
-  // width (γ = 0.2 mN/m for w = 20 µm). Fact of the trade (common practice, no source): calm with about 10 % drag
-  // reduction, and doubling the Weber number makes the interface wavy with no credited reduction. Our models give
-  // the regime change (the depinning load p'/(2γ/w) goes from 0.84 to 1.68, Farabee & Casarella's p'_rms band) but
-  // not the 10 %: at a groove narrow enough to stay on the calm side of Λ = 1 the closed-form drag reduction of an
-  // equal-viscosity lubricant is about 1.6 %. The house bands call the first interface "marginal" (Π between ½ and 1).
-  it('bulk Re ≈ 3000, We_b = 100, equal viscosity and density: not wavy, drag reduction credited; We_b = 200 (half the tension): wavy, none credited (common practice, no source)', async () => {
+  // The kind of study the fact comes from: direct numerical simulations of turbulent channels with liquid-infused
+  // streamwise grooves and a deformable interface, in which waves appear when the tension is small or the grooves wide,
+  // and act as roughness (Sundin, Zaleski & Bagheri 2021, J. Fluid Mech. 915, doi:10.1017/jfm.2021.241; abstract read,
+  // the fact's figures not found in it). Which lengths such simulations put in their Reynolds and Weber numbers was not
+  // found in what we read; we chose the half-height h for both, U_b h/ν and ρU_b²h/γ, the length of the low-Reynolds-
+  // number channel of Kim, Moin & Moser 1987 (J. Fluid Mech. 177, 133; abstract: 3300 on the centreline velocity and
+  // half-width), and grooves some wall units wide, not the single wall unit of the earlier demo.
+  // Invented demo in that convention: water at 1 m/s in a 6 mm channel (U_b h/ν ≈ 2990, Re_τ ≈ 193 by Dean 1978),
+  // grooves 140 µm wide and deep at 175 µm pitch (w⁺ ≈ 9.0, P⁺ ≈ 11.2), a lubricant of water's viscosity and density,
+  // γ = ρU_b²h/We = 29.9 mN/m at We = 100 and 15.0 mN/m at We = 200.
+  // Our models (measured): drag reduction 7.5 % closed-form (8.6 % exact core); We = 100: Λ = 1.16, Π_Λ = 1.57,
+  // "marginal", credited in full; We = 200: Π_Λ = 3.13, "wavy", nothing credited.
+  // Reproduced: about 10 % (5–15 %) credited at We = 100, and doubling We makes it wavy with no credit.
+  // Not reproduced: "calm" at We = 100. Halving γ doubles every load ratio, and our bands put calm (Π < ½) and wavy
+  // (Π_Λ > 2) a factor four apart, so no single doubling goes from calm to wavy (test/physics/waves/waves.test.ts).
+  // Grooves narrow enough to be calm at We = 100 (w⁺ ≈ 6) give 3–6 % (open area ½ to 0.9) and are only marginal at
+  // We = 200; w⁺ ≈ 18 at half open area gives 8.4 % but is wavy at both. The critical-layer screen (Miles 1957) finds a
+  // layer above the sublayer at both Weber numbers here. No published band was read that would move ours.
+  it('U_b h/ν ≈ 3000 and We = ρU_b²h/γ = 100, equal viscosity and density: about 10 % (5–15 %) credited, not wavy; We = 200 (half the tension): wavy, none credited (common practice, no source)', async () => {
+    const halfHeight = 3e-3;
+    const bulkVelocity = 1;
+    const density = 998.2;
     const design = {
-      texture: { grooveWidth: '20 um', pitch: '22.2 um', grooveDepth: '20 um' },
-      lubricant: { viscosity: '1.0016 mPa.s', density: 998.2, temperature: '20 degC' },
+      texture: { grooveWidth: '140 um', pitch: '175 um', grooveDepth: '140 um' },
+      lubricant: { viscosity: '1.0016 mPa.s', density, temperature: '20 degC' },
       workingFluid: { id: 'water', temperature: '20 degC' },
-      flow: { kind: 'channel', height: '3 mm', bulkVelocity: '1 m/s' },
+      flow: { kind: 'channel', height: 2 * halfHeight, bulkVelocity },
       options: { method: 'closed-form' },
     };
-    const calm = (await assess({ ...design, interfacialTension: 998.2 * 20e-6 / 100 })).result;
-    const wavy = (await assess({ ...design, interfacialTension: 998.2 * 20e-6 / 200 })).result;
+    const tensionAt = (weber: number) => (density * bulkVelocity ** 2 * halfHeight) / weber;
+    const calm = (await assess({ ...design, interfacialTension: tensionAt(100) })).result;
+    const wavy = (await assess({ ...design, interfacialTension: tensionAt(200) })).result;
+    expect(calm.couplings.dragReductionClean).toBeGreaterThan(0.05);
+    expect(calm.couplings.dragReductionClean).toBeLessThan(0.15);
     expect(calm.couplings.waveRegime).not.toBe('wavy');
-    expect(calm.couplings.creditedDragReductionAtServiceTime).toBeGreaterThan(0);
     expect(calm.couplings.creditedDragReductionAtServiceTime).toBeCloseTo(calm.couplings.dragReductionClean, 12);
     expect(wavy.couplings.waveRegime).toBe('wavy');
     expect(wavy.couplings.creditedDragReductionAtServiceTime).toBe(0);
