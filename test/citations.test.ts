@@ -7,9 +7,9 @@ import { recalledClaims, recalledClaimsDocument } from '../scripts/recalled-clai
  * (docs/citations-ledger.md has the research). Lower the ceiling when you
  * confirm one; never raise it.
  */
-const CEILING_SRC = 32;
+const CEILING_SRC = 30;
 /** The same in tests: expected values recalled rather than read. */
-const CEILING_TEST = 4;
+const CEILING_TEST = 2;
 
 describe('recalled claims', () => {
   it(`at most ${CEILING_SRC} in src/ (lines tagged "from memory" or using the catalogue's FROM_MEMORY note)`, () => {

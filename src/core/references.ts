@@ -224,7 +224,7 @@ export const REFERENCES = bibliography({
   },
   wiener1912: {
     citation:
-      'Wiener, O. (1912). Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Königl. Sächs. Ges. Wiss. 32, 509–604 (series, volume and pages from memory: searched by title and series without a readable record; the bounds themselves are the series and parallel conductances, derived where they are used).',
+      'Wiener, O. (1912). Die Theorie des Mischkörpers für das Feld der stationären Strömung. Abh. Math.-Phys. Kl. Sächs. Akad. Wiss. Leipzig 32, 509–604 (series, volume and pages as listed in the reference list, ref. 18, of Brundrett, D. L., Glytsis, E. N. & Gaylord, T. K. (1994), Appl. Opt. 33(13), 2695–2706, which was read; the bounds themselves are the series and parallel conductances, derived where they are used).',
   },
   // --- Numerical methods behind committed reference tables ------------------------------------
   babuskaSuri1990: {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../src/core/errors.js';
+import { RECALLED_TAG } from '../../src/materials/records.js';
 import { catalogueListing, getFluid, resolveFluid } from '../../src/materials/index.js';
 
 const celsius = (t: number) => 273.15 + t;
@@ -119,7 +120,7 @@ describe('liquid gallium (conductive lubricant)', () => {
     }
     expect(viscosity.at(celsius(35)) * 1e3).toBeCloseTo(1.643, 3);
     expect(viscosity.validRange).toEqual({ min: 304, max: 800 });
-    expect(viscosity.note ?? '').not.toMatch(/from memory/);
+    expect(viscosity.note ?? '').not.toContain(RECALLED_TAG);
   });
 
   it('refuses a temperature below its melting point, 29.76 °C (CRC; the ITS-90 gallium point 302.9146 K)', () => {

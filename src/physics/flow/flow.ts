@@ -32,7 +32,8 @@ export function laminarChannelSkinFriction(bulkReynolds: number): number {
  * Dean's (1978) correlation for turbulent plane-channel flow,
  * C_f = 0.073 Re_m^(−1/4), with Re_m = U H/ν on the full height and C_f = τ_w/(½ρU²).
  * Fitted to data for about 6×10³ < Re_m < 6×10⁵ (range from memory: the abstract read, J. Fluids Eng.
- * 100(2), 215–223, gives the correlation but not the range; searched the ASME page and code bibliographies).
+ * 100(2), 215–223, gives the correlation but not the range; searched the ASME page, code bibliographies and
+ * public solver reports quoting "Dean (1978)", none of which states the range).
  * Example: Re_m = 10⁴ → C_f = 0.00730.
  */
 export function deanSkinFriction(bulkReynolds: number): number {

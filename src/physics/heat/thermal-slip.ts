@@ -96,7 +96,8 @@ export function grooveThermalResistanceLength(
  *   b_eff = (P/π) ln sec(πφ/2) / [1 + (P/(π b_s)) ln(sec(πφ/2) + tan(πφ/2))]
  * (Belyaev & Vinogradova 2010, belyaevVinogradova2010, longitudinal stripes; form from memory: the paper's
  * abstract and record were read and arXiv:0912.1430 is open, but its formulas were not reachable with the
- * search tools; the limits below are checked in the tests).
+ * search tools; the limits below are checked in the tests. The abstract says their small-slip prediction is the
+ * surface average, which this form reaches only as φ → 1 — see the limits — so the printed form may differ).
  * Limits: b_s → ∞ gives the adiabatic-groove result (Philip (Philip 1972)); b_s → 0
  * gives b_eff ≈ b_s ln sec/ln(sec + tan), which reads low against the
  * area average φ b_s for narrow stripes (known deficiency of the formula).

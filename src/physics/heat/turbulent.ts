@@ -53,7 +53,8 @@ export const KADER_THERMAL_SLOPE = 2.12;
 /**
  * Kader's (1981) (Kader 1981) additive constant of the thermal log law,
  * β(Pr) = (3.85 Pr^(1/3) − 1.3)² + 2.12 ln Pr (form from memory: the paper's first page was read, the formula
- * is further in; two independent wall-law implementations citing Kader use the same form, corroboration only).
+ * is further in; Pirozzoli et al. 2022, J. Fluid Mech. 940, A45, read in full, cites it as Kader's eq. (9)
+ * without printing it; wall-law implementations citing Kader use the same form, corroboration only).
  * Example: Pr = 0.71 → 3.8306 (evaluated).
  */
 export function kaderThermalConstant(prandtl: number): number {

@@ -84,7 +84,8 @@ export function laminarPipeFlowRateRatio(pipeRadius: number, slipLength: number)
  * quasi-streamwise vortices approach the wall, displacing the turbulence origin
  * by ℓ_z⁺ for small ℓ_z⁺ and by at most about 4 wall units (the form of the
  * saturation and its constant 4 are from memory: not in the abstracts of [1] and [2] read on the publisher
- * pages; the full text of [2] and later papers quoting the form were searched for by the formula without result).
+ * pages; the full text of [2] and later papers quoting the form — Fairhall et al. 2019, Tomlinson et al. 2023,
+ * Xie, Fairhall & García-Mayoral 2024, whose openings were read — were searched for by the formula without result).
  * @param streamwiseSlipPlus ℓ_x⁺ = b_x u_τ/ν, ≥ 0
  * @param spanwiseSlipPlus ℓ_z⁺ = b_z u_τ/ν, ≥ 0
  * @returns ΔU⁺, dimensionless (positive = drag reduction).

@@ -36,7 +36,9 @@ export const PHYSICAL_WAVY_LIMIT = 1;
 /**
  * p′_rms/τ_w band attributed to Farabee & Casarella 1991 (farabeeCasarella1991, whose citation says the band
  * is unconfirmed). Safety: the upper value is what triggers the depinning warning; a higher true level would
- * make depinning start at lower flow.
+ * make depinning start at lower flow — and one was read: McGrath & Simpson (1987), NASA CR-4051 (abstract),
+ * measured p′/τ_w near 3.8 in a zero-pressure-gradient boundary layer (momentum-thickness Reynolds number
+ * 3000–18 800, smallest transducer), above this band.
  */
 export const PRESSURE_FLUCTUATION_LOW = 2.5;
 export const PRESSURE_FLUCTUATION_HIGH = 3.4;

@@ -36,9 +36,13 @@ describe('dissolution lifetime', () => {
       flow: evaluateFlow({ density: 998, viscosity: 1.0e-3 }, { kind: 'channel', height: 0.01, bulkVelocity: 1 }).result,
       interfacialTension: 0.02,
     };
-    // Decane: M = 0.14228 kg/mol (C10H22); solubility about 0.05 mg/L and Le Bas volume about 229 cm³/mol from memory
-    // (not searched; an order-of-magnitude test: either value would have to be off by ×10 to change its outcome).
-    const solubility = { value: 5.2e-5, unit: 'kg/m3' as const, molarMass: 0.14228, molarVolumeAtBoilingPoint: 229e-6 };
+    // Decane: M = 0.14228 kg/mol (C10H22). Le Bas volume 10 × 14.8 + 22 × 3.7 = 229.4 cm³/mol [derived] from the
+    // atomic increments C 14.8, H 3.7 cm³/mol of a textbook table read ("Table 24.5, Atomic volume increments for
+    // estimation of molecular volumes at the normal boiling point", Scribd document 373545244; book not named there).
+    // Solubility about 0.05 mg/L is from memory: the IUPAC–NIST evaluation of decane–water (Haulait-Pirson & Hefter,
+    // srdata.nist.gov sysID 38_238, read) recommends no value because the measurements disagree; an order-of-magnitude
+    // test: the solubility would have to be off by ×10 to change its outcome.
+    const solubility = { value: 5.2e-5, unit: 'kg/m3' as const, molarMass: 0.14228, molarVolumeAtBoilingPoint: (10 * 14.8 + 22 * 3.7) * 1e-6 };
     const r = dissolutionLifetime({ solubility, scenario, grooveLength: 0.05 }, new Notes());
     const months = r.lifetime! / (30 * 86400);
     expect(r.correlation).toBe('shaw-hanratty');

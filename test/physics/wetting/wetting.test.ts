@@ -137,6 +137,43 @@ describe('Tadmor equilibrium angle and bad input', () => {
     expect(t).toBeGreaterThan(60);
     expect(t).toBeLessThan(100);
   });
+  it('recovers θ₀ from advancing/receding angles made by the line-energy forward model (cap volumes integrated numerically)', () => {
+    // Independent witness of the derivation in the doc comment: a spherical cap of base radius 1 and contact
+    // angle θ has its volume integrated by Simpson's rule over horizontal slices (no closed form used); at a
+    // fixed volume the base radius then scales as V^(-1/3).
+    const capVolume = (theta: number): number => {
+      const radius = 1 / Math.sin(theta);
+      const bottom = radius * Math.cos(theta);
+      const n = 2000;
+      const h = (radius - bottom) / n;
+      let sum = 0;
+      for (let i = 0; i <= n; i++) {
+        const z = bottom + i * h;
+        const area = Math.PI * Math.max(0, radius * radius - z * z);
+        sum += (i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2) * area;
+      }
+      return (sum * h) / 3;
+    };
+    const baseRadius = (theta: number): number => capVolume(theta) ** (-1 / 3); // drop volume 1
+    const solve = (f: (t: number) => number, lo: number, hi: number): number => {
+      expect(Math.sign(f(lo))).not.toBe(Math.sign(f(hi))); // the bracket holds a root
+      for (let i = 0; i < 200; i++) {
+        const mid = 0.5 * (lo + hi);
+        if (Math.sign(f(mid)) === Math.sign(f(lo))) lo = mid;
+        else hi = mid;
+      }
+      return 0.5 * (lo + hi);
+    };
+    const deg = Math.PI / 180;
+    for (const [theta0, c] of [[80, 0.15], [40, 0.1], [120, 0.05]] as const) {
+      const cos0 = Math.cos(theta0 * deg);
+      // cos θ_A = cos θ₀ − c/r_A, cos θ_R = cos θ₀ + c/r_R, each solved for its angle by bisection.
+      const advancing = solve((t) => Math.cos(t) - cos0 + c / baseRadius(t), theta0 * deg, 150 * deg) / deg;
+      const receding = solve((t) => Math.cos(t) - cos0 - c / baseRadius(t), 0.1 * deg, theta0 * deg) / deg;
+      expect(advancing - receding).toBeGreaterThan(5);
+      expect(tadmorEquilibriumAngle(advancing, receding)).toBeCloseTo(theta0, 6);
+    }
+  });
   it('impossible input throws DomainError naming the field', () => {
     expect(() => evaluateWetting({ texture: { ...texture, pitch: 40e-6 }, lubricant: hexadecane, workingFluid: water, interfacialTension: 0.05, contactAngles: { underWorkingFluid: { advancing: 10, receding: 0 } } })).toThrow(DomainError);
     expect(() => evaluateWetting({ texture, lubricant: hexadecane, workingFluid: water, interfacialTension: 0.05, contactAngles: { underWorkingFluid: { advancing: 200, receding: 0 } } })).toThrow(/between 0 and 180/);
