@@ -240,7 +240,9 @@ describe('over HTTP: a client that disconnects cancels its solve', () => {
     const { buildApp } = await import('../../src/api/app.js');
     const { testConfig } = await import('../../src/api/config.js');
     const http = await import('node:http');
-    const app = await buildApp(testConfig({ workerThreads: 1 }));
+    // The replacement thread loads every model before it takes work; on a loaded machine that can outlast the
+    // default 10 s queue wait, which would turn the follow-up request into a 503 that says nothing about the kill.
+    const app = await buildApp(testConfig({ workerThreads: 1, queueTimeoutMs: 120_000 }));
     try {
       await app.listen({ port: 0, host: '127.0.0.1' });
       const port = (app.server.address() as { port: number }).port;
