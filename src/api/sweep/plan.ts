@@ -34,6 +34,8 @@ export interface ShardSlice {
 
 export interface SweepPlan {
   definition: CalculationDefinition;
+  /** The definition a point runs: its compute is the calculation's sweep variant where it has one. */
+  pointDefinition: CalculationDefinition;
   /** The design every point starts from (parsed, SI). */
   base: DesignInput;
   axes: PlannedAxis[];
@@ -190,6 +192,7 @@ export function planSweep(body: unknown, limits?: SweepLimits): SweepPlan {
   const { shard: _shard, ...withoutShard } = request;
   return {
     definition,
+    pointDefinition: definition.computeInSweep ? { ...definition, compute: definition.computeInSweep } : definition,
     base: request.design,
     axes: planned,
     combine,

@@ -98,7 +98,7 @@ export function evaluatePoint(plan: SweepPlan, index: number): Row {
   if ('problem' in at) failed = at.problem;
   else {
     try {
-      out = computeChecked(plan.definition, at.document) as unknown as Record<string, unknown>;
+      out = computeChecked(plan.pointDefinition, at.document) as unknown as Record<string, unknown>;
     } catch (error) {
       failed = pointProblem(problemFromError(error));
     }
