@@ -175,7 +175,7 @@ export interface paths {
         put?: never;
         /**
          * Any calculation over a grid of input values
-         * @description Runs the named calculation at every point of a grid (or zip) of axes: dot paths into the design document, each with a list of values or a linear or log range (unit strings allowed). Output columns are paths into the single-point response (default: the calculation’s main results) plus the warning codes. Accept: application/json (default), text/csv (header row with SI units, an error column with the problem title of a failed point) or application/x-ndjson (streamed as points finish, with progress lines; closing the connection stops the sweep). Points are in a fixed order (grid: first axis slowest); shard {index, count} selects a contiguous slice so that shards concatenated equal the whole. A point that fails is a row with its problem, never a failed sweep.
+         * @description Runs the named calculation at every point of a grid (or zip) of axes: dot paths into the design document, each with a list of values or a linear or log range (unit strings allowed). Output columns are paths into the single-point response (default: the calculation’s main results) plus the warning codes. Accept: application/json (default), text/csv (header row with SI units, an error column with the problem title of a failed point) or application/x-ndjson (streamed as points finish, with progress lines; closing the connection stops the sweep). Points are in a fixed order (grid: first axis slowest); shard {index, count} selects a contiguous slice so that shards concatenated equal the whole. A point that fails is a row with its problem, never a failed sweep. An assessment point computes no sensitivities unless the design sets options.marginSensitivities.enabled to true, and no plot data (the heat-plot conductivity sweep).
          */
         post: operations["sweep"];
         delete?: never;
@@ -1967,22 +1967,35 @@ export interface components {
                 /** @description Halvings of the coarse step at the boundary (default 3) */
                 refinements?: number;
             };
+            /** @description What every design must achieve: the assessment’s requirements (POST /v1/assess, same defaults), over those of design.requirements, plus stableWetting */
             requirements?: {
-                /** @description Smallest drag reduction credited at the service time (default 0.05) */
+                /** @description Smallest drag reduction credited at the end of the service time, fraction (default 0.05) */
                 minDragReduction?: number;
                 /**
-                 * @description Smallest share of the groove volume filled at the service time (default 0.5; needs contact angles and a groove length)
-                 * @example 1
-                 */
-                minRetainedFraction?: number;
-                /** @description Share of the calm band’s load that must stay unused (default 0) */
-                minWaveMargin?: number;
-                /**
-                 * @description Service time (default 2 h)
+                 * @description Service time the retention and drag requirements apply at (default options.duration, else 2 h)
                  * @example 2 h
                  */
                 serviceTime?: number | string;
-                /** @description Also require a stable infused wetting state (default false) */
+                /**
+                 * @description Smallest share of the groove volume still filled at the service time (default 0.5)
+                 * @example 1
+                 */
+                minRetainedFraction?: number;
+                /** @description Share of the calm band’s load that must stay unused, 0–1 (default 0: calm is enough) */
+                minWaveMargin?: number;
+                /**
+                 * @description Highest surfactant concentration the design must tolerate (default: the water’s stated concentration)
+                 * @example 0.1 mM
+                 */
+                tolerableSurfactantConcentration?: number | string;
+                /**
+                 * @description Share of the clean slip that must survive at the tolerable concentration (default 0.5)
+                 * @example 1
+                 */
+                minSlipRetained?: number;
+                /** @description Smallest heat-transfer change q/q₀ − 1 against the solid-filled wall (default −0.1) */
+                minHeatTransferChange?: number;
+                /** @description Also require a stable infused wetting state (default false: pinning may hold the lubricant) */
                 stableWetting?: boolean;
             };
             /**

@@ -29,6 +29,11 @@ export interface CalculationDefinition<Body extends ZodType = ZodType> {
   example: unknown;
   compute(input: output<Body>): CalculationOutput;
   /**
+   * What a point of a sweep computes, when it differs from `compute`: the same answer without the parts only a
+   * report or a plot reads (a sweep row holds single values), and the costly extras off unless the document asks.
+   */
+  computeInSweep?(input: output<Body>): CalculationOutput;
+  /**
    * Other representations of the answer, chosen by the request (Accept header, query): the content type and body,
    * or undefined for the JSON envelope. `contentTypes` lists them for the OpenAPI document.
    */

@@ -11,7 +11,7 @@ import { catalogue } from '../../materials/lookup.js';
 import { assessDesign } from '../../physics/design/assess.js';
 import { DesignContext } from '../../physics/design/context.js';
 import { problem, ProblemError, validationProblem } from '../problem.js';
-import { DesignSchema } from '../schemas/design.js';
+import { DesignSchema, type DesignInput } from '../schemas/design.js';
 import { AssessResponse } from '../schemas/responses/assess.js';
 import { assessmentPlot, assessmentReport, PLOTS, type PlotName } from './assess-report.js';
 
@@ -25,6 +25,16 @@ function plotWanted(query: Record<string, unknown>): PlotName | undefined {
     throw validationProblem([{ path: 'plot', message: `unknown plot ${JSON.stringify(plot)}: one of ${PLOTS.join(', ')}` }]);
   }
   return plot as PlotName;
+}
+
+/** The assessment of a parsed document; `sensitivities` is the default when the document does not say. */
+function assess(input: DesignInput, defaults: { sensitivities: boolean; heatSweep: boolean }) {
+  const settings = input.options?.marginSensitivities ?? {};
+  return assessDesign(new DesignContext(input, catalogue), input.requirements ?? {}, {
+    sensitivities: settings.enabled ?? defaults.sensitivities,
+    ...(settings.relativeStep === undefined ? {} : { relativeStep: settings.relativeStep }),
+    ...(defaults.heatSweep ? { heatSweepPoints: HEAT_SWEEP_POINTS } : {}),
+  });
 }
 
 export const assessCalculation = defineCalculation({
@@ -46,14 +56,9 @@ export const assessCalculation = defineCalculation({
     requirements: { minDragReduction: 0.02, serviceTime: '2 h', minRetainedFraction: 0.5 },
     options: { method: 'closed-form', surfactantMethod: 'scaling' },
   },
-  compute: (input) => {
-    const settings = input.options?.marginSensitivities ?? {};
-    return assessDesign(new DesignContext(input, catalogue), input.requirements ?? {}, {
-      sensitivities: settings.enabled ?? true,
-      ...(settings.relativeStep === undefined ? {} : { relativeStep: settings.relativeStep }),
-      heatSweepPoints: HEAT_SWEEP_POINTS,
-    });
-  },
+  compute: (input) => assess(input, { sensitivities: true, heatSweep: true }),
+  // In a sweep: sensitivities only when options.marginSensitivities.enabled is true, no heat-plot sweep.
+  computeInSweep: (input) => assess(input, { sensitivities: false, heatSweep: false }),
   present: {
     contentTypes: {
       'text/html': 'With Accept: text/html, the self-contained report (inline CSS and SVG, no external requests)',

@@ -34,6 +34,14 @@ const DEFAULT_OUTPUTS: Record<string, readonly string[]> = {
   slip: ['result.slipLengthLongitudinal', 'result.slipLengthTransverse', 'result.slipLengthAlongFlow', 'result.drag.dragReduction', 'result.method'],
   waves: ['result.regime', 'result.governingCriterion', 'verdict.passes', 'verdict.margin'],
   surfactant: ['result.cleanSlipLength', 'result.slipLength', 'result.slipRetained', 'result.regime', 'result.drag.dragReduction'],
+  assess: [
+    'result.overall.verdict',
+    'result.overall.limitingMechanism',
+    'result.couplings.creditedDragReductionAtServiceTime',
+    'result.couplings.filledFractionAtServiceTime',
+    'result.couplings.waveRegime',
+    ...['wetting', 'retention', 'waves', 'slipAndDrag', 'surfactant', 'heat'].map((m) => `result.mechanisms.${m}.verdict.margin`),
+  ],
   heat: ['result.heatFluxRatio', 'result.nusseltRatio', 'result.thermalSlipLength', 'result.frictionRatio', 'result.method'],
 };
 

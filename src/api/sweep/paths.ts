@@ -8,6 +8,8 @@ import type { ZodType } from 'zod';
 
 interface Def {
   type: string;
+  checks?: unknown[];
+  discriminator?: string;
   innerType?: ZodType;
   shape?: Record<string, ZodType>;
   options?: ZodType[];
@@ -74,6 +76,29 @@ export function isScalarSchema(schema: ZodType): boolean {
   // A quantity: a number or a unit string in, a number out.
   if (def.type === 'pipe' && def.in) return isScalarSchema(def.in);
   return false;
+}
+
+/**
+ * Whether a number at `path` of data of `schema` can be replaced by another number its own leaf schema accepts
+ * without parsing the whole again: every object and union on the way down is plain (no refinement over its fields,
+ * no transform, a union told apart by a discriminator that is not on the path), so the new number cannot change
+ * which option matches nor break a check that reads several fields (a groove wider than its pitch is such a check).
+ */
+export function numberPatchable(schema: ZodType, path: readonly string[]): boolean {
+  let s = schema;
+  for (const key of path) {
+    let unwrapped = s;
+    while (['optional', 'nullable', 'default', 'readonly'].includes(defOf(unwrapped).type) && defOf(unwrapped).innerType) unwrapped = defOf(unwrapped).innerType!;
+    const def = defOf(unwrapped);
+    if (def.checks && def.checks.length > 0) return false;
+    if (def.type === 'union') {
+      if (def.discriminator === undefined || def.discriminator === key) return false;
+    } else if (def.type !== 'object') return false;
+    const child = childSchema(unwrapped, key);
+    if (!child) return false;
+    s = child;
+  }
+  return true;
 }
 
 /** Read the value at a path of plain data (undefined where the path ends early). */

@@ -13,7 +13,7 @@ import { problem, ProblemError, validationProblem, zodFieldErrors, type FieldErr
 import { quantityDefinitionOf } from '../schemas/quantities.js';
 import type { DesignInput } from '../schemas/design.js';
 import { outputColumns, type Column } from './columns.js';
-import { childSchema, schemaAt } from './paths.js';
+import { childSchema, numberPatchable, schemaAt, withValueAt } from './paths.js';
 import { SweepRequestSchema, type SweepAxis, type SweepRequest } from './schema.js';
 
 export interface PlannedAxis {
@@ -34,6 +34,8 @@ export interface ShardSlice {
 
 export interface SweepPlan {
   definition: CalculationDefinition;
+  /** The definition a point runs: its compute is the calculation's sweep variant where it has one. */
+  pointDefinition: CalculationDefinition;
   /** The design every point starts from (parsed, SI). */
   base: DesignInput;
   axes: PlannedAxis[];
@@ -42,10 +44,27 @@ export interface SweepPlan {
   totalPoints: number;
   shard: ShardSlice;
   columns: Column[];
-  /** Top-level parts of the document an axis changes, with their schemas: re-validated at every point. */
-  parts: { name: string; schema: ZodType }[];
+  /** Top-level parts of the document an axis changes: validated again at every point, or patched (see PlannedPart). */
+  parts: PlannedPart[];
   /** SHA-256 of the canonical request without its shard: the same for every shard of one sweep. */
   sweepId: string;
+}
+
+/**
+ * A top-level part of the document that axes change. When every such axis sets numbers along a path the schema
+ * checks no further (paths.ts: numberPatchable), the part is parsed once with the first point's values (`template`)
+ * and each point only sets its numbers into a copy of it: what a parse of the point's part would give, without the
+ * parse. Otherwise each point's part is parsed again, and distinct parts are remembered (`memo`, a bounded number).
+ */
+export interface PlannedPart {
+  name: string;
+  schema: ZodType;
+  /** The axes whose paths lie in this part. */
+  axes: number[];
+  /** Parsed part of point 0 whose axis numbers each point overwrites (fast path), when that is safe. */
+  template?: Record<string, unknown>;
+  /** Parsed parts (or the problem) by the combined index of the part's axes (slow path). */
+  memo: Map<number, { data: unknown } | { errors: FieldError[] }>;
 }
 
 /** Service limits a plan is checked against. */
@@ -110,6 +129,18 @@ export function shardSlice(total: number, index: number, count: number): ShardSl
   return { index, count, start: edge(index), end: edge(index + 1) };
 }
 
+function planPart(name: string, schema: ZodType, base: Record<string, unknown>, axes: readonly PlannedAxis[]): PlannedPart {
+  const on = axes.flatMap((a, i) => (a.path[0] === name ? [i] : []));
+  const part: PlannedPart = { name, schema, axes: on, memo: new Map() };
+  const numbers = on.every((i) => axes[i]!.path.length > 1 && axes[i]!.values.every((v) => typeof v === 'number') && numberPatchable(schema, axes[i]!.path.slice(1)));
+  if (!numbers) return part;
+  let first: unknown = base[name];
+  for (const i of on) first = withValueAt(first, axes[i]!.path.slice(1), axes[i]!.values[0]);
+  const parsed = schema.safeParse(first);
+  if (parsed.success && parsed.data !== null && typeof parsed.data === 'object') part.template = parsed.data as Record<string, unknown>;
+  return part;
+}
+
 /** Parse and check a sweep request (422 naming the field, 413 beyond the point limit) and make its plan. */
 export function planSweep(body: unknown, limits?: SweepLimits): SweepPlan {
   if (body === undefined || body === null || typeof body !== 'object' || Array.isArray(body)) {
@@ -157,16 +188,18 @@ export function planSweep(body: unknown, limits?: SweepLimits): SweepPlan {
     );
   }
   const partNames = [...new Set(planned.map((a) => a.path[0]!))];
+  const parts = partNames.map((name) => planPart(name, childSchema(definition.body, name)!, request.design as Record<string, unknown>, planned));
   const { shard: _shard, ...withoutShard } = request;
   return {
     definition,
+    pointDefinition: definition.computeInSweep ? { ...definition, compute: definition.computeInSweep } : definition,
     base: request.design,
     axes: planned,
     combine,
     totalPoints,
     shard,
     columns,
-    parts: partNames.map((name) => ({ name, schema: childSchema(definition.body, name)! })),
+    parts,
     sweepId: inputsHash(JSON.parse(canonicalJson(withoutShard))),
   };
 }

@@ -8,7 +8,7 @@
  */
 import { computeChecked, problemFromError } from '../calculation.js';
 import { canonicalJson } from '../envelope.js';
-import { validationProblem, zodFieldErrors, type Problem } from '../problem.js';
+import { validationProblem, zodFieldErrors, type FieldError, type Problem } from '../problem.js';
 import { valueAt, withValueAt } from './paths.js';
 import { planSweep, type SweepPlan } from './plan.js';
 
@@ -54,20 +54,37 @@ function pointProblem(p: Problem): PointProblem {
   return { title: p.title, status: p.status, ...(p.detail === undefined ? {} : { detail: p.detail }), ...(p.errors ? { errors: p.errors } : {}) };
 }
 
+/** Parts remembered per part on the slow path: enough for the inner axes of a grid, bounded for a long single axis. */
+const MEMO_PER_PART = 4096;
+
+/** The part `part` of point `picks`, parsed, or the field errors that make it invalid. */
+function pointPart(plan: SweepPlan, part: SweepPlan['parts'][number], picks: readonly number[]): { data: unknown } | { errors: FieldError[] } {
+  if (part.template) {
+    let data: unknown = part.template;
+    for (const a of part.axes) data = withValueAt(data, plan.axes[a]!.path.slice(1), plan.axes[a]!.values[picks[a]!]);
+    return { data };
+  }
+  let key = 0;
+  for (const a of part.axes) key = key * plan.axes[a]!.values.length + picks[a]!;
+  const known = part.memo.get(key);
+  if (known) return known;
+  let raw = (plan.base as Record<string, unknown>)[part.name];
+  for (const a of part.axes) raw = withValueAt(raw, plan.axes[a]!.path.slice(1), plan.axes[a]!.values[picks[a]!]);
+  const parsed = part.schema.safeParse(raw);
+  const out = parsed.success
+    ? { data: parsed.data }
+    : { errors: zodFieldErrors(parsed.error).map((e) => ({ path: e.path ? `${part.name}.${e.path}` : part.name, message: e.message })) };
+  if (part.memo.size < MEMO_PER_PART) part.memo.set(key, out);
+  return out;
+}
+
 /** The design document of point `index` (validated), or the problem that makes it invalid. */
-export function pointDocument(plan: SweepPlan, index: number): { document: Record<string, unknown> } | { problem: PointProblem } {
-  const picks = axisIndices(plan, index);
-  let doc = plan.base as Record<string, unknown>;
-  picks.forEach((k, a) => {
-    doc = withValueAt(doc, plan.axes[a]!.path, plan.axes[a]!.values[k]);
-  });
+export function pointDocument(plan: SweepPlan, index: number, picks: readonly number[] = axisIndices(plan, index)): { document: Record<string, unknown> } | { problem: PointProblem } {
+  const doc: Record<string, unknown> = { ...(plan.base as Record<string, unknown>) };
   for (const part of plan.parts) {
-    const parsed = part.schema.safeParse(doc[part.name]);
-    if (!parsed.success) {
-      const errors = zodFieldErrors(parsed.error).map((e) => ({ path: e.path ? `${part.name}.${e.path}` : part.name, message: e.message }));
-      return { problem: pointProblem(validationProblem(errors).problem) };
-    }
-    doc = { ...doc, [part.name]: parsed.data };
+    const at = pointPart(plan, part, picks);
+    if ('errors' in at) return { problem: pointProblem(validationProblem(at.errors).problem) };
+    doc[part.name] = at.data;
   }
   return { document: doc };
 }
@@ -75,13 +92,13 @@ export function pointDocument(plan: SweepPlan, index: number): { document: Recor
 /** Compute one point's row. */
 export function evaluatePoint(plan: SweepPlan, index: number): Row {
   const picks = axisIndices(plan, index);
-  const at = pointDocument(plan, index);
+  const at = pointDocument(plan, index, picks);
   let out: Record<string, unknown> | undefined;
   let failed: PointProblem | undefined;
   if ('problem' in at) failed = at.problem;
   else {
     try {
-      out = computeChecked(plan.definition, at.document) as unknown as Record<string, unknown>;
+      out = computeChecked(plan.pointDefinition, at.document) as unknown as Record<string, unknown>;
     } catch (error) {
       failed = pointProblem(problemFromError(error));
     }

@@ -7,7 +7,8 @@
 import { catalogue } from '../../materials/lookup.js';
 import type { DesignDocument } from '../../physics/design/document.js';
 import { designWindow, evaluateCandidates, type Candidate, type DesignWindow, type WindowSpec } from '../../physics/design/window.js';
-import { REQUIREMENT_WORDS, WINDOW_REQUIREMENT_DEFAULTS, type CandidateOutcome } from '../../physics/design/window-candidate.js';
+import { effectiveRequirements } from '../../physics/design/assess-requirements.js';
+import { assessmentRequirements, REQUIREMENT_WORDS, type CandidateOutcome } from '../../physics/design/window-candidate.js';
 import { FEASIBLE } from '../../physics/design/window-search.js';
 import { canonicalJson, inputsHash } from '../envelope.js';
 import type { SolverPool } from '../pool.js';
@@ -63,7 +64,8 @@ export function planWindow(body: unknown): WindowPlan {
     ...(s.interfaceFraction ? { interfaceFraction: s.interfaceFraction } : {}),
     grooveDepth: s.grooveDepth,
     ...(s.lubricants ? { lubricants: s.lubricants } : {}),
-    requirements: r.requirements ?? {},
+    // The window's requirements over the document's own (the part POST /v1/assess reads).
+    requirements: { ...document.requirements, ...r.requirements },
     objective: r.objective ?? 'dragReduction',
     search: { coarsePoints, refinements },
   };
@@ -102,8 +104,17 @@ export async function runWindow(plan: WindowPlan, request: unknown, pool: Solver
 export function windowAnswer(plan: WindowPlan, window: DesignWindow) {
   const words = (label: string) => (label === FEASIBLE ? FEASIBLE : (REQUIREMENT_WORDS as Record<string, string>)[label] ?? label);
   const design = <T extends { label: string }>(d: T) => ({ ...d, label: words(d.label) });
+  const doc = plan.spec.document;
+  const water = doc.waterQuality;
+  const stated = water === undefined ? undefined : Array.isArray(water.bulkConcentration) ? water.bulkConcentration[0] : water.bulkConcentration;
+  const effective = effectiveRequirements(assessmentRequirements(plan.spec.requirements), {
+    ...(doc.options?.duration === undefined ? {} : { duration: doc.options.duration }),
+    ...(stated === undefined ? {} : { statedConcentration: stated }),
+  });
+  const inEffect: Record<string, number | boolean> = { stableWetting: plan.spec.requirements.stableWetting ?? false };
+  for (const [k, v] of Object.entries(effective)) if (v.value !== null) inEffect[k] = v.value;
   return {
-    requirements: { ...WINDOW_REQUIREMENT_DEFAULTS, ...plan.spec.requirements },
+    requirements: inEffect,
     objective: window.objective,
     candidates: window.candidates,
     evaluated: window.evaluated,
@@ -115,8 +126,8 @@ export function windowAnswer(plan: WindowPlan, window: DesignWindow) {
     feasible: window.feasible.map(design),
     plane: { ...window.plane, labels: window.plane.labels.map((row) => row.map(words)) },
     assumptions: [
-      `Slip method ${plan.spec.document.options?.method ?? 'closed-form'} (options.method; the window defaults to the closed form for speed).`,
-      'Requirements as the assessment states them: drag reduction credited at the service time (zero on a wavy interface, scaled by the filled share), retained share at the service time from the drainage timeline, waves margin against the required reserve; surfactant and heat are not searched.',
+      `Slip method ${plan.spec.document.options?.method ?? 'auto'} (options.method, as in the assessment).`,
+      'Each candidate is assessed as POST /v1/assess assesses it (without sensitivities): feasible exactly when the overall verdict is not "fails" (and the wetting verdict passes when stableWetting is asked for); otherwise labelled by the limiting mechanism, the smallest margin. Every mechanism the document has the parts for is assessed: wetting, retention, waves, slip and drag, surfactant, heat.',
       'Adaptive search: the coarse lattice, then cells whose corners differ refined by halving down to the finest lattice; a candidate inside a cell whose corners agree takes their label. The Pareto front and the best design are taken over the evaluated designs.',
     ],
   };

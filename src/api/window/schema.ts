@@ -1,7 +1,8 @@
 /** The design-window request: the design (service conditions), the box to search, the requirements, the objective. */
 import { z } from '../schemas/zod.js';
 import { DesignSchema } from '../schemas/design.js';
-import { Duration, Fraction, TextureLength } from '../schemas/quantities.js';
+import { RequirementsSchema } from '../schemas/assess.js';
+import { Fraction, TextureLength } from '../schemas/quantities.js';
 
 const lengthBounds = (what: string) =>
   z
@@ -34,15 +35,17 @@ export const WindowRequestSchema = z
       .superRefine((s, ctx) => {
         if (s.pitch !== undefined && s.interfaceFraction !== undefined) ctx.addIssue({ code: 'custom', path: ['interfaceFraction'], message: 'search the pitch or the interface fraction, not both' });
       }),
+    // The assessment's fields, inlined (an allOf of two closed objects would accept nothing).
     requirements: z
       .strictObject({
-        minDragReduction: z.number().gt(0).max(1).optional().openapi({ description: 'Smallest drag reduction credited at the service time (default 0.05)' }),
-        minRetainedFraction: Fraction.optional().openapi({ description: 'Smallest share of the groove volume filled at the service time (default 0.5; needs contact angles and a groove length)' }),
-        minWaveMargin: z.number().min(0).lt(1).optional().openapi({ description: 'Share of the calm band’s load that must stay unused (default 0)' }),
-        serviceTime: Duration.optional().openapi({ description: 'Service time (default 2 h)' }),
-        stableWetting: z.boolean().optional().openapi({ description: 'Also require a stable infused wetting state (default false)' }),
+        ...RequirementsSchema.shape,
+        stableWetting: z.boolean().optional().openapi({ description: 'Also require a stable infused wetting state (default false: pinning may hold the lubricant)' }),
       })
-      .optional(),
+      .optional()
+      .openapi({
+        description:
+          'What every design must achieve: the assessment’s requirements (POST /v1/assess, same defaults), over those of design.requirements, plus stableWetting',
+      }),
     objective: z.enum(['dragReduction', 'retainedFraction', 'waveMargin']).optional().openapi({ description: 'What the best design maximises (default dragReduction)' }),
   })
   .openapi('DesignWindowRequest');

@@ -1,45 +1,32 @@
 /**
  * One candidate of the design window: the design document with the searched
- * geometry (and lubricant) set, answered by the questions, each requirement's
- * margin computed as the assessment states it (margin dimensionless, ≥ 0
- * exactly when the requirement holds), the candidate labelled feasible or by
- * its limiting requirement (the smallest margin).
- *
- * Requirements and their margins (the assessment's semantics; the window
- * evaluates the four mechanisms that depend on the groove geometry through
- * closed forms, not surfactant or heat):
- * - wetting: the wetting verdict's margin, only when asked for (stableWetting): a lubricant the working liquid
- *   would displace at equilibrium can still be held by contact-line pinning, which retention evaluates;
- * - waves: (m − reserve)/(1 − reserve), m the waves verdict's margin and reserve the required minWaveMargin;
- * - retention: f(t_s)/minRetainedFraction − 1, f the retained share of the drainage timeline at the service time
- *   (when advancing/receding angles and a groove length are given);
- * - drag: DR·c·f(t_s)/minDragReduction − 1, DR the slip model's drag reduction, c = 0 on a wavy interface else 1,
- *   f(t_s) the filled share (a drained groove counted as no-slip wall: common practice, no source).
+ * geometry (and lubricant) set, assessed exactly as POST /v1/assess assesses
+ * it (./assess.ts, without the sensitivities), so the window and the
+ * assessment share one definition of every requirement, its margin, its
+ * default and the overall verdict:
+ * - feasible ⟺ the assessment's overall verdict is not "fails" (every assessed mechanism meets its requirement;
+ *   wetting counts only where retention does not hold the lubricant anyway), and, when `stableWetting` is asked
+ *   for, the wetting verdict passes too (a requirement the window adds on top of the assessment's);
+ * - otherwise the label is the assessment's limiting mechanism (the smallest margin, a failing one), or wetting
+ *   when only the added stable-wetting requirement fails.
+ * Every mechanism of an infeasible candidate is still evaluated (no stop at the first failing one): the label is the
+ * smallest margin, and the adaptive search refines wherever labels change, so a label from a partial evaluation
+ * would draw the regions of the limiting requirements wrongly.
  */
 import type { Catalogue } from '../../core/catalogue.js';
 import { DomainError, MissingInputError } from '../../core/errors.js';
+import { assessDesign, type AssessmentRequirements, type MechanismName } from './assess.js';
 import { DesignContext } from './context.js';
 import type { DesignDocument } from './document.js';
-import { interfaceWaves, lubricantRetention, wettingState } from './questions.js';
 import { FEASIBLE } from './window-search.js';
 
-export interface WindowRequirements {
-  /** Smallest drag reduction credited at the service time, fraction (default 0.05). */
-  minDragReduction?: number;
-  /** Smallest share of the groove volume filled at the service time (default 0.5). */
-  minRetainedFraction?: number;
-  /** Share of the calm band's load that must stay unused, 0–1 (default 0). */
-  minWaveMargin?: number;
-  /** Service time, s (default 7200). */
-  serviceTime?: number;
+export interface WindowRequirements extends AssessmentRequirements {
   /** Also require a thermodynamically stable infused state (default false: pinning may hold the lubricant). */
   stableWetting?: boolean;
 }
 
-/** Defaults: the assessment's (our screening choices; see its requirements). */
-export const WINDOW_REQUIREMENT_DEFAULTS = { minDragReduction: 0.05, minRetainedFraction: 0.5, minWaveMargin: 0, serviceTime: 7200, stableWetting: false } as const;
-
-export type RequirementName = 'wetting' | 'waves' | 'retention' | 'dragReduction';
+/** A requirement of the window: a mechanism of the assessment, under the window's name for slip and drag. */
+export type RequirementName = Exclude<MechanismName, 'slipAndDrag'> | 'dragReduction';
 
 /** Names of the requirements in the words of the plot's legend. */
 export const REQUIREMENT_WORDS: Record<RequirementName | 'invalid', string> = {
@@ -47,14 +34,19 @@ export const REQUIREMENT_WORDS: Record<RequirementName | 'invalid', string> = {
   waves: 'waves',
   retention: 'retention',
   dragReduction: 'drag reduction',
+  surfactant: 'surfactant',
+  heat: 'heat transfer',
   invalid: 'outside the models',
 };
+
+const requirementName = (m: MechanismName): RequirementName => (m === 'slipAndDrag' ? 'dragReduction' : m);
 
 export interface CandidateOutcome {
   /** "feasible", or the limiting requirement (smallest margin), or "invalid" when a model refuses the design. */
   label: string;
+  /** The assessment's margin of every assessed mechanism. */
   margins: Partial<Record<RequirementName, number>>;
-  /** Drag reduction credited at the service time, retained share at the service time, waves margin m. */
+  /** Drag reduction credited at the service time, retained share at the service time, waves margin m = 1 − Π_max/½. */
   dragReduction: number | null;
   retainedFraction: number | null;
   waveMargin: number | null;
@@ -62,56 +54,38 @@ export interface CandidateOutcome {
   problem?: string;
 }
 
-/** Linear interpolation of a sampled timeline at t (clamped to its ends). */
-function sampleAt(times: readonly number[], values: readonly number[], t: number): number {
-  if (t <= times[0]!) return values[0]!;
-  for (let i = 1; i < times.length; i++) {
-    if (t <= times[i]!) return values[i - 1]! + ((values[i]! - values[i - 1]!) * (t - times[i - 1]!)) / (times[i]! - times[i - 1]!);
-  }
-  return values[values.length - 1]!;
+/** The assessment's requirements of a window request (the window's own stableWetting left out). */
+export function assessmentRequirements(requirements: WindowRequirements): AssessmentRequirements {
+  const { stableWetting: _stableWetting, ...rest } = requirements;
+  return rest;
 }
 
-/** Evaluate one candidate document against the requirements. */
+/** Evaluate one candidate document against the requirements, as the assessment does. */
 export function evaluateCandidate(document: DesignDocument, requirements: WindowRequirements, catalogue: Catalogue): CandidateOutcome {
-  const req = { ...WINDOW_REQUIREMENT_DEFAULTS, ...requirements };
-  const doc: DesignDocument = { ...document, options: { ...document.options, duration: Math.max(req.serviceTime, document.options?.duration ?? 0) } };
-  const ctx = new DesignContext(doc, catalogue);
-  const margins: Partial<Record<RequirementName, number>> = {};
   try {
-    if (req.stableWetting) margins.wetting = wettingState(ctx).verdict!.margin;
-    const waves = interfaceWaves(ctx);
-    const waveMargin = waves.verdict!.margin;
-    margins.waves = (waveMargin - req.minWaveMargin) / (1 - req.minWaveMargin);
-    let filled = 1;
-    let retainedFraction: number | null = null;
-    const texture = doc.texture;
-    if (doc.contactAngles?.underWorkingFluid && (texture?.grooveLength !== undefined || texture?.segmentLength !== undefined)) {
-      const timeline = lubricantRetention(ctx).result.timeline;
-      filled = sampleAt(
-        timeline.map((p) => p.time),
-        timeline.map((p) => p.retainedFraction),
-        req.serviceTime,
-      );
-      retainedFraction = filled;
-      margins.retention = filled / req.minRetainedFraction - 1;
+    const { result } = assessDesign(new DesignContext(document, catalogue), assessmentRequirements(requirements), { sensitivities: false });
+    const margins: Partial<Record<RequirementName, number>> = {};
+    for (const [name, m] of Object.entries(result.mechanisms) as [MechanismName, (typeof result.mechanisms)[MechanismName]][]) {
+      if (m.status === 'assessed') margins[requirementName(name)] = m.verdict.margin;
     }
-    // The slip solution of the context (the slip question adds only checks the window makes itself).
-    const drag = ctx.slip('slip', doc.options?.method ?? 'closed-form').result.drag;
-    const clean = 'dragReduction' in drag && typeof drag.dragReduction === 'number' ? drag.dragReduction : null;
-    const dragReduction = clean === null ? null : clean * (waves.result.regime === 'wavy' ? 0 : 1) * filled;
-    if (dragReduction !== null) margins.dragReduction = dragReduction / req.minDragReduction - 1;
+    const wetting = result.mechanisms.wetting;
+    if (requirements.stableWetting && wetting.status !== 'assessed') throw new MissingInputError('contactAngles', 'design-window', `contact angles under the working fluid (requirements.stableWetting): ${wetting.reason}`);
     let label: string = FEASIBLE;
-    let lowest = 0;
-    for (const [name, m] of Object.entries(margins) as [RequirementName, number][]) {
-      if (m < lowest) {
-        lowest = m;
-        label = name;
-      }
-    }
-    return { label, margins, dragReduction, retainedFraction, waveMargin };
+    if (result.overall.verdict === 'fails') label = requirementName(result.overall.limitingMechanism!);
+    else if (requirements.stableWetting && wetting.status === 'assessed' && !wetting.verdict.passes) label = 'wetting';
+    const waves = result.mechanisms.waves;
+    const minWaveMargin = result.requirements.minWaveMargin.value as number;
+    return {
+      label,
+      margins,
+      dragReduction: result.couplings.creditedDragReductionAtServiceTime,
+      retainedFraction: result.mechanisms.retention.status === 'assessed' ? result.couplings.filledFractionAtServiceTime : null,
+      // Back from the assessment's margin (m − reserve)/(1 − reserve) to m.
+      waveMargin: waves.status === 'assessed' ? minWaveMargin + waves.verdict.margin * (1 - minWaveMargin) : null,
+    };
   } catch (error) {
-    // A part the questions need is missing from the document: the request's fault, not this candidate's.
+    // A part the assessment needs is missing from the document: the request's fault, not this candidate's.
     if (!(error instanceof DomainError) || error instanceof MissingInputError) throw error;
-    return { label: 'invalid', margins, dragReduction: null, retainedFraction: null, waveMargin: null, problem: error.message };
+    return { label: 'invalid', margins: {}, dragReduction: null, retainedFraction: null, waveMargin: null, problem: error.message };
   }
 }

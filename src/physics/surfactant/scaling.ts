@@ -41,6 +41,7 @@
  * [2] Philip, J. R. (1972) Flows satisfying mixed no-slip and no-shear conditions (philip1972).
  */
 import { solveDense } from '../../numerics/linalg.js';
+import { BoundedCache } from '../../numerics/memo.js';
 import { GAS_CONSTANT } from '../../core/constants.js';
 import type { ResolvedSurfactant } from '../../core/surfactant.js';
 
@@ -60,10 +61,19 @@ export interface CleanTransverseCoefficients {
  * Clean (surfactant-free) coefficients of a channel of half-height h whose
  * lower wall is a transverse grating of period L h and gas fraction φ [1].
  * Long period (L > 10³, eq. C8): E = φ/(4 − 3φ), F(0) = 1/(4 − 3φ).
- * Short period (L < 10⁻³, eq. C20): with s = L/(4π), E = s ln sec(πφ/2)/(1 + s ln sec(πφ/2)),
+ * Short period (L ≤ {@link SHORT_PERIOD_LIMIT}, eq. C20): with s = L/(4π), E = s ln sec(πφ/2)/(1 + s ln sec(πφ/2)),
  * F(0) = s arccosh(1/cos(πφ/2))/(1 + s ln sec(πφ/2)).
+ * Why C20 holds to rounding up to L = 0.4 [derived]: the series' mode m ≥ 1 has wavenumber
+ * k = 2πm/L, and its factors α_m, β_m differ from their half-space values (−1, −2k) only by
+ * terms in k e^{−2k} ≤ (8π/L) e^{−4π/L}, below 2×10⁻¹² at L = 0.4. There the periodic part of
+ * the flow is Philip's half-space grating exactly, the mean flow a Couette flow over its slip
+ * length b = (P/2π) ln sec(πφ/2), and λ = b/h = 2E/(1 − E) gives C20; the truncated series
+ * converges to it (test/physics/surfactant/scaling.test.ts), and its Richardson value at
+ * 400 terms is 0.04–0.3 % away, which is the series' truncation error, not C20's.
  * Otherwise the truncated Fourier series of §4 (dense solve, `terms` unknowns; without `terms`,
- * Richardson-extrapolated from 400 and 200 terms, or 800 and 400 for φ ≤ 0.1 or φ ≥ 0.95).
+ * Richardson-extrapolated from 400 and 200 terms, or 800 and 400 for φ ≤ 0.1 or φ ≥ 0.95),
+ * kept in a small cache keyed by (L, φ): a sweep or a sensitivity step that changes neither
+ * (depth, tension, viscosity) does not repeat the dense solves.
  * @param periodOverHalfHeight L = P/h (> 0); @param gasFraction φ in [0, 1]
  */
 export function cleanTransverseCoefficients(
@@ -78,7 +88,7 @@ export function cleanTransverseCoefficients(
   if (L > 1e3 && terms === undefined) {
     return { meanCoefficient: phi / (4 - 3 * phi), centreCoefficient: 1 / (4 - 3 * phi), method: 'long-period', terms: 0 };
   }
-  if (L < 1e-3 && terms === undefined) {
+  if (L <= SHORT_PERIOD_LIMIT && terms === undefined) {
     const s = L / (4 * Math.PI);
     const lnSec = -Math.log(Math.cos((Math.PI * phi) / 2));
     const denom = 1 + s * lnSec;
@@ -90,18 +100,25 @@ export function cleanTransverseCoefficients(
     };
   }
   if (terms !== undefined) return { ...cleanTransverseSeries(L, phi, terms), method: 'series', terms };
-  // The truncated series converges like 1/N (square-root edge singularity of the interface velocity):
-  // Richardson extrapolation from N and N/2 terms (ours) removes the leading error.
-  const n = phi <= 0.1 || phi >= 0.95 ? 800 : 400;
-  const full = cleanTransverseSeries(L, phi, n);
-  const halfN = cleanTransverseSeries(L, phi, n / 2);
-  return {
-    meanCoefficient: 2 * full.meanCoefficient - halfN.meanCoefficient,
-    centreCoefficient: 2 * full.centreCoefficient - halfN.centreCoefficient,
-    method: 'series',
-    terms: n,
-  };
+  return SERIES_CACHE.getOrCompute(`${L}:${phi}`, () => {
+    // The truncated series converges like 1/N (square-root edge singularity of the interface velocity):
+    // Richardson extrapolation from N and N/2 terms (ours) removes the leading error.
+    const n = phi <= 0.1 || phi >= 0.95 ? 800 : 400;
+    const full = cleanTransverseSeries(L, phi, n);
+    const halfN = cleanTransverseSeries(L, phi, n / 2);
+    return {
+      meanCoefficient: 2 * full.meanCoefficient - halfN.meanCoefficient,
+      centreCoefficient: 2 * full.centreCoefficient - halfN.centreCoefficient,
+      method: 'series' as const,
+      terms: n,
+    };
+  });
 }
+
+/** Largest L = P/h answered by the short-period closed form C20 (exact to rounding there: see above). */
+export const SHORT_PERIOD_LIMIT = 0.4;
+/** Series results by (L, φ): each costs two dense solves of 200–800 unknowns. */
+const SERIES_CACHE = new BoundedCache<CleanTransverseCoefficients>(64);
 
 /** Fourier-mode factors of the channel deviation stream function [1, §4]: α_m and β_m at k = 2πm/L. */
 function modeFactors(k: number): { alpha: number; beta: number } {

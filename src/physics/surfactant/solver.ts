@@ -45,6 +45,7 @@
  *
  * Non-convergence throws ConvergenceError with the iteration count.
  */
+import { BoundedCache } from '../../numerics/memo.js';
 import { solveDense, solveDenseInPlace } from '../../numerics/linalg.js';
 import { invertSymmetricToeplitz } from '../../numerics/toeplitz.js';
 import { relativeResidual, solveSteadyState, type SteadyStateProblem, type SteadyStateResult } from '../../numerics/steady-state.js';
@@ -160,8 +161,7 @@ interface GapOperator {
   faceGreen: Float64Array;
 }
 
-const OPERATORS = new Map<string, GapOperator>();
-const OPERATOR_CACHE_SIZE = 12;
+const OPERATORS = new BoundedCache<GapOperator>(12);
 
 /** The clamped central difference (S_r − S_l)/(2h) of cell i, as (left, right, weight). */
 function gradientStencil(i: number, Ng: number, h: number): [number, number, number] {
@@ -169,13 +169,10 @@ function gradientStencil(i: number, Ng: number, h: number): [number, number, num
 }
 
 function gapOperator(N: number, Ng: number, drag: number): GapOperator {
-  const key = `${N}:${Ng}:${drag}`;
-  const cached = OPERATORS.get(key);
-  if (cached) {
-    OPERATORS.delete(key);
-    OPERATORS.set(key, cached);
-    return cached;
-  }
+  return OPERATORS.getOrCompute(`${N}:${Ng}:${drag}`, () => buildGapOperator(N, Ng, drag));
+}
+
+function buildGapOperator(N: number, Ng: number, drag: number): GapOperator {
   const h = 1 / N;
   const stencil = absoluteDerivativeStencil(N);
   // M = 2|∂| + drag on the gap is symmetric Toeplitz and positive definite: its inverse in O(Ng²).
@@ -203,10 +200,7 @@ function gapOperator(N: number, Ng: number, drag: number): GapOperator {
   }
   const faceGreen = new Float64Array((Ng - 1) * Ng);
   for (let a = 0; a < Ng - 1; a++) for (let j = 0; j < Ng; j++) faceGreen[a * Ng + j] = 0.5 * (green[a * Ng + j] + green[(a + 1) * Ng + j]);
-  const op = { N, Ng, h, clean, cleanSum, green, faceGreen };
-  OPERATORS.set(key, op);
-  if (OPERATORS.size > OPERATOR_CACHE_SIZE) OPERATORS.delete(OPERATORS.keys().next().value as string);
-  return op;
+  return { N, Ng, h, clean, cleanSum, green, faceGreen };
 }
 
 /** Linearised problem about the uniform equilibrium (central fluxes, q = Γ/Γ_eq): returns q. */

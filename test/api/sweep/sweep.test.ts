@@ -86,6 +86,28 @@ describe('CSV', () => {
     }
   });
 
+  it('assess: default columns (verdict, limiting mechanism, margins) equal POST /v1/assess; sensitivities only when the design asks', async () => {
+    const body = { calculation: 'assess', design, axes: [{ path: 'texture.grooveWidth', values: widths }] };
+    const json = (await sweep(body)).json();
+    SweepResponseSchema.parse(json);
+    expect(json.columns.map((c: { name: string }) => c.name)).toContain('result.mechanisms.slipAndDrag.verdict.margin');
+    for (const i of [0, 2]) {
+      const single = (await app.inject({ method: 'POST', url: '/v1/assess', payload: { ...design, texture: { ...design.texture, grooveWidth: widths[i] } } })).json();
+      const values = json.points[i].values;
+      expect(values['result.overall.verdict']).toBe(single.result.overall.verdict);
+      expect(values['result.overall.limitingMechanism']).toBe(single.result.overall.limitingMechanism);
+      expect(values['result.mechanisms.slipAndDrag.verdict.margin']).toBe(single.result.mechanisms.slipAndDrag.verdict.margin);
+      expect(values['result.mechanisms.waves.verdict.margin']).toBe(single.result.mechanisms.waves.verdict.margin);
+      // The single endpoint computes sensitivities by default; a sweep point does not.
+      expect(single.result.sensitivities).not.toBeNull();
+    }
+    const columns = ['result.sensitivities.relativeStep'];
+    const off = (await sweep({ ...body, columns })).json();
+    expect(off.points.map((p: { values: Record<string, unknown> }) => p.values['result.sensitivities.relativeStep'])).toEqual([null, null, null]);
+    const asked = { ...body, columns, design: { ...design, options: { ...design.options, marginSensitivities: { enabled: true } } }, axes: [{ path: 'texture.grooveWidth', values: ['40 um'] }] };
+    expect((await sweep(asked)).json().points[0].values['result.sensitivities.relativeStep']).toBe(0.02);
+  }, 120_000);
+
   it('a failing point is a row with its problem title in the error column; the sweep goes on', async () => {
     const body = { calculation: 'flow', design, axes: [{ path: 'texture.grooveWidth', values: ['20 um', '150 um', '60 um'] }] };
     const records = parse((await sweep(body, 'text/csv')).body, { columns: true }) as Record<string, string>[];

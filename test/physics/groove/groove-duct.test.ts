@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { DomainError } from '../../../src/core/errors.js';
 import {
+  grooveDuctDefiningSeries,
   grooveLidVelocityCentre,
   grooveLidVelocityMean,
   pressureDrivenGrooveFlux,
@@ -80,6 +81,47 @@ describe('pressure-driven groove with a stress-free lid', () => {
     const d = 1e-4;
     expect(zeroNetFluxPressureGradient(1, d, 2) * d).toBeCloseTo(3, 3);
     expect(zeroNetFluxPressureGradient(1, 1e5, 2) * 1e5).toBeCloseTo(2, 4);
+  });
+});
+
+describe('fast (dual, geometrically converging) forms against the defining series', () => {
+  // Witness: the defining series of the module comment summed term by term (grooveDuctDefiningSeries).
+  const ratios = Array.from({ length: 51 }, (_, i) => 10 ** (-4 + (10 * i) / 50));
+  const worst = (fast: (w: number, d: number) => number, exact: (w: number, d: number) => number, from = 0): number =>
+    Math.max(...ratios.filter((r) => r >= from).map((r) => Math.abs(fast(1, r) / exact(1, r) - 1)));
+  it('mean lid velocity, shear-driven and pressure-driven flux agree to 1e-14 over d/w = 1e-4 … 1e6', () => {
+    const errors = {
+      lidVelocityMean: worst(grooveLidVelocityMean, grooveDuctDefiningSeries.lidVelocityMean),
+      shearDrivenFlux: worst(shearDrivenGrooveFlux, grooveDuctDefiningSeries.shearDrivenFlux),
+      pressureDrivenFlux: worst(pressureDrivenGrooveFlux, grooveDuctDefiningSeries.pressureDrivenFlux),
+    };
+    for (const [name, error] of Object.entries(errors)) expect(error, name).toBeLessThan(1e-14);
+  });
+  it('centre lid velocity agrees to 1e-12 over d/w = 1e-3 … 1e6 (the defining form loses digits as G − Σ for shallower grooves)', () => {
+    expect(worst(grooveLidVelocityCentre, grooveDuctDefiningSeries.lidVelocityCentre, 1e-3)).toBeLessThan(1e-12);
+  });
+  it('very shallow groove d/w = 1e-5: dual and defining forms agree to 1e-13', () => {
+    expect(Math.abs(grooveLidVelocityMean(1, 1e-5) / grooveDuctDefiningSeries.lidVelocityMean(1, 1e-5) - 1)).toBeLessThan(1e-13);
+    expect(Math.abs(shearDrivenGrooveFlux(1, 1e-5) / grooveDuctDefiningSeries.shearDrivenFlux(1, 1e-5) - 1)).toBeLessThan(1e-13);
+  });
+  it('each function is continuous where it switches form (d/w = ½, 1/√8, 1/√2): relative jump below 1e-14', () => {
+    const jump = (f: (w: number, d: number) => number, r: number) => Math.abs(f(1, r * (1 + 1e-15)) / f(1, r * (1 - 1e-15)) - 1);
+    expect(jump(grooveLidVelocityMean, 0.5)).toBeLessThan(1e-14);
+    expect(jump(grooveLidVelocityCentre, Math.SQRT1_2 / 2)).toBeLessThan(1e-14);
+    expect(jump(shearDrivenGrooveFlux, Math.SQRT1_2)).toBeLessThan(1e-14);
+  });
+  it('the Dirichlet beta constants used by the fast forms: β(2) = Catalan = 0.915965594177219, β(4) = 0.98894455174110533 (OEIS A006752, A175572; alternating sums here)', () => {
+    // Σ_{k<K} (−1)^k/(2k+1)^p plus half the next term (averaging the alternating partial sums) is within ~1/K^(p+1).
+    const beta = (p: number, K: number): number => {
+      let sum = 0;
+      for (let k = 0; k < K; k++) sum += (k % 2 === 0 ? 1 : -1) / (2 * k + 1) ** p;
+      return sum + ((K % 2 === 0 ? 1 : -1) * 0.5) / (2 * K + 1) ** p;
+    };
+    expect(beta(2, 1e6)).toBeCloseTo(0.915965594177219, 12);
+    expect(beta(4, 1e4)).toBeCloseTo(0.9889445517411053, 14);
+    // Their use: deep limits of the centre lid velocity and the dual shear flux's shallow correction, w d²/2 (1 − 128 β(4) d/(π⁴ w)).
+    const r = 1e-3;
+    expect(Math.abs(shearDrivenGrooveFlux(1, r) / (r * r * 0.5) - (1 - (128 * 0.9889445517411053 * r) / Math.PI ** 4))).toBeLessThan(1e-15);
   });
 });
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import {
   LANDEL_FIT,
+  SHORT_PERIOD_LIMIT,
   cleanTransverseCoefficients,
   marangoniScaling,
   philipTransverse,
@@ -43,6 +44,31 @@ describe('clean coefficients of Landel et al. (2020)', () => {
       expect(Math.abs((2 * b.meanCoefficient - a.meanCoefficient) / E20 - 1)).toBeLessThan(5e-3);
       expect(Math.abs((2 * b.centreCoefficient - a.centreCoefficient) / F20 - 1)).toBeLessThan(5e-3);
     }
+  });
+  it('up to L = 0.4 the series converges to the short-period closed form C20 (Landel et al. 2020, eq. C20): its distance halves with each doubling of the terms', () => {
+    for (const L of [0.06, SHORT_PERIOD_LIMIT]) {
+      for (const phi of [0.2, 0.7]) {
+        const s = L / (4 * Math.PI);
+        const lnSec = -Math.log(Math.cos((Math.PI * phi) / 2));
+        const E20 = (s * lnSec) / (1 + s * lnSec);
+        const [e200, e400, e800] = [200, 400, 800].map((n) => cleanTransverseCoefficients(L, phi, n).meanCoefficient);
+        const distances = [Math.abs(e200 / E20 - 1), Math.abs(e400 / E20 - 1), Math.abs(e800 / E20 - 1)];
+        expect(distances[0] / distances[1]).toBeGreaterThan(1.6);
+        expect(distances[1] / distances[2]).toBeGreaterThan(1.6);
+        const answered = cleanTransverseCoefficients(L, phi);
+        expect(answered.method).toBe('short-period');
+        expect(answered.meanCoefficient).toBeCloseTo(E20, 15);
+      }
+    }
+    expect(cleanTransverseCoefficients(SHORT_PERIOD_LIMIT * 1.01, 0.5).method).toBe('series');
+  });
+  it('a repeated (L, φ) is answered from the cache with the Richardson value of 400 and 200 terms', () => {
+    const [L, phi] = [1.7, 0.45];
+    const first = cleanTransverseCoefficients(L, phi);
+    const again = cleanTransverseCoefficients(L, phi);
+    const fresh = 2 * cleanTransverseCoefficients(L, phi, 400).meanCoefficient - cleanTransverseCoefficients(L, phi, 200).meanCoefficient;
+    expect(again).toEqual(first);
+    expect(again.meanCoefficient).toBe(fresh);
   });
   it('series converges with the number of terms (successive differences halve: first-order convergence)', () => {
     const e = [200, 400, 800].map((n) => cleanTransverseCoefficients(0.01, 0.5, n).meanCoefficient);
