@@ -47,15 +47,22 @@ export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Int
     else if (Math.abs(slope[k]) > 3 * Math.abs(s)) slope[k] = 3 * s;
   }
 
+  // Interval lookup in O(1) on average: n equal buckets over [x₀, x_{n−1}] each remember the interval
+  // holding their left edge, and a short forward walk finds the last node ≤ t: the same interval a
+  // bisection returns, so the values are those of the plain search (uniform tables need no walk).
+  const span = x[n - 1] - x[0];
+  const bucketsPerUnit = (n - 1) / span;
+  const bucketStart = new Int32Array(n);
+  for (let k = 0, i = 0; k < n; k++) {
+    const edge = x[0] + k / bucketsPerUnit;
+    while (i < n - 2 && x[i + 1] <= edge) i++;
+    bucketStart[k] = i;
+  }
   const locate = (t: number): number => {
-    let lo = 0;
-    let hi = n - 1;
-    while (hi - lo > 1) {
-      const mid = (lo + hi) >> 1;
-      if (x[mid] <= t) lo = mid;
-      else hi = mid;
-    }
-    return lo;
+    let i = bucketStart[Math.min(n - 1, Math.floor((t - x[0]) * bucketsPerUnit))];
+    while (i > 0 && x[i] > t) i--; // t a rounding below its bucket's edge
+    while (i < n - 2 && x[i + 1] <= t) i++;
+    return i;
   };
 
   return {

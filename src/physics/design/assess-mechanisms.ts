@@ -16,7 +16,7 @@ import type { SlipMethod } from '../slip/slip.js';
 import type { WaveRegime } from '../waves/criteria.js';
 import type { EffectiveRequirements } from './assess-requirements.js';
 import type { DesignContext } from './context.js';
-import { heatTransfer, interfaceWaves, lubricantRetention, slipAndDrag, surfactantSensitivity, wettingState, type Answer } from './questions.js';
+import { heatTransfer, interfaceWaveMargin, interfaceWaves, lubricantRetention, slipAndDrag, surfactantSensitivity, wettingState, type Answer } from './questions.js';
 
 export type MechanismName = 'wetting' | 'retention' | 'waves' | 'slipAndDrag' | 'surfactant' | 'heat';
 export const MECHANISMS: readonly MechanismName[] = ['wetting', 'retention', 'waves', 'slipAndDrag', 'surfactant', 'heat'];
@@ -69,7 +69,7 @@ export interface MechanismEvaluation {
 }
 
 /** Runs a question; a part the document lacks (or a case the model does not cover) makes it "not assessed". */
-function attempt<R>(run: () => Answer<R>): { answer: Answer<R> } | { reason: string } {
+function attempt<R>(run: () => R): { answer: R } | { reason: string } {
   try {
     return { answer: run() };
   } catch (error) {
@@ -107,6 +107,11 @@ function valueAt(times: readonly number[], values: readonly number[], t: number)
 export interface MechanismOptions {
   /** Heat conductivity sweep points for the plot (none: no sweep). */
   heatSweepPoints?: number;
+  /**
+   * Only the margins are wanted (a sensitivity step): the waves verdict from the criteria at the design point
+   * alone, without the growth curve and the design limits, which the margin does not use (same margin).
+   */
+  marginsOnly?: boolean;
 }
 
 /** Every mechanism on one context, with the couplings computed (module comment). */
@@ -136,19 +141,23 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   } else mechanisms.wetting = { status: 'not-assessed', reason: wetting.reason };
 
   // Waves, and the credit they leave to the drag reduction.
-  const waves = attempt(() => interfaceWaves(ctx));
+  const waves = attempt(() => {
+    if (options.marginsOnly) return { ...interfaceWaveMargin(ctx), governing: 'not evaluated (margins only)' };
+    const full = interfaceWaves(ctx);
+    gather(full);
+    return { regime: full.result.regime, margin: (full.verdict as Verdict).margin, governing: full.result.governingCriterion };
+  });
   let waveCredit = 1;
   let waveRegime: WaveRegime | null = null;
   if ('answer' in waves) {
-    gather(waves.answer);
-    waveRegime = waves.answer.result.regime;
-    const calmMargin = (waves.answer.verdict as Verdict).margin;
+    waveRegime = waves.answer.regime;
+    const calmMargin = waves.answer.margin;
     const reserve = requirements.minWaveMargin.value as number;
     const margin = (calmMargin - reserve) / (1 - reserve);
     mechanisms.waves = assessed(
       margin,
       `${waveRegime}: the waves margin 1 − Π_max/½ (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
-      `${waveRegime} (governing: ${waves.answer.result.governingCriterion})`,
+      `${waveRegime} (governing: ${waves.answer.governing})`,
     );
     if (waveRegime === 'wavy') {
       waveCredit = 0;

@@ -100,7 +100,7 @@ export function assessSensitivities(
     const factor = forward ? 1 + relativeStep : 1 - relativeStep;
     const perturbedValue = value * factor;
     const perturbed = new DesignContext(withKnob(ctx.document, knob, perturbedValue), ctx.catalogue);
-    const outcome = evaluateMechanisms(perturbed, requirements).mechanisms;
+    const outcome = evaluateMechanisms(perturbed, requirements, { marginsOnly: true }).mechanisms;
     const derivatives: KnobSensitivity['marginDerivatives'] = {};
     for (const name of MECHANISMS) {
       const before = baseMargins[name];

@@ -109,7 +109,7 @@ export function overallVerdict(mechanisms: Record<MechanismName, MechanismAssess
 
 /** The margins of one design (no sensitivities, no plots): what a finite difference compares. */
 export function assessmentMargins(ctx: DesignContext, requirements: EffectiveRequirements): Partial<Record<MechanismName, number>> {
-  return margins(evaluateMechanisms(ctx, requirements).mechanisms);
+  return margins(evaluateMechanisms(ctx, requirements, { marginsOnly: true }).mechanisms);
 }
 
 /**

@@ -21,8 +21,9 @@ import { evaluateRetention, type RetentionResult } from '../retention/retention.
 import { dragChange, type DragChange } from '../slip/drag.js';
 import type { SlipMethod, SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
+import type { WaveRegime } from '../waves/criteria.js';
 import type { WavesResult } from '../waves/result.js';
-import { evaluateWaves, waveRegimeAtDesign, waveRoughnessWarning } from '../waves/waves.js';
+import { evaluateWaves, waveMarginAtDesign, waveRegimeAtDesign, waveRoughnessWarning, type WavesInput } from '../waves/waves.js';
 import { evaluateWetting, type WettingResult } from '../wetting/wetting.js';
 import type { DesignContext } from './context.js';
 import type { Question } from './document.js';
@@ -167,20 +168,32 @@ export function wavesMapWanted(options: { map?: boolean; mapResolution?: number 
   return options?.map === true || options?.mapResolution !== undefined;
 }
 
+/** The waves model's inputs on the context's design: the interface drift from the closed-form slip (as waves). */
+function wavesInputOf(ctx: DesignContext, notes: Notes): WavesInput {
+  const scenario = ctx.scenario('waves', 'required');
+  const slip = ctx.slip('waves', 'closed-form');
+  notes.cite(...slip.notes.references);
+  notes.assume('Interface drift from the closed-form longitudinal slip length (see slip).');
+  return { scenario, slipLengthLongitudinal: slip.result.slipLengthLongitudinal, ...gravityOf(ctx, 'waves') };
+}
+
+/**
+ * The waves verdict's regime and margin alone, without the growth curve, the design limits or the map:
+ * the same inputs and criteria as {@link interfaceWaves}, for an assessment's sensitivity steps.
+ */
+export function interfaceWaveMargin(ctx: DesignContext): { regime: WaveRegime; margin: number } {
+  return waveMarginAtDesign(wavesInputOf(ctx, new Notes()));
+}
+
 /** POST /v1/waves: do capillary waves on the interface stay calm? */
 export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 'verdict' | 'map'> & { map?: WavesResult['map'] }> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
-    const scenario = ctx.scenario('waves', 'required');
-    const slip = ctx.slip('waves', 'closed-form');
-    notes.cite(...slip.notes.references);
-    notes.assume('Interface drift from the closed-form longitudinal slip length (see slip).');
+    const input = wavesInputOf(ctx, notes);
     const options = ctx.document.options;
     const map = wavesMapWanted(options);
     const waves = evaluateWaves({
-      scenario,
-      slipLengthLongitudinal: slip.result.slipLengthLongitudinal,
-      ...gravityOf(ctx, 'waves'),
+      ...input,
       // No map asked for: the smallest one (2 × 2), dropped from the answer.
       mapResolution: map ? (options?.mapResolution ?? DEFAULT_MAP_CELLS) : 2,
     });

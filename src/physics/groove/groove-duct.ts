@@ -111,12 +111,14 @@ function oddPower(n: number, power: number): number {
 function tanhComplementSum(zeta: number, power: number, alternating: boolean): number {
   let sum = 0;
   let first = 0;
-  for (let n = 1, sign = 1; n < 1e4; n += 2, sign = alternating ? -sign : 1) {
-    const e = Math.exp(-2 * n * zeta);
+  // e^{−2nζ} by repeated multiplication (one exponential per call; the few products lose no accuracy that matters).
+  const ratio = Math.exp(-4 * zeta);
+  let e = Math.exp(-2 * zeta);
+  for (let n = 1, sign = 1; n < 1e4; n += 2, sign = alternating ? -sign : 1, e *= ratio) {
     const term = (2 * e) / ((1 + e) * oddPower(n, power));
     if (n === 1) first = term;
     sum += sign * term;
-    if (term <= GEOMETRIC_TOLERANCE * first) break;
+    if (term <= GEOMETRIC_TOLERANCE * first || e === 0) break;
   }
   return sum;
 }
@@ -125,8 +127,9 @@ function tanhComplementSum(zeta: number, power: number, alternating: boolean): n
 function sechSum(zeta: number, power: number): number {
   let sum = 0;
   let first = 0;
-  for (let n = 1; n < 1e4; n += 2) {
-    const e = Math.exp(-n * zeta);
+  const ratio = Math.exp(-2 * zeta);
+  let e = Math.exp(-zeta);
+  for (let n = 1; n < 1e4; n += 2, e *= ratio) {
     const term = (2 * e) / ((1 + e * e) * oddPower(n, power));
     if (n === 1) first = term;
     sum += term;

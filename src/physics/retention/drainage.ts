@@ -235,10 +235,13 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
   };
 
   const capacity = w * d * dx;
+  const cellPressure = new Float64Array(n);
   const chain: ConservationChain = {
     size: n,
     capacities: new Float64Array(n).fill(capacity),
     faceFluxes(fill: Float64Array, leaving: Float64Array, entering: Float64Array): void {
+      // Each cell's capillary pressure once (every interior cell borders two faces).
+      for (let i = 0; i < n; i++) cellPressure[i] = pressureOf(fill[i]);
       for (let face = 0; face <= n; face++) {
         const left = face - 1;
         const right = face;
@@ -250,15 +253,13 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
           let out = 0;
           if (left >= 0) {
             const threshold = isDownstreamEnd && openEnds ? 0 : spillPressure;
-            const p = pressureOf(fill[left]);
-            const q = fluxWithGradient(fill[left], (threshold - p) / (dx / 2));
+            const q = fluxWithGradient(fill[left], (threshold - cellPressure[left]) / (dx / 2));
             out = Math.max(0, q) * smoothAvailability(fill[left], availabilityThreshold);
           }
           let into = 0;
           if (right < n) {
             const threshold = isUpstreamEnd && openEnds ? 0 : spillPressure;
-            const p = pressureOf(fill[right]);
-            const q = fluxWithGradient(fill[right], (p - threshold) / (dx / 2));
+            const q = fluxWithGradient(fill[right], (cellPressure[right] - threshold) / (dx / 2));
             into = Math.min(0, q) * smoothAvailability(fill[right], availabilityThreshold);
           }
           leaving[face] = out;
@@ -267,7 +268,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
         }
         const fl = fill[left];
         const fr = fill[right];
-        const q = fluxWithGradient(Math.max(fl, fr), (pressureOf(fr) - pressureOf(fl)) / dx);
+        const q = fluxWithGradient(Math.max(fl, fr), (cellPressure[right] - cellPressure[left]) / dx);
         const donor = q >= 0 ? fl : fr;
         const value = q * smoothAvailability(donor, availabilityThreshold);
         leaving[face] = value;

@@ -211,6 +211,12 @@ export function waveRegimeAtDesign(input: WavesInput): WaveRegime {
   return regimeOf(criteriaAtDesign(input, new Notes()).at.ratios);
 }
 
+/** The regime and the verdict's margin at the design point alone (same criteria and margin as {@link evaluateWaves}). */
+export function waveMarginAtDesign(input: WavesInput): { regime: WaveRegime; margin: number } {
+  const ratios = criteriaAtDesign(input, new Notes()).at.ratios;
+  return { regime: regimeOf(ratios), margin: marginOf(ratios) };
+}
+
 /**
  * Evaluate interface wave stability for one design.
  *

@@ -5,6 +5,10 @@
 import { describe, expect, it } from 'vitest';
 import { overallVerdict, THIN_MARGIN, type MechanismAssessment, type MechanismName } from '../../../src/physics/design/assess.js';
 import { effectiveRequirements, REQUIREMENT_DEFAULTS } from '../../../src/physics/design/assess-requirements.js';
+import { evaluateMechanisms, MECHANISMS } from '../../../src/physics/design/assess-mechanisms.js';
+import { DesignContext } from '../../../src/physics/design/context.js';
+import type { DesignDocument } from '../../../src/physics/design/document.js';
+import { catalogue } from '../../../src/materials/lookup.js';
 
 const ok = (margin: number): MechanismAssessment => ({ status: 'assessed', verdict: { passes: margin >= 0, margin, criterion: 'test' }, summary: 'test' });
 const none: MechanismAssessment = { status: 'not-assessed', reason: 'not given' };
@@ -51,5 +55,46 @@ describe('requirements in effect', () => {
     expect(r.tolerableSurfactantConcentration).toEqual({ value: 0.01, source: 'default' });
     expect(r.minRetainedFraction).toEqual({ value: REQUIREMENT_DEFAULTS.minRetainedFraction, source: 'default' });
     expect(effectiveRequirements({}, {}).tolerableSurfactantConcentration.value).toBeNull();
+  });
+});
+
+describe('margins only (the sensitivity steps and assessmentMargins)', () => {
+  // Invented demo designs (SI): hexadecane in a laminar 2 mm channel, decane in a turbulent 10 mm one, and the
+  // turbulent one with a low interfacial tension (wavy). Witness: the full evaluation of the same design.
+  const laminar: DesignDocument = {
+    texture: { grooveWidth: 30e-6, pitch: 60e-6, grooveDepth: 15e-6, grooveLength: 0.02, grooveEnds: 'open' },
+    lubricant: { id: 'n-hexadecane', temperature: 293.15 },
+    workingFluid: { id: 'water', temperature: 293.15 },
+    contactAngles: { underWorkingFluid: { advancing: 60, receding: 20 } },
+    flow: { kind: 'channel', height: 2e-3, bulkVelocity: 0.5 },
+    waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: 1e-3 },
+    solid: { thermalConductivity: 0.2, substrateThickness: 20e-6 },
+    options: { method: 'closed-form', surfactantMethod: 'scaling' },
+  };
+  const turbulent: DesignDocument = {
+    ...laminar,
+    texture: { grooveWidth: 50e-6, pitch: 100e-6, grooveDepth: 20e-6, grooveLength: 0.1, grooveEnds: 'open' },
+    lubricant: { id: 'n-decane', temperature: 293.15 },
+    contactAngles: { underWorkingFluid: { advancing: 170, receding: 48, equilibrium: 100 } },
+    flow: { kind: 'channel', height: 0.01, bulkVelocity: 1 },
+  };
+  const wavy: DesignDocument = { ...turbulent, interfacialTension: 1e-4 };
+  it.each([
+    ['laminar', laminar],
+    ['turbulent', turbulent],
+    ['turbulent, wavy', wavy],
+  ] as const)('%s: every margin and the wave regime equal the full evaluation’s', (name, design) => {
+    const requirements = effectiveRequirements({ serviceTime: 7200 }, {});
+    const full = evaluateMechanisms(new DesignContext(design, catalogue), requirements);
+    const lean = evaluateMechanisms(new DesignContext(design, catalogue), requirements, { marginsOnly: true });
+    for (const name of MECHANISMS) {
+      const a = full.mechanisms[name];
+      const b = lean.mechanisms[name];
+      expect(b.status, name).toBe(a.status);
+      if (a.status === 'assessed' && b.status === 'assessed') expect(b.verdict.margin, name).toBe(a.verdict.margin);
+    }
+    expect(lean.couplings.waveRegime).toBe(full.couplings.waveRegime);
+    if (name === 'turbulent, wavy') expect(full.couplings.waveRegime).toBe('wavy');
+    expect(lean.couplings.creditedDragReductionAtServiceTime).toBe(full.couplings.creditedDragReductionAtServiceTime);
   });
 });
