@@ -62,7 +62,7 @@ import { STANDARD_GRAVITY } from '../../core/constants.js';
 import { REFERENCES } from '../../core/references.js';
 import type { Scenario } from '../scenario.js';
 import type { Verdict } from '../../core/values.js';
-import type { ContactAngles, WettingState } from '../wetting/wetting.js';
+import { warnNotWetting, type ContactAngles, type WettingState } from '../wetting/wetting.js';
 import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
 import { holdLengths, type CurvatureLimit } from './holding.js';
 import type { TimelinePoint } from './drainage.js';
@@ -371,7 +371,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   notes.cite(REFERENCES.colosqui2016);
   notes.warn('flat-sample-hysteresis', 'contact-angle hysteresis measured on flat samples may differ from that inside the grooves', 'info');
   if (input.wettingState === 'not-wetting') {
-    notes.warn('not-wetting-relies-on-pinning', 'the lubricant is not wetting under the working fluid: it is held by contact-line pinning alone', 'warning');
+    warnNotWetting(notes);
   }
   if (angles.receding >= 90) {
     notes.warn('no-capillary-suction', 'receding angle ≥ 90°: the receding meniscus gives no capillary back-pressure; only pinning holds the lubricant', 'caution');

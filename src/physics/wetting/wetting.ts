@@ -52,6 +52,20 @@ import type { SourcedNumber, Verdict } from '../../core/values.js';
  * Dispersive part of water's surface tension, N/m: 21.8 mN/m (Fowkes 1964; the ±0.7 and 20 °C from memory:
  * the paper was not reachable; probe-liquid tables read list the same 21.8 mN/m, corroboration only).
  */
+
+/**
+ * The warning of a lubricant the working fluid displaces at equilibrium. One
+ * wording, shared by wetting and retention, so a composed answer (the
+ * assessment) carries it once.
+ */
+export function warnNotWetting(notes: Notes): void {
+  notes.warn(
+    'not-wetting-relies-on-pinning',
+    'the working fluid displaces the lubricant at equilibrium: it can be held in the grooves only by contact-line pinning',
+    'warning',
+  );
+}
+
 export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
 
 /** Contact angles (degrees) of the lubricant on the flat solid under the working fluid, through the lubricant. */
@@ -354,13 +368,7 @@ export function evaluateWetting(input: WettingInput): Outcome<WettingResult> {
       towards = other;
     }
   }
-  if (state === 'not-wetting') {
-    notes.warn(
-      'not-wetting-relies-on-pinning',
-      'the working fluid displaces the lubricant at equilibrium: it can be held in the grooves only by contact-line pinning (see retention)',
-      'warning',
-    );
-  }
+  if (state === 'not-wetting') warnNotWetting(notes);
 
   let fillingMedium: 'air' | 'working-fluid';
   let fillsSpontaneously: boolean;

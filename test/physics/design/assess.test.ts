@@ -98,3 +98,21 @@ describe('margins only (the sensitivity steps and assessmentMargins)', () => {
     expect(lean.couplings.creditedDragReductionAtServiceTime).toBe(full.couplings.creditedDragReductionAtServiceTime);
   });
 });
+
+describe('warnings across the assessment’s models', () => {
+  it('a displaced lubricant (θ_e = 100°, hysteresis 122°) is warned of once, though wetting and retention both see it (our rule: one code, one line)', async () => {
+    const { assessDesign } = await import('../../../src/physics/design/assess.js');
+    const { DesignSchema } = await import('../../../src/api/schemas/design.js');
+    const input = DesignSchema.parse({
+      texture: { grooveWidth: '30 um', pitch: '60 um', grooveDepth: '15 um', grooveLength: '20 mm', grooveEnds: 'open' },
+      lubricant: { id: 'n-hexadecane', temperature: '20 degC' },
+      workingFluid: { id: 'water', temperature: '20 degC' },
+      contactAngles: { underWorkingFluid: { advancing: 170, receding: 48, equilibrium: 100 } },
+      flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
+      options: { method: 'closed-form' },
+    });
+    const codes = assessDesign(new DesignContext(input, catalogue), {}, { sensitivities: false }).warnings.map((w) => w.code);
+    expect(codes.filter((c) => c === 'not-wetting-relies-on-pinning')).toHaveLength(1);
+    expect(new Set(codes).size).toBe(codes.length);
+  });
+});
