@@ -94,6 +94,8 @@ interface UnitReading {
   unit: Unit;
   si: Unit;
 }
+/** mathjs's Unit constructor also takes a valueless Unit for the unit (a copy of it is made); its types list only a name. */
+const UnitOfReading = math.Unit as unknown as new (value: number, valuelessUnit: Unit) => Unit;
 const UNIT_READINGS_LIMIT = 1_000;
 const unitReadings = new Map<string, UnitReading | null>();
 
@@ -127,7 +129,7 @@ function convertFast(normalised: string, siUnit: string): number | undefined {
   if (parts === null) return undefined;
   const reading = unitReading(parts[2]!, siUnit);
   if (reading === null) return undefined;
-  const value = new math.Unit(parseFloat(parts[1]!), reading.unit).toNumber(reading.si);
+  const value = new UnitOfReading(parseFloat(parts[1]!), reading.unit).to(reading.si).toNumber();
   return Number.isFinite(value) ? Number(value.toPrecision(15)) : undefined;
 }
 
