@@ -141,14 +141,26 @@ export default fp(
         this.set(lru.stats().bytes);
       },
     });
+    // One labelled series per calculation, looked up once (prom-client hashes a labels object on every inc).
+    const byCalculation = (counter: Counter) => {
+      const series = new Map<string, { inc(): void }>();
+      return (calculation: string) => {
+        let labelled = series.get(calculation);
+        if (labelled === undefined) {
+          labelled = counter.labels({ calculation });
+          series.set(calculation, labelled);
+        }
+        labelled.inc();
+      };
+    };
     app.decorate('resultCache', {
       lru,
       key: (calculation: string, input: unknown) => `${calculation}\n${JSON.stringify(input)}`,
       // A different separator, so a request text can never be taken for the JSON of a parsed document.
       textKey: (calculation: string, text: string) => `${calculation}\t${text}`,
-      hit: (calculation: string) => hits.inc({ calculation }),
-      miss: (calculation: string) => misses.inc({ calculation }),
-      computed: (calculation: string) => computed.inc({ calculation }),
+      hit: byCalculation(hits),
+      miss: byCalculation(misses),
+      computed: byCalculation(computed),
     } satisfies ResultCache);
   },
   { name: 'oilskin-result-cache', dependencies: ['oilskin-metrics'] },
