@@ -6,6 +6,10 @@
  *   a JSON body of the same size (the /v1/flow answer, serialised per request);
  * - old: a bare fastify GET of a tiny object (the earlier baseline, kept to
  *   compare with older figures).
+ * Two workloads: one body repeated (what a client polling one design sends;
+ * the result cache can answer it), and a distinct body per request (a new
+ * bulk velocity each time, so every request is validated and computed: the
+ * computing path), each against the fair baseline fed the same bodies.
  * The servers run as child processes (bench/http-baseline.ts for the bare
  * routes, src/api/server.ts with no workers, no rate limit, no request logs),
  * so each one's CPU time per answered request is read apart from the load
@@ -43,7 +47,10 @@ interface Figures {
   cpuUsPerRequest?: number;
 }
 
-async function run(url: string, method: 'GET' | 'POST', body?: string): Promise<Figures> {
+/** What a run sends: nothing (GET), one body repeated, or a fresh body per request. */
+type Payload = undefined | string | (() => string);
+
+async function run(url: string, method: 'GET' | 'POST', payload: Payload): Promise<Figures> {
   const result = await autocannon({
     url,
     method,
@@ -51,7 +58,8 @@ async function run(url: string, method: 'GET' | 'POST', body?: string): Promise<
     pipelining,
     duration,
     headers: { 'content-type': 'application/json' },
-    ...(body ? { body } : {}),
+    ...(typeof payload === 'string' ? { body: payload } : {}),
+    ...(typeof payload === 'function' ? { requests: [{ method, setupRequest: (request: object) => ({ ...request, body: payload() }) }] } : {}),
   });
   return {
     rps: result.requests.average,
@@ -63,11 +71,20 @@ async function run(url: string, method: 'GET' | 'POST', body?: string): Promise<
   };
 }
 
-const body = JSON.stringify({
-  workingFluid: { id: 'water', temperature: '20 degC' },
-  flow: { kind: 'channel', height: '10 mm', bulkVelocity: '1 m/s' },
-  texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
-});
+/** The benchmark's design; `bulkVelocity` varies in the distinct-body runs. */
+const design = (bulkVelocity: string) =>
+  JSON.stringify({
+    workingFluid: { id: 'water', temperature: '20 degC' },
+    flow: { kind: 'channel', height: '10 mm', bulkVelocity },
+    texture: { grooveWidth: '50 um', pitch: '100 um', grooveDepth: '20 um' },
+  });
+const body = design('1 m/s');
+/**
+ * A new design per request (0.5 to 1.5 m/s in steps of 1 µm/s, turbulent throughout), so no answer repeats within
+ * a run and neither the result cache nor any memo can answer: the computing path.
+ */
+let distinctCount = 0;
+const distinctBody = () => design(`${(0.5 + (distinctCount++ % 1_000_000) * 1e-6).toFixed(6)} m/s`);
 
 /** A free loopback port. */
 async function freePort(): Promise<number> {
@@ -95,7 +112,7 @@ function cpuSeconds(pid: number): number {
 }
 
 /** autocannon against a child process, with the child's CPU time per answered request. */
-async function measured(proc: ChildProcess, url: string, method: 'GET' | 'POST', payload?: string): Promise<Figures> {
+async function measured(proc: ChildProcess, url: string, method: 'GET' | 'POST', payload: Payload): Promise<Figures> {
   const before = cpuSeconds(proc.pid!);
   const figures = await run(url, method, payload);
   const requests = figures.rps * duration;
@@ -124,23 +141,29 @@ console.log(
     `connections ${connections}, pipelining ${pipelining}, duration ${duration} s each, servers in child processes, result cache ${cacheMb} MB, request ${body.length} B, answer ${answerText.length} B`,
 );
 try {
-  const old = await measured(bare, `${bareBase}/small`, 'GET');
+  const old = await measured(bare, `${bareBase}/small`, 'GET', undefined);
   const fair = await measured(bare, `${bareBase}/same-size`, 'POST', body);
   const flow = await measured(service, `${appBase}/v1/flow`, 'POST', body);
+  const fairDistinct = await measured(bare, `${bareBase}/same-size`, 'POST', distinctBody);
+  const flowDistinct = await measured(service, `${appBase}/v1/flow`, 'POST', distinctBody);
   const line = (name: string, f: Figures) =>
     console.log(
-      `${name.padEnd(36)}: ${f.rps.toFixed(0).padStart(6)} req/s, p50 ${f.p50} ms, p99 ${f.p99} ms, CPU ${f.cpuUsPerRequest?.toFixed(0)} µs/request, ${f.bytes.toFixed(0)} B/answer, non-2xx ${f.non2xx}, errors ${f.errors}`,
+      `${name.padEnd(48)}: ${f.rps.toFixed(0).padStart(6)} req/s, p50 ${f.p50} ms, p99 ${f.p99} ms, CPU ${f.cpuUsPerRequest?.toFixed(0)} µs/request, ${f.bytes.toFixed(0)} B/answer, non-2xx ${f.non2xx}, errors ${f.errors}`,
     );
   line('bare fastify GET /small (old)', old);
-  line('bare fastify POST /same-size (fair)', fair);
-  line('oilskin POST /v1/flow', flow);
-  const ratios = (name: string, base: Figures) =>
+  line('bare fastify POST /same-size (fair), one body', fair);
+  line('oilskin POST /v1/flow, one body repeated', flow);
+  line('bare fastify POST /same-size, distinct bodies', fairDistinct);
+  line('oilskin POST /v1/flow, distinct bodies', flowDistinct);
+  const ratios = (name: string, ours: Figures, base: Figures) =>
     console.log(
-      `ratio against ${name.padEnd(5)}: rate ${(flow.rps / base.rps).toFixed(2)}, CPU per request ${(base.cpuUsPerRequest! / flow.cpuUsPerRequest!).toFixed(2)}, ` +
-        `p50 ${(base.p50 / Math.max(flow.p50, 1e-9)).toFixed(2)} (${base.p50}/${flow.p50} ms), p99 ${(base.p99 / Math.max(flow.p99, 1e-9)).toFixed(2)} (${base.p99}/${flow.p99} ms)`,
+      `${name.padEnd(38)}: rate ${(ours.rps / base.rps).toFixed(2)}, CPU per request ${(base.cpuUsPerRequest! / ours.cpuUsPerRequest!).toFixed(2)}, ` +
+        `p50 ${(base.p50 / Math.max(ours.p50, 1e-9)).toFixed(2)} (${base.p50}/${ours.p50} ms), p99 ${(base.p99 / Math.max(ours.p99, 1e-9)).toFixed(2)} (${base.p99}/${ours.p99} ms)`,
     );
-  ratios('fair', fair);
-  ratios('old', old);
+  ratios('repeated body against fair', flow, fair);
+  ratios('repeated body against old', flow, old);
+  ratios('distinct bodies against fair (same)', flowDistinct, fairDistinct);
+  ratios('distinct bodies against old', flowDistinct, old);
 } finally {
   service.kill('SIGTERM');
   bare.kill('SIGTERM');

@@ -3,7 +3,7 @@
  * (CORS, rate limit), then ours (errors, metrics, health, auth, docs, routes).
  */
 import { randomUUID, timingSafeEqual } from 'node:crypto';
-import Fastify, { type FastifyInstance } from 'fastify';
+import Fastify, { LogController, type FastifyInstance, type FastifyReply, type FastifyRequest } from 'fastify';
 import cors from '@fastify/cors';
 import rateLimit from '@fastify/rate-limit';
 import type { ServiceConfig } from './config.js';
@@ -29,6 +29,20 @@ declare module 'fastify' {
 }
 
 const REQUEST_ID = /^[A-Za-z0-9._:-]{1,128}$/;
+
+/**
+ * One access line per request, on completion, carrying what fastify's two default lines (on arrival and on
+ * completion) carried between them: method, URL, host, client address, status and response time. At info level the
+ * two lines cost about 16 µs of CPU per request (a bare-route-sized share of the cheap path), the one line about half.
+ */
+class AccessLog extends LogController {
+  override incomingRequest(): void {}
+
+  override requestCompleted(error: Error | null | undefined, request: FastifyRequest, reply: FastifyReply): void {
+    if (error) reply.log.error({ req: request, res: reply, err: error, responseTime: reply.elapsedTime }, 'request errored');
+    else reply.log.info({ req: request, res: reply, responseTime: reply.elapsedTime }, 'request completed');
+  }
+}
 
 function keyMatches(given: string, keys: readonly string[]): boolean {
   const a = Buffer.from(given);
@@ -63,6 +77,7 @@ export async function buildApp(config: ServiceConfig, options: { logStream?: Nod
       const given = req.headers['x-request-id'];
       return typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
     },
+    logController: new AccessLog(),
     return503OnClosing: true,
     forceCloseConnections: 'idle',
     onProtoPoisoning: 'error',

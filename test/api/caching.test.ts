@@ -81,9 +81,40 @@ describe('calculations: ETag and If-None-Match', () => {
     expect(again.statusCode).toBe(304);
     expect(await metric(app, 'oilskin_result_cache_hits_total', 'flow')).toBe(hits + 1);
     expect(await metric(app, 'oilskin_calculations_computed_total', 'flow')).toBe(computed);
-    // A light result keeps only its tag: without a validator it is computed again.
-    expect((await app.inject({ method: 'POST', url: '/v1/flow', payload: flowBody })).statusCode).toBe(200);
-    expect(await metric(app, 'oilskin_calculations_computed_total', 'flow')).toBe(computed + 1);
+    // A light result keeps its bytes too: repeated without a validator, in either spelling, it is not computed again.
+    for (const payload of [flowBody, flowBodySi]) {
+      const repeated = await app.inject({ method: 'POST', url: '/v1/flow', payload });
+      expect(repeated.statusCode).toBe(200);
+      expect(repeated.body).toBe(first.body);
+      expect(repeated.headers.etag).toBe(etag);
+      expect(repeated.headers['cache-control']).toBe('no-cache');
+    }
+    expect(await metric(app, 'oilskin_calculations_computed_total', 'flow')).toBe(computed);
+    expect(await metric(app, 'oilskin_result_cache_hits_total', 'flow')).toBe(hits + 3);
+  });
+
+  it('the request text is looked up before validation, so a text that failed is refused again, never served', async () => {
+    const text = JSON.stringify({ ...flowBody, flow: { ...flowBody.flow, bulkVelocity: '3 mN/m' } });
+    for (let i = 0; i < 2; i++) {
+      const res = await app.inject({ method: 'POST', url: '/v1/flow', payload: text, headers: { 'content-type': 'application/json' } });
+      expect(res.statusCode).toBe(422);
+      expect(res.headers['content-type']).toMatch(/^application\/problem\+json/);
+      expect(res.json().errors[0].path).toBe('flow.bulkVelocity');
+    }
+    // The same document spelled with other whitespace and key order shares the parsed-document entry.
+    const spaced = `{ "texture": ${JSON.stringify(flowBody.texture)}, "flow": ${JSON.stringify(flowBody.flow)}, "workingFluid": ${JSON.stringify(flowBody.workingFluid)} }`;
+    const computed = await metric(app, 'oilskin_calculations_computed_total', 'flow');
+    const res = await app.inject({ method: 'POST', url: '/v1/flow', payload: spaced, headers: { 'content-type': 'application/json' } });
+    expect(res.statusCode).toBe(200);
+    expect(await metric(app, 'oilskin_calculations_computed_total', 'flow')).toBe(computed);
+  });
+
+  it('the text-keeping JSON parser still refuses prototype keys, empty and malformed bodies', async () => {
+    for (const payload of ['{"__proto__": {"x": 1}}', '', '{"flow": ']) {
+      const res = await app.inject({ method: 'POST', url: '/v1/flow', payload, headers: { 'content-type': 'application/json' } });
+      expect(res.statusCode).toBe(400);
+      expect(res.headers['content-type']).toMatch(/^application\/problem\+json/);
+    }
   });
 
   it('another tag, or another design, gets 200 with the body', async () => {

@@ -140,5 +140,10 @@ describe('logs', () => {
     expect(res.headers['x-request-id']).toBe('trace-7');
     const records = lines.map((l) => JSON.parse(l));
     expect(records.some((r) => r.reqId === 'trace-7' && r.msg === 'request completed')).toBe(true);
+    // One access line per request (not fastify's two), carrying what the arrival line carried.
+    const access = records.filter((r) => r.reqId === 'trace-7');
+    expect(access).toHaveLength(1);
+    expect(access[0]).toMatchObject({ req: { method: 'GET', url: '/healthz' }, res: { statusCode: 200 } });
+    expect(access[0].responseTime).toBeGreaterThanOrEqual(0);
   });
 });

@@ -1,21 +1,24 @@
 /**
  * HTTP caching of calculations: the strong ETag of a result is its inputs hash
  * (`provenance.inputsHash`, which identifies the calculation), and a bounded
- * in-memory LRU remembers, per normalised request, the ETag of its result and,
- * for heavy calculations, the serialised response itself.
+ * in-memory LRU remembers, per request, the ETag of its result and the
+ * serialised response itself.
  *
  * - A request whose `If-None-Match` names the remembered ETag is answered 304
  *   without computing (a calculation POST is safe and idempotent: a query with
  *   a body, so a conditional request is treated as for GET).
- * - A repeated heavy request is answered from the remembered bytes.
- * - Light results keep only their ETag (about 0.5 kB per entry): recomputing
- *   them costs less than keeping them.
+ * - A repeated request is answered from the remembered bytes, light ones too:
+ *   under load a light compute with its validation, hash and serialisation
+ *   costs several times what sending kept bytes does (bench/http.ts).
  *
- * The key is the calculation name and the JSON of the parsed document: the
- * schema has normalised units and put the keys in schema order, so "10 mm"
- * and 0.01 share an entry. Sizes are counted in bytes (key + body); the
- * oldest entries go first. `OILSKIN_RESULT_CACHE_MB` sets the bound (0 turns
- * the cache off; ETags and 304 after a compute still work).
+ * Two keys lead to an entry. The request text as received (`textKey`) is
+ * looked up first, before any parsing or validation: the same text always
+ * gives the same document. Then the calculation name and the JSON of the
+ * parsed document (`key`): the schema has normalised units and put the keys in
+ * schema order, so "10 mm" and 0.01 share that entry. Sizes are counted in
+ * bytes (key + body, a body counted under each key that holds it); the oldest
+ * entries go first. `OILSKIN_RESULT_CACHE_MB` sets the bound (0 turns the
+ * cache off; ETags and 304 after a compute still work).
  */
 import type { FastifyInstance, FastifyReply } from 'fastify';
 import fp from 'fastify-plugin';
@@ -24,8 +27,8 @@ import { Counter, Gauge, type Registry } from 'prom-client';
 export interface CachedResult {
   /** Strong entity tag, quoted: `"<inputsHash>"`. */
   etag: string;
-  /** The serialised 200 body (heavy results only). */
-  body?: Buffer;
+  /** The serialised 200 body. */
+  body: Buffer;
 }
 
 export interface ResultCacheStats {
@@ -47,7 +50,7 @@ export class ResultLru {
 
   private static cost(key: string, entry: CachedResult): number {
     // UTF-16 key in the heap, the body's bytes, the tag and the Map's own overhead (about 100 bytes, common practice, no source).
-    return 2 * key.length + (entry.body?.byteLength ?? 0) + 2 * entry.etag.length + 100;
+    return 2 * key.length + entry.body.byteLength + 2 * entry.etag.length + 100;
   }
 
   get(key: string): CachedResult | undefined {
@@ -102,6 +105,8 @@ export interface ResultCache {
   lru: ResultLru;
   /** The cache key of a parsed request. */
   key(calculation: string, input: unknown): string;
+  /** The cache key of a request's text as received. */
+  textKey(calculation: string, text: string): string;
   hit(calculation: string): void;
   miss(calculation: string): void;
   computed(calculation: string): void;
@@ -136,12 +141,26 @@ export default fp(
         this.set(lru.stats().bytes);
       },
     });
+    // One labelled series per calculation, looked up once (prom-client hashes a labels object on every inc).
+    const byCalculation = (counter: Counter) => {
+      const series = new Map<string, { inc(): void }>();
+      return (calculation: string) => {
+        let labelled = series.get(calculation);
+        if (labelled === undefined) {
+          labelled = counter.labels({ calculation });
+          series.set(calculation, labelled);
+        }
+        labelled.inc();
+      };
+    };
     app.decorate('resultCache', {
       lru,
       key: (calculation: string, input: unknown) => `${calculation}\n${JSON.stringify(input)}`,
-      hit: (calculation: string) => hits.inc({ calculation }),
-      miss: (calculation: string) => misses.inc({ calculation }),
-      computed: (calculation: string) => computed.inc({ calculation }),
+      // A different separator, so a request text can never be taken for the JSON of a parsed document.
+      textKey: (calculation: string, text: string) => `${calculation}\t${text}`,
+      hit: byCalculation(hits),
+      miss: byCalculation(misses),
+      computed: byCalculation(computed),
     } satisfies ResultCache);
   },
   { name: 'oilskin-result-cache', dependencies: ['oilskin-metrics'] },
