@@ -128,8 +128,8 @@ export default async function calculationRoutes(app: FastifyInstance, options: {
       const etag = `"${result.provenance.inputsHash}"`;
       // Serialised by the typed response schema (fastify's compiled serializer), once, so the body can be kept.
       const body = (reply.getSerializationFunction('200') as (payload: unknown) => string)(result);
-      if (key !== undefined) {
-        const entry = { etag, body: Buffer.from(body) };
+      if (key !== undefined && (heavy || cache.sightings.seenBefore(key))) {
+        const entry = { etag, body };
         cache.lru.set(key, entry);
         if (textKey !== undefined) cache.lru.set(textKey, entry);
       }
