@@ -81,9 +81,9 @@ function allFinite(value: unknown): boolean {
     for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
     return true;
   }
-  for (const key in value) {
-    if (Object.hasOwn(value, key) && !allFinite((value as Record<string, unknown>)[key])) return false;
-  }
+  // Object.values walks own enumerable properties only, as JSON does (faster than for…in with a hasOwn test).
+  const values = Object.values(value);
+  for (let i = 0; i < values.length; i++) if (!allFinite(values[i])) return false;
   return true;
 }
 
