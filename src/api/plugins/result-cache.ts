@@ -96,7 +96,7 @@ export class ResultLru {
  * value) does not fill the cache and churn the heap: kept answers that are
  * evicted unread cost the computing path about 100 µs per request
  * (bench/http.ts, distinct bodies, 374–381 µs against 259–280 µs with the
- * cache off). A polled design is computed twice, then answered from memory.
+ * cache off). A polled design is computed twice, then answered from the cache.
  * The memory of sightings is a fixed table of 32-bit FNV-1a hashes (no
  * allocation per request); a collision only admits a result early.
  */
