@@ -7,6 +7,7 @@
  * stops the sweep. Runs on a solver thread as the task `sweep-batch`.
  */
 import { computeChecked, problemFromError } from '../calculation.js';
+import { BoundedCache } from '../../numerics/memo.js';
 import { canonicalJson } from '../envelope.js';
 import { validationProblem, zodFieldErrors, type FieldError, type Problem } from '../problem.js';
 import { valueAt, withValueAt } from './paths.js';
@@ -138,17 +139,11 @@ export interface SweepBatch {
 }
 
 /** Plans a thread has made, most recent last; a handful, since a thread serves few sweeps at once. */
-const plans = new Map<string, SweepPlan>();
-const PLANS_KEPT = 8;
+const plans = new BoundedCache<SweepPlan>(8);
 
 /** The solver-thread side of a batch: rows of points start … end − 1. */
 export function runSweepBatch(input: unknown): Row[] {
   const batch = input as SweepBatch;
-  let plan = plans.get(batch.key);
-  if (!plan) {
-    plan = planSweep(batch.request);
-    if (plans.size >= PLANS_KEPT) plans.delete(plans.keys().next().value as string);
-    plans.set(batch.key, plan);
-  }
+  const plan = plans.getOrCompute(batch.key, () => planSweep(batch.request));
   return evaluatePoints(plan, batch.start, batch.end);
 }

@@ -5,6 +5,7 @@
  * width × depth plane through the best design.
  */
 import { catalogue } from '../../materials/lookup.js';
+import { BoundedCache } from '../../numerics/memo.js';
 import type { DesignDocument } from '../../physics/design/document.js';
 import { designWindow, evaluateCandidates, type Candidate, type DesignWindow, type WindowSpec } from '../../physics/design/window.js';
 import { effectiveRequirements } from '../../physics/design/assess-requirements.js';
@@ -72,17 +73,13 @@ export function planWindow(body: unknown): WindowPlan {
   return { spec, key: inputsHash(JSON.parse(canonicalJson(parsed.data))) };
 }
 
-const plans = new Map<string, WindowPlan>();
+/** Plans a thread has made: a handful, since a thread serves few windows at once. */
+const plans = new BoundedCache<WindowPlan>(8);
 
 /** Solver-thread side: outcomes of a batch of candidates. */
 export function runWindowBatch(input: unknown): CandidateOutcome[] {
   const { request, key, candidates } = input as { request: unknown; key: string; candidates: Candidate[] };
-  let plan = plans.get(key);
-  if (!plan) {
-    plan = planWindow(request);
-    if (plans.size >= 8) plans.delete(plans.keys().next().value as string);
-    plans.set(key, plan);
-  }
+  const plan = plans.getOrCompute(key, () => planWindow(request));
   return evaluateCandidates(plan.spec.document, plan.spec.requirements, catalogue, candidates);
 }
 
