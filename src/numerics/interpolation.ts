@@ -14,16 +14,12 @@ export interface Interpolant {
 }
 
 /**
- * Builds the interpolant through (xs[i], ys[i]); xs strictly increasing, at
- * least two points. Derivatives at the nodes: harmonic mean of the adjacent
- * secants where they agree in sign, zero at local extrema (the Fritsch–Butland
- * choice, which satisfies the Fritsch–Carlson monotonicity conditions).
+ * Node derivatives of the monotone interpolant (the Fritsch–Butland choice of {@link monotoneCubic}): harmonic
+ * mean of the adjacent secants where they agree in sign, zero at local extrema, end slopes kept within three
+ * times the end secant. x strictly increasing (checked), at least two points.
  */
-export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Interpolant {
-  const n = xs.length;
-  if (n < 2 || ys.length !== n) throw new RangeError('monotoneCubic needs at least two points and equal lengths');
-  const x = Float64Array.from(xs);
-  const y = Float64Array.from(ys);
+function fritschButlandSlopes(x: Float64Array, y: Float64Array): Float64Array {
+  const n = x.length;
   const secant = new Float64Array(n - 1);
   for (let i = 0; i < n - 1; i++) {
     const h = x[i + 1] - x[i];
@@ -47,6 +43,21 @@ export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Int
     else if (Math.abs(slope[k]) > 3 * Math.abs(s)) slope[k] = 3 * s;
   }
 
+  return slope;
+}
+
+/**
+ * Builds the interpolant through (xs[i], ys[i]); xs strictly increasing, at
+ * least two points. Derivatives at the nodes: harmonic mean of the adjacent
+ * secants where they agree in sign, zero at local extrema (the Fritsch–Butland
+ * choice, which satisfies the Fritsch–Carlson monotonicity conditions).
+ */
+export function monotoneCubic(xs: ArrayLike<number>, ys: ArrayLike<number>): Interpolant {
+  const n = xs.length;
+  if (n < 2 || ys.length !== n) throw new RangeError('monotoneCubic needs at least two points and equal lengths');
+  const x = Float64Array.from(xs);
+  const y = Float64Array.from(ys);
+  const slope = fritschButlandSlopes(x, y);
   // Interval lookup in O(1) on average: n equal buckets over [x₀, x_{n−1}] each remember the interval
   // holding their left edge, and a short forward walk finds the last node ≤ t: the same interval a
   // bisection returns, so the values are those of the plain search (uniform tables need no walk).
@@ -179,4 +190,46 @@ export function maxAbsChebyshevLobatto(values: ArrayLike<number>): { value: numb
   const t = 0.5 * (lo + hi);
   const refined = Math.abs(evaluate(t));
   return refined >= best ? { value: refined, at: t } : { value: best, at: bestT };
+}
+
+/**
+ * Monotone cubics of several columns tabulated on one uniform grid x_k = start + k·step (k = 0 … n − 1),
+ * evaluated together: the interval and the Hermite basis are found once per abscissa and shared by the
+ * columns (the drainage model reads both duct coefficients at every face of every flux evaluation). Each
+ * column's slopes and values are those of {@link monotoneCubic} on the same points; t outside the grid is
+ * clamped to its ends. Writes column c's value at t to out[c].
+ */
+export function uniformMonotoneCubics(start: number, step: number, columns: readonly ArrayLike<number>[]): (t: number, out: Float64Array) => void {
+  const n = columns[0]?.length ?? 0;
+  if (n < 2 || !(step > 0) || columns.some((c) => c.length !== n)) throw new RangeError('uniformMonotoneCubics needs at least two points per column, equal lengths and a positive step');
+  const x = Float64Array.from({ length: n }, (_, k) => start + k * step);
+  const values = columns.map((c) => Float64Array.from(c));
+  // Node slopes times the step: the Hermite tangent terms in the unit interval.
+  const tangents = values.map((y) => fritschButlandSlopes(x, y).map((m) => m * step));
+  const m = columns.length;
+  const last = n - 1;
+  return (t: number, out: Float64Array): void => {
+    const u = (t - start) / step;
+    if (!(u > 0)) {
+      for (let c = 0; c < m; c++) out[c] = values[c][0];
+      return;
+    }
+    if (u >= last) {
+      for (let c = 0; c < m; c++) out[c] = values[c][last];
+      return;
+    }
+    const i = Math.floor(u);
+    const s = u - i;
+    const s2 = s * s;
+    const s3 = s2 * s;
+    const h00 = 2 * s3 - 3 * s2 + 1;
+    const h10 = s3 - 2 * s2 + s;
+    const h01 = -2 * s3 + 3 * s2;
+    const h11 = s3 - s2;
+    for (let c = 0; c < m; c++) {
+      const y = values[c];
+      const d = tangents[c];
+      out[c] = h00 * y[i] + h10 * d[i] + h01 * y[i + 1] + h11 * d[i + 1];
+    }
+  };
 }

@@ -117,7 +117,8 @@ describe('flux-form BDF2 on a conservation chain', () => {
     };
     const r = integrateConservationChain(chain, [1], 0, 1, { initialStep: 1e-5, relativeTolerance: 1e-8, absoluteTolerance: 1e-10 });
     expect(r.y[0]).toBeCloseTo(Math.exp(-k), 6);
-    expect(Math.abs(r.y[0] + r.cumulativeLoss - 1)).toBeLessThan(1e-14);
+    // Rounding only: about one unit in the last place per step accumulates over the run's steps.
+    expect(Math.abs(r.y[0] + r.cumulativeLoss - 1)).toBeLessThan(4 * Number.EPSILON * r.steps);
   });
 });
 
@@ -143,7 +144,15 @@ describe('simplified Newton (matrix kept while the iteration contracts)', () => 
     const y0 = Array.from({ length: n }, (_, i) => (i < n / 4 ? 1 : 1e-3));
     const run = (simplifiedNewton: boolean) => {
       evaluations = 0;
-      const r = integrateConservationChain(chain, y0, 0, 0.05, { initialStep: 1e-6, relativeTolerance: 1e-5, absoluteTolerance: 1e-5, newtonTolerance: 1e-12, simplifiedNewton });
+      // Only the update test (newtonResidualFraction 0), so both variants iterate to the same tight tolerance.
+      const r = integrateConservationChain(chain, y0, 0, 0.05, {
+        initialStep: 1e-6,
+        relativeTolerance: 1e-5,
+        absoluteTolerance: 1e-5,
+        newtonTolerance: 1e-12,
+        newtonResidualFraction: 0,
+        simplifiedNewton,
+      });
       return { r, evaluations };
     };
     const full = run(false);
@@ -156,6 +165,51 @@ describe('simplified Newton (matrix kept while the iteration contracts)', () => 
     expect(worst).toBeLessThan(1e-9);
     expect(simplified.r.jacobianEvaluations).toBeLessThan(full.r.jacobianEvaluations);
     expect(simplified.evaluations).toBeLessThan(0.8 * full.evaluations);
+    expect(simplified.r.fluxEvaluations).toBe(simplified.evaluations);
+  });
+
+  it('the residual test stops Newton once the flux-form correction is a small share of the local error: fewer flux evaluations, same state within the tolerance (witness: the tight-Newton run)', () => {
+    // Porous-medium front again (D = y²), closed ends.
+    const n = 60;
+    const dx = 1 / n;
+    let evaluations = 0;
+    const chain: ConservationChain = {
+      size: n,
+      capacities: new Float64Array(n).fill(dx),
+      faceFluxes(y, leaving, entering) {
+        evaluations++;
+        leaving[0] = entering[0] = leaving[n] = entering[n] = 0;
+        for (let face = 1; face < n; face++) {
+          const mean = 0.5 * (y[face] + y[face - 1]);
+          const q = (-mean * mean * (y[face] - y[face - 1])) / dx;
+          leaving[face] = q;
+          entering[face] = q;
+        }
+      },
+    };
+    const y0 = Array.from({ length: n }, (_, i) => (i < n / 4 ? 1 : 1e-3));
+    const tolerance = 1e-5;
+    const run = (newtonResidualFraction: number) => {
+      evaluations = 0;
+      const r = integrateConservationChain(chain, y0, 0, 0.05, {
+        initialStep: 1e-6,
+        relativeTolerance: tolerance,
+        absoluteTolerance: tolerance,
+        newtonTolerance: 1e-12,
+        newtonResidualFraction,
+      });
+      return { r, evaluations };
+    };
+    const tight = run(0);
+    const residual = run(0.01);
+    expect(tight.r.converged && residual.r.converged).toBe(true);
+    let worst = 0;
+    for (let i = 0; i < n; i++) worst = Math.max(worst, Math.abs(residual.r.y[i] - tight.r.y[i]));
+    // Within one local tolerance (measured about 1e-9: the same 988 steps), not bit-equal.
+    expect(worst).toBeLessThan(tolerance);
+    expect(residual.r.conservationError).toBeLessThan(1e-13);
+    // Measured 2 867 against 7 591 flux evaluations.
+    expect(residual.evaluations).toBeLessThan(0.5 * tight.evaluations);
   });
 });
 

@@ -56,7 +56,7 @@
  *      capillaries. Phys. Rev. Fluids 1, 064101. doi:10.1103/PhysRevFluids.1.064101
  */
 import { integrateConservationChain, type ConservationChain } from '../../numerics/conservation-bdf2.js';
-import { monotoneCubic } from '../../numerics/interpolation.js';
+import { uniformMonotoneCubics } from '../../numerics/interpolation.js';
 import { brent } from '../../numerics/roots.js';
 import { ConvergenceError, DomainError } from '../../core/errors.js';
 import { capillaryPressureCurve } from './meniscus.js';
@@ -210,28 +210,28 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
     if (fill >= fullBulgeFill) return bulgePressure * (1 + 10 * (fill - fullBulgeFill));
     return curve.value(fill);
   };
-  // Duct coefficients tabulated over the equivalent depths the model can reach.
+  // Duct coefficients tabulated over the equivalent depths the model can reach, on a uniform grid and read
+  // together (one interval search per face).
   const depthLow = frontFill * d * 0.999;
   const depthHigh = fullBulgeFill * d * 1.001 + d * 0.5;
   const tablePoints = 80;
-  const depths: number[] = [];
-  const shearFlux: number[] = [];
-  const pressureFlux: number[] = [];
+  const depthStep = (depthHigh - depthLow) / tablePoints;
+  const shearFlux = new Float64Array(tablePoints + 1);
+  const pressureFlux = new Float64Array(tablePoints + 1);
   for (let k = 0; k <= tablePoints; k++) {
-    const h = depthLow + ((depthHigh - depthLow) * k) / tablePoints;
-    depths.push(h);
-    shearFlux.push(shearDrivenGrooveFlux(w, h));
-    pressureFlux.push(pressureDrivenGrooveFlux(w, h));
+    const h = depthLow + depthStep * k;
+    shearFlux[k] = shearDrivenGrooveFlux(w, h);
+    pressureFlux[k] = pressureDrivenGrooveFlux(w, h);
   }
-  const shearTable = monotoneCubic(depths, shearFlux);
-  const pressureTable = monotoneCubic(depths, pressureFlux);
+  const ductCoefficients = uniformMonotoneCubics(depthLow, depthStep, [shearFlux, pressureFlux]);
+  const coefficients = new Float64Array(2);
   const availabilityThreshold = 0.05 * frontFill;
   const spillPressure = gamma * spillCurvature;
   const openEnds = input.grooveEnds === 'open';
 
   const fluxWithGradient = (fill: number, gradient: number): number => {
-    const h = d * Math.min(Math.max(fill, frontFill), fullBulgeFill + 0.5);
-    return (tau * shearTable.value(h) - pressureTable.value(h) * (gradient - body)) / mu;
+    ductCoefficients(d * Math.min(Math.max(fill, frontFill), fullBulgeFill + 0.5), coefficients);
+    return (tau * coefficients[0] - coefficients[1] * (gradient - body)) / mu;
   };
 
   const capacity = w * d * dx;
@@ -297,7 +297,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
   const firstStep = Math.min(duration * 1e-4, characteristicSpeed > 0 ? (0.01 * dx) / characteristicSpeed : duration * 1e-4);
   const result = integrateConservationChain(chain, y0, 0, duration, {
     initialStep: Math.max(firstStep, duration * 1e-12),
-    maxStep: duration / 20,
+    maxStep: duration / 5,
     relativeTolerance: input.relativeTolerance ?? 1e-3,
     absoluteTolerance: input.absoluteTolerance ?? 1e-3,
     newtonTolerance: 1e-11,
