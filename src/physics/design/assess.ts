@@ -131,7 +131,7 @@ export function assessDesign(ctx: DesignContext, requirements: AssessmentRequire
   const notes = new Notes().merge(ctx.notes).merge(evaluation.notes);
   let sensitivities: Sensitivities | null = null;
   if (options.sensitivities !== false) {
-    sensitivities = assessSensitivities(ctx, effective, margins(evaluation.mechanisms), overall.limitingMechanism, options.relativeStep ?? 0.02);
+    sensitivities = assessSensitivities(ctx, effective, margins(evaluation.mechanisms), overall.limitingMechanism, options.relativeStep ?? 0.02, evaluation.drainageSettled);
     notes.assume(`Sensitivities: one-sided finite differences of each margin through the whole assessment, relative step ${sensitivities.relativeStep} per knob, reported as Δmargin/Δln(knob).`);
   }
   const o = doc.options ?? {};

@@ -205,7 +205,10 @@ export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 've
 }
 
 /** POST /v1/retention: how much lubricant stays in the grooves, and how fast the rest drains. */
-export function lubricantRetention(ctx: DesignContext, overrides: { method?: SlipMethod; duration?: number } = {}): Answer<Omit<RetentionResult, 'verdict'>> {
+export function lubricantRetention(
+  ctx: DesignContext,
+  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean } = {},
+): Answer<Omit<RetentionResult, 'verdict'>> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const doc = ctx.document;
@@ -243,6 +246,7 @@ export function lubricantRetention(ctx: DesignContext, overrides: { method?: Sli
       ...(texture?.segmentLength === undefined ? {} : { segmentLength: texture.segmentLength }),
       ...(inclination ? { inclination } : {}),
       ...(solubility === undefined ? {} : { solubility: { value: solubility, unit: 'kg/m3' as const } }),
+      ...(overrides.finiteVolumeTimeline === undefined ? {} : { finiteVolumeTimeline: overrides.finiteVolumeTimeline }),
     });
     notes.merge(retention);
     return lift(retention.result);

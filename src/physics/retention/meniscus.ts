@@ -60,16 +60,7 @@ export function capillaryPressureCurve(
  */
 export const COLUMN_INTERVALS = 100;
 
-/**
- * Steady lubricant column of the finite-volume model, by quadrature [derived]:
- * zero net flux everywhere means dp/dx = G(h) + b with G(h) = τ_i Q̂_s(h)/Q̂_p(h) at the
- * local equivalent depth h = f d, so walking upstream from the end meniscus (sag s_end:
- * 0 at an open end, the spill bulge at a closed one) to the receding front (largest sag),
- *   L = ∫ γ κ'(s) ds/|G(h(s)) + b|,   V/(w d) = ∫ f(s) γ κ'(s) ds/|G(h(s)) + b|,
- * with κ(s) = 8s/(w² + 4s²). The column is cut at `maxLength` (the segment).
- * @returns filled length (m) and equivalent full-section length V/(w d) (m).
- */
-export function steadyColumn(input: {
+export interface SteadyColumnInput {
   grooveWidth: number;
   grooveDepth: number;
   interfacialTension: number;
@@ -81,50 +72,79 @@ export function steadyColumn(input: {
   maxLength: number;
   /** Simpson intervals over the sag range (default {@link COLUMN_INTERVALS}). */
   intervals?: number;
-}): { length: number; equivalentLength: number; truncated: boolean } {
+}
+
+export interface SteadyColumn {
+  length: number;
+  equivalentLength: number;
+  truncated: boolean;
+}
+
+/**
+ * Steady lubricant column of the finite-volume model, by quadrature [derived]:
+ * zero net flux everywhere means dp/dx = G(h) + b with G(h) = τ_i Q̂_s(h)/Q̂_p(h) at the
+ * local equivalent depth h = f d, so walking upstream from the end meniscus (sag s_end:
+ * 0 at an open end, the spill bulge at a closed one) to the receding front (largest sag),
+ *   L = ∫ γ κ'(s) ds/|G(h(s)) + b|,   V/(w d) = ∫ f(s) γ κ'(s) ds/|G(h(s)) + b|,
+ * with κ(s) = 8s/(w² + 4s²). The column is cut at `maxLength` (the segment).
+ * @returns filled length (m) and equivalent full-section length V/(w d) (m).
+ */
+export function steadyColumn(input: SteadyColumnInput): SteadyColumn {
+  return steadyColumnProfile(input)(input.maxLength);
+}
+
+/**
+ * The steady column of {@link steadyColumn} for any cut: the integrand is sampled once and each call
+ * `cut(maxLength)` only accumulates the Simpson intervals up to it (what a search over the segment length
+ * needs: the samples do not depend on the cut). Same values as {@link steadyColumn} for each maxLength.
+ */
+export function steadyColumnProfile(input: Omit<SteadyColumnInput, 'maxLength'>): (maxLength: number) => SteadyColumn {
   const { grooveWidth: w, grooveDepth: d, interfacialTension: gamma, interfacialShearStress: tau, bodyForceGradient: body } = input;
   const sagFront = Math.min(sagForCurvature(w, Math.min(input.recedingCurvature, 2 / w)), d);
   const sagEnd = -sagForCurvature(w, Math.min(input.endCurvature, 2 / w));
   const slope = (s: number): number => (8 * (w * w - 4 * s * s)) / (w * w + 4 * s * s) ** 2;
   const fillAt = (s: number): number => 1 - (Math.sign(s) * segmentArea(w, s)) / (w * d);
-  const integrand = (s: number): { dx: number; dv: number } => {
+  const intervals = input.intervals ?? COLUMN_INTERVALS;
+  const step = (sagFront - sagEnd) / intervals;
+  // Integrand samples at the interval ends and midpoints (2·intervals + 1 of them): dx/ds and dv/ds.
+  const dx = new Float64Array(2 * intervals + 1);
+  const dv = new Float64Array(2 * intervals + 1);
+  for (let j = 0; j <= 2 * intervals; j++) {
+    const s = sagEnd + (j / 2) * step;
     const f = fillAt(s);
     const h = Math.max(f, 1e-6) * d;
     const drive = Math.abs((tau * shearDrivenGrooveFlux(w, h)) / pressureDrivenGrooveFlux(w, h) + body);
-    const dx = drive > 0 ? (gamma * slope(s)) / drive : Number.MAX_VALUE;
-    return { dx, dv: f * dx };
-  };
-  const intervals = input.intervals ?? COLUMN_INTERVALS;
-  const step = (sagFront - sagEnd) / intervals;
-  let length = 0;
-  let volume = 0;
-  let left = integrand(sagEnd);
-  for (let k = 0; k < intervals; k++) {
-    const mid = integrand(sagEnd + (k + 0.5) * step);
-    const right = integrand(sagEnd + (k + 1) * step);
-    // Simpson's rule on each sub-interval.
-    const dLength = (step / 6) * (left.dx + 4 * mid.dx + right.dx);
-    const dVolume = (step / 6) * (left.dv + 4 * mid.dv + right.dv);
-    if (length + dLength >= input.maxLength) {
-      // The column ends inside this interval: the share θ of it whose integral of the quadratic through the
-      // three samples (Simpson's own interpolant) makes up the rest of the length, by bisection.
-      const partial = (theta: number, a: number, m: number, b: number): number =>
-        step * theta * (a + (theta * (-3 * a + 4 * m - b)) / 2 + ((theta * theta) * (2 * a - 4 * m + 2 * b)) / 3);
-      const rest = input.maxLength - length;
-      let lo = 0;
-      let hi = 1;
-      for (let iteration = 0; iteration < 60 && hi - lo > 1e-15; iteration++) {
-        const theta = 0.5 * (lo + hi);
-        if (partial(theta, left.dx, mid.dx, right.dx) < rest) lo = theta;
-        else hi = theta;
-      }
-      const theta = 0.5 * (lo + hi);
-      return { length: input.maxLength, equivalentLength: volume + partial(theta, left.dv, mid.dv, right.dv), truncated: true };
-    }
-    length += dLength;
-    volume += dVolume;
-    left = right;
+    dx[j] = drive > 0 ? (gamma * slope(s)) / drive : Number.MAX_VALUE;
+    dv[j] = f * dx[j];
   }
-  return { length, equivalentLength: volume, truncated: false };
+  // The share θ of an interval whose integral of the quadratic through its three samples (Simpson's own
+  // interpolant) is given.
+  const partial = (theta: number, a: number, m: number, b: number): number =>
+    step * theta * (a + (theta * (-3 * a + 4 * m - b)) / 2 + ((theta * theta) * (2 * a - 4 * m + 2 * b)) / 3);
+  return (maxLength: number): SteadyColumn => {
+    let length = 0;
+    let volume = 0;
+    for (let k = 0; k < intervals; k++) {
+      const [l, m, r] = [2 * k, 2 * k + 1, 2 * k + 2];
+      // Simpson's rule on each sub-interval.
+      const dLength = (step / 6) * (dx[l] + 4 * dx[m] + dx[r]);
+      const dVolume = (step / 6) * (dv[l] + 4 * dv[m] + dv[r]);
+      if (length + dLength >= maxLength) {
+        // The column ends inside this interval: the share θ of it that makes up the rest of the length, by bisection.
+        const rest = maxLength - length;
+        let lo = 0;
+        let hi = 1;
+        for (let iteration = 0; iteration < 60 && hi - lo > 1e-15; iteration++) {
+          const theta = 0.5 * (lo + hi);
+          if (partial(theta, dx[l], dx[m], dx[r]) < rest) lo = theta;
+          else hi = theta;
+        }
+        const theta = 0.5 * (lo + hi);
+        return { length: maxLength, equivalentLength: volume + partial(theta, dv[l], dv[m], dv[r]), truncated: true };
+      }
+      length += dLength;
+      volume += dVolume;
+    }
+    return { length, equivalentLength: volume, truncated: false };
+  };
 }
-

@@ -66,7 +66,7 @@ import { warnNotWetting, type ContactAngles, type WettingState } from '../wettin
 import { dissolutionLifetime, NO_DISSOLUTION, type DissolutionEstimate, type Solubility } from './dissolution.js';
 import { holdLengths, type CurvatureLimit } from './holding.js';
 import type { TimelinePoint } from './drainage.js';
-import { steadyColumn } from './meniscus.js';
+import { steadyColumnProfile } from './meniscus.js';
 import { drainageTimeline, explainTimelineEnd } from './timeline.js';
 
 const DEG = Math.PI / 180;
@@ -94,6 +94,12 @@ export interface RetentionInput {
   targetFill?: number;
   /** Furmidge shape factor k (default 1, module comment). */
   pinningShapeFactor?: number;
+  /**
+   * Solve the finite-volume timeline where capillary back-pressure binds (default true). false takes the
+   * lumped plug's timeline instead: for a caller that already knows the drainage has settled long before the
+   * duration and reads only the steady share (an assessment's sensitivity steps).
+   */
+  finiteVolumeTimeline?: boolean;
 }
 
 export type RetentionMechanism = 'capillary-back-pressure' | 'contact-line-pinning' | 'dissolution' | 'none';
@@ -284,18 +290,20 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   // Sag-corrected steady column of the drainage model (the timeline's end state), for the retained volume.
   const spillCurvature = (2 * Math.sin(Math.min(90, angles.advancing) * DEG)) / w;
   const endCurvature = input.grooveEnds === 'closed' || segments > 1 ? spillCurvature : 0;
-  const columnFor = (maxLength: number) =>
-    steadyColumn({
-      grooveWidth: w,
-      grooveDepth: d,
-      interfacialTension: gamma,
-      interfacialShearStress: tau,
-      bodyForceGradient: body,
-      recedingCurvature: curvature.curvature,
-      endCurvature,
-      maxLength,
-    });
-  const column = curvature.curvature > 0 ? columnFor(segmentLength) : null;
+  // One sampling of the column's integrand serves every cut (the segment, and the barrier-spacing search below).
+  const columnFor =
+    curvature.curvature > 0
+      ? steadyColumnProfile({
+          grooveWidth: w,
+          grooveDepth: d,
+          interfacialTension: gamma,
+          interfacialShearStress: tau,
+          bodyForceGradient: body,
+          recedingCurvature: curvature.curvature,
+          endCurvature,
+        })
+      : null;
+  const column = columnFor ? columnFor(segmentLength) : null;
   const capillaryBinds = binding === 'capillary-back-pressure';
   const retainedFraction =
     capillaryBinds && column ? Math.min(initialFill, column.equivalentLength / segmentLength) : Math.min(initialFill, retainedLength / segmentLength);
@@ -310,7 +318,8 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   }
 
   // Timeline.
-  const useFiniteVolume = (binding === 'capillary-back-pressure' || binding === 'dissolution') && curvature.curvature > 0 && holds.capillary >= holds.pinning;
+  const useFiniteVolume =
+    input.finiteVolumeTimeline !== false && (binding === 'capillary-back-pressure' || binding === 'dissolution') && curvature.curvature > 0 && holds.capillary >= holds.pinning;
   const { timeline, timelineModel, finalRetainedFraction, timeTo90, conservationError } = drainageTimeline(
     {
       grooveWidth: w,
@@ -336,7 +345,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
 
   // Recommendations: barrier spacing and geometry direction.
   let maxSegmentLength = retainedLength / targetFill;
-  if (capillaryBinds && column) {
+  if (capillaryBinds && columnFor) {
     // Longest segment whose steady column keeps the target share of its volume: the share falls with the length.
     const share = (length: number): number => Math.min(1, columnFor(length).equivalentLength / length);
     let lo = 0;

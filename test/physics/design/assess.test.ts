@@ -97,6 +97,31 @@ describe('margins only (the sensitivity steps and assessmentMargins)', () => {
     if (name === 'turbulent, wavy') expect(full.couplings.waveRegime).toBe('wavy');
     expect(lean.couplings.creditedDragReductionAtServiceTime).toBe(full.couplings.creditedDragReductionAtServiceTime);
   });
+
+  it('a drainage settled long before the service time is read as the steady column, and a step told so skips the finite-volume timeline with the same margins (witness: the full evaluation of the stepped design)', () => {
+    const requirements = effectiveRequirements({ serviceTime: 7200 }, {});
+    const base = evaluateMechanisms(new DesignContext(laminar, catalogue), requirements);
+    // The laminar demo drains to its steady column within seconds of a two-hour service time.
+    expect(base.drainageSettled).toBe(true);
+    expect(base.notes.assumptions.some((a) => a.startsWith('Retention at the service time: the drainage settles'))).toBe(true);
+    // A sensitivity-sized step (2 % wider grooves), evaluated in full and as a step told the base settled.
+    const stepped: DesignDocument = { ...laminar, texture: { ...laminar.texture!, grooveWidth: 30e-6 * 1.02 } };
+    const full = evaluateMechanisms(new DesignContext(stepped, catalogue), requirements);
+    const step = evaluateMechanisms(new DesignContext(stepped, catalogue), requirements, { marginsOnly: true, drainageSettled: true });
+    expect(full.drainageSettled).toBe(true);
+    for (const name of MECHANISMS) {
+      const a = full.mechanisms[name];
+      const b = step.mechanisms[name];
+      expect(b.status, name).toBe(a.status);
+      if (a.status === 'assessed' && b.status === 'assessed') expect(b.verdict.margin, name).toBe(a.verdict.margin);
+    }
+    // The step did not solve the timeline: it carries the lumped plug's, not the finite-volume one.
+    expect(step.notes.models).toContain('retention.drainage-lumped-plug');
+    expect(full.notes.models).toContain('retention.drainage-finite-volume');
+    // A service time within the drainage (a tenth of a second) is not settled: the timeline is read.
+    const short = evaluateMechanisms(new DesignContext(laminar, catalogue), effectiveRequirements({ serviceTime: 0.1 }, {}));
+    expect(short.drainageSettled).toBe(false);
+  });
 });
 
 describe('warnings across the assessment’s models', () => {
