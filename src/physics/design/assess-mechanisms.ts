@@ -17,7 +17,7 @@ import type { SlipMethod } from '../slip/slip.js';
 import type { WaveRegime } from '../waves/criteria.js';
 import type { EffectiveRequirements } from './assess-requirements.js';
 import type { DesignContext } from './context.js';
-import { heatTransfer, interfaceWaveMargin, interfaceWaves, lubricantRetention, slipAndDrag, surfactantSensitivity, wettingState, type Answer } from './questions.js';
+import { heatTransfer, interfaceWaveMargin, interfaceWaveVerdict, lubricantRetention, slipAndDrag, surfactantSensitivity, wettingState, type Answer } from './questions.js';
 
 export type MechanismName = 'wetting' | 'retention' | 'waves' | 'slipAndDrag' | 'surfactant' | 'heat';
 export const MECHANISMS: readonly MechanismName[] = ['wetting', 'retention', 'waves', 'slipAndDrag', 'surfactant', 'heat'];
@@ -171,9 +171,9 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   // Waves, and the credit they leave to the drag reduction.
   const waves = attempt(() => {
     if (options.marginsOnly) return { ...interfaceWaveMargin(ctx), governing: 'not evaluated (margins only)' };
-    const full = interfaceWaves(ctx);
-    gather(full);
-    return { regime: full.result.regime, margin: (full.verdict as Verdict).margin, governing: full.result.governingCriterion };
+    const verdict = interfaceWaveVerdict(ctx);
+    gather(verdict);
+    return { regime: verdict.result.regime, margin: verdict.result.margin, governing: verdict.result.governingCriterion };
   });
   let waveCredit = 1;
   let waveRegime: WaveRegime | null = null;

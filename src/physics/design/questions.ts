@@ -23,7 +23,7 @@ import type { SlipMethod, SlipResult } from '../slip/slip.js';
 import { evaluateSurfactant, type SurfactantResult } from '../surfactant/surfactant.js';
 import type { WaveRegime } from '../waves/criteria.js';
 import type { WavesResult } from '../waves/result.js';
-import { evaluateWaves, waveMarginAtDesign, waveRegimeAtDesign, waveRoughnessWarning, type WavesInput } from '../waves/waves.js';
+import { evaluateWaves, waveMarginAtDesign, waveRegimeAtDesign, waveRoughnessWarning, wavesVerdict, type WavesInput } from '../waves/waves.js';
 import { evaluateWetting, type WettingResult } from '../wetting/wetting.js';
 import type { DesignContext } from './context.js';
 import type { Question } from './document.js';
@@ -183,6 +183,19 @@ function wavesInputOf(ctx: DesignContext, notes: Notes): WavesInput {
  */
 export function interfaceWaveMargin(ctx: DesignContext): { regime: WaveRegime; margin: number } {
   return waveMarginAtDesign(wavesInputOf(ctx, new Notes()));
+}
+
+/**
+ * The waves verdict (regime, margin, governing criterion) with the notes of {@link interfaceWaves}, without the
+ * growth curve, the design limits and the map, none of which an assessment reads.
+ */
+export function interfaceWaveVerdict(ctx: DesignContext): Answer<{ regime: WaveRegime; margin: number; governingCriterion: string }> {
+  const notes = new Notes();
+  return answer(ctx, notes, () => {
+    const waves = wavesVerdict(wavesInputOf(ctx, notes));
+    notes.merge(waves);
+    return { result: waves.result };
+  });
 }
 
 /** POST /v1/waves: do capillary waves on the interface stay calm? */

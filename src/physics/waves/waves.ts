@@ -266,19 +266,17 @@ export function waveMarginAtDesign(input: WavesInput): { regime: WaveRegime; mar
  * @throws DomainError when interfacialTension is absent or a length,
  *   density, viscosity or the friction velocity is not positive and finite.
  */
-export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
-  const notes = new Notes();
-  const { scenario, gamma, w, d, lubricantDensity, workingDensity, workingViscosity, uTau, normalGravity, flow, laminar, kinematicViscosity, fixed, at } =
-    criteriaAtDesign(input, notes);
-  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
-  let resolution = Math.round(input.mapResolution ?? DEFAULT_MAP_RESOLUTION);
-  if (!Number.isFinite(resolution) || resolution < 2 || resolution > 200) {
-    const clamped = Number.isFinite(resolution) ? Math.min(200, Math.max(2, resolution)) : DEFAULT_MAP_RESOLUTION;
-    notes.warn('map-resolution-clamped', `mapResolution ${String(input.mapResolution)} outside 2–200; using ${clamped}.`, 'info');
-    resolution = clamped;
-  }
-
+/**
+ * The waves verdict at the design point with every note it carries (models, sources, assumptions and the
+ * design-point warnings: laminar flow, oblique grooves, static instability, critical layer, Rayleigh–Taylor,
+ * depinning, roughness): what {@link evaluateWaves} and {@link wavesVerdict} share. Leaves out the growth-rate
+ * curve, the design limits and the regime map, which cost most of a full evaluation.
+ */
+function wavesAtDesign(input: WavesInput, notes: Notes) {
+  const criteria = criteriaAtDesign(input, notes);
+  const { scenario, gamma, lubricantDensity, workingDensity, uTau, normalGravity, flow, laminar, kinematicViscosity, at } = criteria;
   const layers = at.layers;
+  const slowest = slowestWaveSpeed(layers);
 
   notes
     .model('waves.inertial-capillary-scaling')
@@ -310,22 +308,6 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
     );
   }
 
-  // --- Kelvin–Helmholtz outputs -------------------------------------------------
-  const m = Math.PI / w;
-  const growthRateCurve: GrowthRatePoint[] = [];
-  const curvePoints = 121;
-  for (let i = 0; i < curvePoints; i++) {
-    // k w/π from 0.02 to 20, log-spaced: both sides of k* = √2 π/w.
-    const k = m * 0.02 * 1000 ** (i / (curvePoints - 1));
-    growthRateCurve.push({
-      wavenumber: k,
-      growthRate: interfaceGrowthRate(layers, k),
-      neutralVelocityDifference: neutralVelocityDifference(layers, k),
-    });
-  }
-  const fastest = fastestGrowingMode(layers);
-  const slowest = slowestWaveSpeed(layers);
-  const closedForm = confinedCriticalVelocityDifference(lubricantDensity, workingDensity, gamma, w);
   const slipVelocity = layers.wallSideVelocity;
   if (at.critical.value === 0) {
     notes.warn(
@@ -375,6 +357,63 @@ export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const margin = marginOf(at.ratios);
   const roughness = waveRoughnessWarning(regime);
   if (roughness) notes.warn(roughness.code, roughness.message, roughness.severity);
+
+  return {
+    ...criteria,
+    slowest,
+    slipVelocity,
+    slowestPlus,
+    criticalHeightPlus,
+    largest,
+    waveSpeedRelativeToWall,
+    withinFlow,
+    criticalLayerExists,
+    wallShearStress,
+    rayleighTaylorMaxWidth,
+    regime,
+    margin,
+  };
+}
+
+/**
+ * The waves verdict alone (regime, margin, governing criterion) with the notes of {@link evaluateWaves}, without
+ * the growth-rate curve, the design limits and the regime map: for an assessment, which reads only the verdict.
+ * Same inputs, criteria and validity as {@link evaluateWaves}.
+ */
+export function wavesVerdict(input: WavesInput): Outcome<{ regime: WaveRegime; margin: number; governingCriterion: ReturnType<typeof governing> }> {
+  const notes = new Notes();
+  const { regime, margin, at } = wavesAtDesign(input, notes);
+  return outcome({ regime, margin, governingCriterion: governing(at.ratios) }, notes);
+}
+
+export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
+  const notes = new Notes();
+  const core = wavesAtDesign(input, notes);
+  const { gamma, w, d, lubricantDensity, workingDensity, workingViscosity, uTau, normalGravity, flow, laminar, kinematicViscosity, fixed, at, regime, margin } = core;
+  const { slowest, slipVelocity, slowestPlus, criticalHeightPlus, largest, waveSpeedRelativeToWall, withinFlow, criticalLayerExists, wallShearStress, rayleighTaylorMaxWidth } = core;
+  const design: DesignPoint = { grooveWidth: w, interfacialTension: gamma, frictionVelocity: uTau };
+  let resolution = Math.round(input.mapResolution ?? DEFAULT_MAP_RESOLUTION);
+  if (!Number.isFinite(resolution) || resolution < 2 || resolution > 200) {
+    const clamped = Number.isFinite(resolution) ? Math.min(200, Math.max(2, resolution)) : DEFAULT_MAP_RESOLUTION;
+    notes.warn('map-resolution-clamped', `mapResolution ${String(input.mapResolution)} outside 2–200; using ${clamped}.`, 'info');
+    resolution = clamped;
+  }
+  const layers = at.layers;
+  // --- Kelvin–Helmholtz outputs -------------------------------------------------
+  const m = Math.PI / w;
+  const growthRateCurve: GrowthRatePoint[] = [];
+  const curvePoints = 121;
+  for (let i = 0; i < curvePoints; i++) {
+    // k w/π from 0.02 to 20, log-spaced: both sides of k* = √2 π/w.
+    const k = m * 0.02 * 1000 ** (i / (curvePoints - 1));
+    growthRateCurve.push({
+      wavenumber: k,
+      growthRate: interfaceGrowthRate(layers, k),
+      neutralVelocityDifference: neutralVelocityDifference(layers, k),
+    });
+  }
+  const fastest = fastestGrowingMode(layers);
+  const closedForm = confinedCriticalVelocityDifference(lubricantDensity, workingDensity, gamma, w);
 
   const limits = designLimits(fixed, design);
   if (limits.maxGrooveWidth === null || limits.minInterfacialTension === null || limits.maxFrictionVelocity === null) {

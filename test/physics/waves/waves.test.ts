@@ -5,7 +5,7 @@ import { STANDARD_GRAVITY } from '../../../src/core/constants.js';
 import { evaluateFlow } from '../../../src/physics/flow/flow.js';
 import type { FlowState, Scenario } from '../../../src/physics/scenario.js';
 import type { FluidState } from '../../../src/core/fluid.js';
-import { evaluateWaves, waveRoughnessWarning, WAVY_INTERFACE_WARNING_CODE, type WavesInput } from '../../../src/physics/waves/waves.js';
+import { evaluateWaves, waveRoughnessWarning, wavesVerdict, WAVY_INTERFACE_WARNING_CODE, type WavesInput } from '../../../src/physics/waves/waves.js';
 import type { WaveRegime } from '../../../src/physics/waves/criteria.js';
 import { velocityPlusAtWallDistance } from '../../../src/physics/flow/wall-profile.js';
 
@@ -349,5 +349,26 @@ describe('evaluateWaves: design outputs', () => {
     const clamped = evaluateWaves({ scenario: design(), mapResolution: 1 });
     expect(clamped.result.map.regimes.length).toBe(2);
     expect(clamped.warnings.map((w) => w.code)).toContain('map-resolution-clamped');
+  });
+});
+
+describe('wavesVerdict: the verdict alone, for the assessment', () => {
+  // Witness: the full evaluation of the same input (same criteria, same notes apart from the design-limit search).
+  const dense = fluid('perfluoropolyether (demo)', 1900, 0.1);
+  const cases: [string, WavesInput, WaveRegime][] = [
+    ['demo input', JSON.parse(readFileSync(new URL('./waves-demo-input.json', import.meta.url), 'utf8')) as WavesInput, 'calm'],
+    ['wide grooves, low tension (wavy)', { scenario: design({ grooveWidth: 300e-6, interfacialTension: 1e-3 }), mapResolution: 4 }, 'wavy'],
+    ['denser lubricant above (Rayleigh–Taylor)', { scenario: design({ grooveWidth: 10e-3, interfacialTension: 0.05, lubricant: dense, flow: wallShearFlow(1e-4) }), gravity: { inclination: 0, facing: 'down' }, mapResolution: 4 }, 'wavy'],
+  ];
+  it.each(cases)('%s: regime, margin, governing criterion and warnings equal evaluateWaves’s', (_name, input, regime) => {
+    const full = evaluateWaves(input);
+    const lean = wavesVerdict(input);
+    expect(full.result.regime).toBe(regime);
+    expect(lean.result.regime).toBe(full.result.regime);
+    expect(lean.result.margin).toBe(full.result.verdict.margin);
+    expect(lean.result.governingCriterion).toBe(full.result.governingCriterion);
+    const skipped = new Set(['design-limit-not-found', 'map-resolution-clamped']);
+    expect(lean.warnings.map((w) => w.code)).toEqual(full.warnings.map((w) => w.code).filter((c) => !skipped.has(c)));
+    expect(lean.references.map((r) => r.key)).toEqual(full.references.map((r) => r.key));
   });
 });
