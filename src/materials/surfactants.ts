@@ -68,6 +68,7 @@ const R = {
   chang1995: CHANG_FRANSES_1995,
   prosser2001: PROSSER_FRANSES_2001,
   landel2020: REFERENCES.landel2020,
+  wilkeChang1955: REFERENCES.wilkeChang1955,
   surfpro2025: SURFPRO_2025,
   rosen2012: ROSEN_KUNJAPPU_2012,
   atomicWeights: IUPAC_ATOMIC_WEIGHTS_1995,
@@ -75,9 +76,9 @@ const R = {
 
 /*
  * Critical micelle concentrations, maximum surface excesses and surface pressures at the CMC are read in the
- * SurfPro data file (surfpro-2025), at 25 °C, with the publications its row names. The two values of the
- * octylphenol ethoxylate still recalled (bulk diffusivity, and before this the CMC, Γ_m and K) were searched for
- * without a readable table: the study the set is usually traced to (Lin, McKeigue & Maldarelli 1990, AIChE J.:
+ * SurfPro data file (surfpro-2025), at 25 °C, with the publications its row names. The octylphenol ethoxylate's
+ * measured diffusivity, CMC, Γ_m and K (recalled before; the diffusivity is now a Wilke–Chang estimate) were
+ * searched for without a readable table: the study the set is usually traced to (Lin, McKeigue & Maldarelli 1990, AIChE J.:
  * not found), Chatterjee et al. (2001, J. Surface Sci. Technol. 17, 1: abstract only) and abstracts of
  * conductivity and fluorescence studies. docs/citations-ledger.md has the log.
  */
@@ -109,6 +110,20 @@ const OPE_PRESSURE_AT_CMC = mean((h) => h.surfacePressureAtCmc);
  * K = (exp(Π_cmc/(R T Γ_m)) − 1)/CMC at 298.15 K: 2.07e3 m³/mol (the homologues alone give 1.66e3 and 2.67e3).
  */
 const OPE_LANGMUIR_CONSTANT = Math.expm1(OPE_PRESSURE_AT_CMC / (GAS_CONSTANT * 298.15 * OPE_MAXIMUM_SURFACE_EXCESS)) / OPE_CMC;
+
+/**
+ * Bulk (monomer) diffusivity, m²/s, estimated (ours) by the Wilke–Chang (1955) correlation
+ * D = 7.4×10⁻⁸ (φ M_w)^½ T/(μ_w V_b^0.6) cm²/s with φ = 2.6, M_w = 18.015 g/mol, T = 298.15 K and
+ * μ_w = 0.8900 mPa·s (the catalogue's water at 25 °C, IAPWS R12-08), and the Le Bas molar volume of the mean
+ * molecule C₈H₁₇C₆H₄O(C₂H₄O)₉.₅H = C₃₃H₆₀O₁₀.₅ from the atomic increments of a textbook table read in a public
+ * copy ("Table 24.5, Atomic volume increments for estimation of molecular volumes at the normal boiling point",
+ * Scribd document 373545244, the book not named there): C 14.8, H 3.7, oxygen in higher ethers 11.0 (the aryl
+ * ether and 8.5 ethylene-oxide oxygens: 9.5), benzene ring −15; the terminal hydroxyl oxygen takes the table's
+ * "oxygen, except as noted" entry, whose digits are garbled in the copy's text layer ("14"; 7.4 in the usual
+ * form of the table): 7.4 is used, and 14 would lower D by 0.5 %. V_b = 807.3 cm³/mol, D = 3.06e-10 m²/s.
+ */
+const OPE_LE_BAS_VOLUME = 33 * 14.8 + 60 * 3.7 + 9.5 * 11.0 + 7.4 - 15;
+const OPE_BULK_DIFFUSIVITY = (1e-4 * 7.4e-8 * Math.sqrt(2.6 * 18.015) * 298.15) / (0.89 * OPE_LE_BAS_VOLUME ** 0.6);
 
 const OPE_HOMOLOGUES_NOTE =
   'mean of the pure homologues with 9 and 10 ethylene-oxide units at 25 °C as tabulated in SurfPro; a ' +
@@ -164,9 +179,11 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
     description:
       'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Its CMC, Γ_m and Langmuir constant are those of the pure homologues with 9 and 10 ethylene-oxide units, averaged (surfpro-2025). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
     bulkDiffusivity: {
-      value: 2.6e-10,
-      source: R.chang1995,
-      note: 'from memory (searched without a readable table: see the comment above the catalogue)',
+      value: OPE_BULK_DIFFUSIVITY,
+      source: R.wilkeChang1955,
+      note:
+        'estimated by the Wilke–Chang correlation with the Le Bas volume 807.3 cm³/mol of the mean molecule at 25 °C ' +
+        '(no measured value could be read; a recalled 2.6e-10 m²/s was replaced)',
     },
     criticalMicelleConcentration: {
       value: OPE_CMC,

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES, SURFACTANTS, getSurfactant, resolveSurfactant, surfactantListing } from '../../src/materials/surfactants.js';
 import { GAS_CONSTANT } from '../../src/core/constants.js';
+import { getFluid } from '../../src/materials/catalogue.js';
+import { wilkeChangDiffusivity } from '../../src/physics/retention/dissolution.js';
 import { DomainError } from '../../src/core/errors.js';
 
 describe('surfactant catalogue', () => {
@@ -32,6 +34,19 @@ describe('surfactant catalogue', () => {
     expect([n9.ethyleneOxideUnits, n10.ethyleneOxideUnits]).toEqual([9, 10]);
     expect(s?.criticalMicelleConcentration?.value).toBeGreaterThan(1000 * 10 ** -n9.pCmc);
     expect(s?.criticalMicelleConcentration?.value).toBeLessThan(1000 * 10 ** -n10.pCmc);
+  });
+  it('octylphenol ethoxylate diffusivity: the Wilke–Chang (1955) estimate with the Le Bas volume 807.3 cm³/mol, slower than the SDS monomer (7e-10 m²/s, Chang & Franses 1995)', () => {
+    const d = getSurfactant('triton-x-100')?.bulkDiffusivity;
+    // Le Bas increments of the table read (C 14.8, H 3.7, ether O 11.0, benzene ring −15; hydroxyl O 7.4) for C33H60O10.5.
+    const volume = (33 * 14.8 + 60 * 3.7 + 9.5 * 11.0 + 7.4 - 15) * 1e-6;
+    expect(volume).toBeCloseTo(807.3e-6, 12);
+    // The physics layer's Wilke–Chang with the catalogue's water viscosity at 25 °C (IAPWS R12-08: 0.8900 mPa·s).
+    const water = getFluid('water')!.properties.viscosity!.at(298.15);
+    expect(water).toBeCloseTo(0.89e-3, 6);
+    expect(d?.value).toBeCloseTo(wilkeChangDiffusivity(298.15, water, 0.018015, volume), 13);
+    expect(d?.value).toBeCloseTo(3.06e-10, 12);
+    expect(d?.source.key).toBe('wilkeChang1955');
+    expect(d?.value).toBeLessThan(getSurfactant('sds')!.bulkDiffusivity!.value);
   });
   it('octylphenol ethoxylate Langmuir constant: the Langmuir–Szyszkowski equation through the tabulated Π_cmc = 37.75 mN/m (mean of 38.5 and 37 mN/m, SurfPro after Rosen & Kunjappu 2012) at the CMC', () => {
     const s = resolveSurfactant({ id: 'triton-x-100', interfaceType: 'air-water' });
