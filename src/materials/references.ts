@@ -297,15 +297,27 @@ export const PROSSER_FRANSES_2001: Reference = {
   doi: '10.1016/S0927-7757(00)00706-8',
 };
 
-export const MUKERJEE_MYSELS_1971: Reference = {
-  key: 'mukerjee1971',
-  citation:
-    'Mukerjee, P. & Mysels, K. J. (1971). Critical Micelle Concentrations of Aqueous Surfactant Systems. NSRDS-NBS 36, U.S. National Bureau of Standards, Washington DC.',
-};
-
 export const ROSEN_KUNJAPPU_2012: Reference = {
   key: 'rosen2012',
-  citation: 'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ.',
+  citation:
+    'Rosen, M. J. & Kunjappu, J. T. (2012). Surfactants and Interfacial Phenomena, 4th ed. Wiley, Hoboken NJ ' +
+    '(DOI and ISBN 978-1-118-22892-0 as recorded in the SurfPro bibliography, surfpro-2025).',
+  doi: '10.1002/9781118228920',
+};
+
+/**
+ * A curated surfactant database read as a data file: the row of each surfactant names the publications its values
+ * come from, and the catalogue note repeats them.
+ */
+export const SURFPRO_2025: Reference = {
+  key: 'surfpro-2025',
+  citation:
+    'Hödl, S. L., Hermans, L., Dankloff, P. F. J., Piruska, A., Huck, W. T. S. & Robinson, W. E. (2025). SurfPro — ' +
+    'a curated database and predictive model of experimental properties of surfactants. Digital Discovery 4(5), ' +
+    '1176–1187; values read in its data file data/surfpro_literature.csv (SurfProV2, public repository ' +
+    'BigChemistry-RobotLab/SurfPro, commit eb9a1ac), which gives for each surfactant the critical micelle ' +
+    'concentration, the maximum surface excess Γ_max and the surface pressure at the CMC, with the temperature ' +
+    'and the DOI of the publication each value was taken from.',
 };
 
 export const IUPAC_ATOMIC_WEIGHTS_1995: Reference = {

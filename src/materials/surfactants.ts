@@ -18,7 +18,8 @@ import type { Warning } from '../core/notes.js';
 import { REFERENCES, type Reference } from '../core/references.js';
 import { userSurfactant, userSurfactants, type CatalogueOrigin } from './user-catalogue.js';
 import { RECALLED_TAG } from './records.js';
-import { CHANG_FRANSES_1995, IUPAC_ATOMIC_WEIGHTS_1995, MUKERJEE_MYSELS_1971, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012 } from './references.js';
+import { GAS_CONSTANT } from '../core/constants.js';
+import { CHANG_FRANSES_1995, IUPAC_ATOMIC_WEIGHTS_1995, PROSSER_FRANSES_2001, ROSEN_KUNJAPPU_2012, SURFPRO_2025 } from './references.js';
 
 
 
@@ -67,22 +68,66 @@ const R = {
   chang1995: CHANG_FRANSES_1995,
   prosser2001: PROSSER_FRANSES_2001,
   landel2020: REFERENCES.landel2020,
-  mukerjee1971: MUKERJEE_MYSELS_1971,
+  wilkeChang1955: REFERENCES.wilkeChang1955,
+  surfpro2025: SURFPRO_2025,
   rosen2012: ROSEN_KUNJAPPU_2012,
   atomicWeights: IUPAC_ATOMIC_WEIGHTS_1995,
 };
 
 /*
- * Values whose note carries the recalled tag (the SDS critical micelle concentration; the octylphenol ethoxylate
- * diffusivity, critical micelle concentration, maximum surface excess and Langmuir constant) were searched for
- * again without a readable table: NSRDS-NBS 36 (title page and abstract only), the study the octylphenol
- * ethoxylate set is usually traced to (Lin, McKeigue & Maldarelli 1990, AIChE J.: an unconfirmed lead, not
- * found), Chatterjee et al. (2001, J. Surface Sci. Technol. 17, 1: abstract only, no values) and abstracts of
- * conductivity and fluorescence studies. Corroboration, not confirmation, for SDS: an abstract gives 8 mM
- * (pyrene fluorescence), and a two-line fit to the SDS conductivity data that Al-Soufi, Piñeiro &
- * Novo publish with their concentration model (J. Colloid Interface Sci. 370 (2012) 102) breaks at 8.22 mM
- * (computed while writing; the data set's temperature is not stated beside it). docs/citations-ledger.md has the log.
+ * Critical micelle concentrations, maximum surface excesses and surface pressures at the CMC are read in the
+ * SurfPro data file (surfpro-2025), at 25 °C, with the publications its row names. The octylphenol ethoxylate's
+ * measured diffusivity, CMC, Γ_m and K (recalled before; the diffusivity is now a Wilke–Chang estimate) were
+ * searched for without a readable table: the study the set is usually traced to (Lin, McKeigue & Maldarelli 1990, AIChE J.:
+ * not found), Chatterjee et al. (2001, J. Surface Sci. Technol. 17, 1: abstract only) and abstracts of
+ * conductivity and fluorescence studies. docs/citations-ledger.md has the log.
  */
+
+/**
+ * The two p-tert-octylphenol ethoxylate homologues of SurfPro (surfpro-2025) that bracket the mean chain of the
+ * catalogue entry, 9 and 10 ethylene-oxide units, at 25 °C: pCMC = −log₁₀(CMC/(mol/L)) from Katritzky et al.
+ * (2007, J. Chem. Inf. Model. 47, 782; doi 10.1021/ci600462d) after Huibers et al. (1996, Langmuir 12, 1462;
+ * doi 10.1021/la950581j); Γ_max and the surface pressure at the CMC, Π_cmc, from Rosen & Kunjappu (2012),
+ * chapter doi 10.1002/9781118228920.ch5.
+ */
+export const OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES = [
+  { ethyleneOxideUnits: 9, pCmc: 3.523, maximumSurfaceExcess: 2.5e-6, surfacePressureAtCmc: 38.5e-3 },
+  { ethyleneOxideUnits: 10, pCmc: 3.481, maximumSurfaceExcess: 2.2e-6, surfacePressureAtCmc: 37e-3 },
+] as const;
+
+const mean = (f: (h: (typeof OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES)[number]) => number): number =>
+  OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES.reduce((sum, h) => sum + f(h), 0) / OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES.length;
+
+/** Mean of the homologues' CMCs, mol/m³ (1 mol/L = 1000 mol/m³): 0.29992 and 0.33037 give 0.31514. */
+const OPE_CMC = mean((h) => 1000 * 10 ** -h.pCmc);
+/** Mean Γ_max, mol/m²: 2.35e-6. */
+const OPE_MAXIMUM_SURFACE_EXCESS = mean((h) => h.maximumSurfaceExcess);
+/** Mean Π_cmc, N/m: 37.75 mN/m. */
+const OPE_PRESSURE_AT_CMC = mean((h) => h.surfacePressureAtCmc);
+/**
+ * Langmuir constant K, m³/mol, our derivation: the Langmuir–Szyszkowski equation of state with n = 1,
+ * Π = R T Γ_m ln(1 + K c), made to pass through the tabulated surface pressure at the CMC,
+ * K = (exp(Π_cmc/(R T Γ_m)) − 1)/CMC at 298.15 K: 2.07e3 m³/mol (the homologues alone give 1.66e3 and 2.67e3).
+ */
+const OPE_LANGMUIR_CONSTANT = Math.expm1(OPE_PRESSURE_AT_CMC / (GAS_CONSTANT * 298.15 * OPE_MAXIMUM_SURFACE_EXCESS)) / OPE_CMC;
+
+/**
+ * Bulk (monomer) diffusivity, m²/s, estimated (ours) by the Wilke–Chang (1955) correlation
+ * D = 7.4×10⁻⁸ (φ M_w)^½ T/(μ_w V_b^0.6) cm²/s with φ = 2.6, M_w = 18.015 g/mol, T = 298.15 K and
+ * μ_w = 0.8900 mPa·s (the catalogue's water at 25 °C, IAPWS R12-08), and the Le Bas molar volume of the mean
+ * molecule C₈H₁₇C₆H₄O(C₂H₄O)₉.₅H = C₃₃H₆₀O₁₀.₅ from the atomic increments of a textbook table read in a public
+ * copy ("Table 24.5, Atomic volume increments for estimation of molecular volumes at the normal boiling point",
+ * Scribd document 373545244, the book not named there): C 14.8, H 3.7, oxygen in higher ethers 11.0 (the aryl
+ * ether and 8.5 ethylene-oxide oxygens: 9.5), benzene ring −15; the terminal hydroxyl oxygen takes the table's
+ * "oxygen, except as noted" entry, whose digits are garbled in the copy's text layer ("14"; 7.4 in the usual
+ * form of the table): 7.4 is used, and 14 would lower D by 0.5 %. V_b = 807.3 cm³/mol, D = 3.06e-10 m²/s.
+ */
+const OPE_LE_BAS_VOLUME = 33 * 14.8 + 60 * 3.7 + 9.5 * 11.0 + 7.4 - 15;
+const OPE_BULK_DIFFUSIVITY = (1e-4 * 7.4e-8 * Math.sqrt(2.6 * 18.015) * 298.15) / (0.89 * OPE_LE_BAS_VOLUME ** 0.6);
+
+const OPE_HOMOLOGUES_NOTE =
+  'mean of the pure homologues with 9 and 10 ethylene-oxide units at 25 °C as tabulated in SurfPro; a ' +
+  'polydisperse commercial product can differ from the pure homologues (measure it where it matters)';
 export const SURFACTANTS: readonly CatalogueSurfactant[] = [
   {
     id: 'sds',
@@ -96,9 +141,12 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
       note: 'value used by Landel et al. (2020) citing Chang & Franses (1995); not re-read in the review itself',
     },
     criticalMicelleConcentration: {
-      value: 8.2,
-      source: R.mukerjee1971,
-      note: 'about 8.2 mM at 25 °C without added salt; from memory (the compilation lists values near 8.1–8.3 mM)',
+      value: 8.1,
+      source: R.surfpro2025,
+      note:
+        'CMC 0.0081 mol/L at 25 °C without added salt, the SurfPro row, which names Lin & Marszall (1976, J. Colloid ' +
+        'Interface Sci. 57, 85; doi 10.1016/0021-9797(76)90178-8), Qin et al. (2021, J. Phys. Chem. B 125, 10610; ' +
+        'doi 10.1021/acs.jpcb.1c05264) and Katritzky et al. (2007; doi 10.1021/ci600462d) as its sources',
     },
     molarMass: { value: 0.28838, source: R.atomicWeights, note: 'C12H25NaO4S: 288.38 g/mol' },
     interfaces: {
@@ -129,9 +177,19 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
     name: 'octylphenol ethoxylate (about 9.5 ethylene-oxide units)',
     kind: 'nonionic',
     description:
-      'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
-    bulkDiffusivity: { value: 2.6e-10, source: R.chang1995, note: 'from memory' },
-    criticalMicelleConcentration: { value: 0.24, source: R.mukerjee1971, note: 'about 0.2–0.3 mM at 25 °C; from memory' },
+      'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Its CMC, Γ_m and Langmuir constant are those of the pure homologues with 9 and 10 ethylene-oxide units, averaged (surfpro-2025). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
+    bulkDiffusivity: {
+      value: OPE_BULK_DIFFUSIVITY,
+      source: R.wilkeChang1955,
+      note:
+        'estimated by the Wilke–Chang correlation with the Le Bas volume 807.3 cm³/mol of the mean molecule at 25 °C ' +
+        '(no measured value could be read; a recalled 2.6e-10 m²/s was replaced)',
+    },
+    criticalMicelleConcentration: {
+      value: OPE_CMC,
+      source: R.surfpro2025,
+      note: `${OPE_HOMOLOGUES_NOTE}: pCMC 3.523 and 3.481 (Katritzky et al. 2007 after Huibers et al. 1996)`,
+    },
     molarMass: {
       value: 0.62482,
       source: R.atomicWeights,
@@ -139,8 +197,18 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
     },
     interfaces: {
       'air-water': {
-        maximumSurfaceExcess: { value: 2.9e-6, source: R.rosen2012, note: 'from memory' },
-        langmuirConstant: { value: 1.5e3, source: R.chang1995, note: 'from memory' },
+        maximumSurfaceExcess: {
+          value: OPE_MAXIMUM_SURFACE_EXCESS,
+          source: R.surfpro2025,
+          note: `${OPE_HOMOLOGUES_NOTE}: Γ_max 2.5e-6 and 2.2e-6 mol/m² (Rosen & Kunjappu 2012)`,
+        },
+        langmuirConstant: {
+          value: OPE_LANGMUIR_CONSTANT,
+          source: R.surfpro2025,
+          note:
+            'derived (ours): the Langmuir–Szyszkowski equation with the Γ_max above made to pass through the mean ' +
+            'surface pressure at the CMC of the same homologues, 38.5 and 37 mN/m (Rosen & Kunjappu 2012)',
+        },
         gibbsPrefactor: { value: 1, source: R.rosen2012, note: 'n = 1 for a nonionic surfactant (Gibbs equation)' },
       },
     },

@@ -103,7 +103,7 @@ describe('POST /v1/assess: the facts of the trade', () => {
   // the surfactant model finds no gradient to build a Marangoni stress (its own answer, regime "clean"), and across
   // grooves in turbulent flow the clean surface already increases drag (spanwise slip larger than streamwise), so the
   // fact is checked where both models say it applies.
-  it('traces of SDS far below the critical micelle concentration (0.05 mM against 8.2 mM) cancel most of the slip: the surfactant verdict fails and the drag reduction falls (common practice, no source)', async () => {
+  it('traces of SDS far below the critical micelle concentration (0.05 mM against 8.1 mM, SurfPro) cancel most of the slip: the surfactant verdict fails and the drag reduction falls (common practice, no source)', async () => {
     const design = { ...TURBULENT, texture: { ...TURBULENT.texture, flowAngle: 90 }, flow: { kind: 'channel', height: '1 mm', bulkVelocity: '0.1 m/s' } };
     const clean = (await assess(design)).result;
     const dirty = (await assess({ ...design, waterQuality: { surfactant: { id: 'sds' }, bulkConcentration: '0.05 mM' } })).result;

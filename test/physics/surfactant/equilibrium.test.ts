@@ -55,7 +55,7 @@ describe('Langmuir–Szyszkowski equilibrium', () => {
     expect(r.surfaceExcess).toBe(0);
     expect(r.surfaceTension).toBe(0.072);
   });
-  it('warns above the CMC of SDS (8.2 mM; Mukerjee & Mysels 1971) and not below it', () => {
+  it('warns above the CMC of SDS (8.1 mM at 25 °C; SurfPro data file) and not below it', () => {
     const s = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });
     const above = new Notes();
     expect(surfactantEquilibrium(s, 10, 298.15, above).aboveCriticalMicelleConcentration).toBe(true);
