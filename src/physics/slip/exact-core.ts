@@ -12,6 +12,7 @@
  * with a caution per quantity outside (code `outside-validated-range`); their accuracy there is not measured.
  */
 import type { Warning } from '../../core/notes.js';
+import { BoundedCache } from '../../numerics/memo.js';
 import { longitudinalGrooveSlip, type LongitudinalGrooveSlip } from '../groove/groove-cell-longitudinal.js';
 import { TRANSVERSE_CORE_RANGE, transverseGrooveSlip, type TransverseGrooveInput, type TransverseGrooveSlip } from '../groove/groove-cell-transverse.js';
 
@@ -55,6 +56,16 @@ export function insideExactCoreRange(interfaceFraction: number, depthOverWidth: 
  * Galerkin matrix is not positive definite (not observed over the measured range).
  */
 export function exactGrooveSlip(input: TransverseGrooveInput): ExactGrooveSlip {
+  // One design asks for the same cell more than once (an assessment's slip under its own method, and the
+  // closed form's measured error for the waves): the answer is kept for the few most recent cells.
+  const key = `${input.pitch}|${input.grooveWidth}|${input.grooveDepth}|${input.viscosityRatio}|${input.appliedShear}|${input.waterViscosity}`;
+  return RECENT_CELLS.getOrCompute(key, () => solveGrooveCell(input));
+}
+
+/** The last few cells' answers (exact inputs as the key; results are never mutated by callers). */
+const RECENT_CELLS = new BoundedCache<ExactGrooveSlip>(16);
+
+function solveGrooveCell(input: TransverseGrooveInput): ExactGrooveSlip {
   const longitudinal = longitudinalGrooveSlip(input);
   const transverse = transverseGrooveSlip(input);
   const insideRange = insideExactCoreRange(input.grooveWidth / input.pitch, input.grooveDepth / input.grooveWidth, input.viscosityRatio);
