@@ -229,19 +229,24 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
   const spillPressure = gamma * spillCurvature;
   const openEnds = input.grooveEnds === 'open';
 
-  const fluxWithGradient = (fill: number, gradient: number): number => {
-    ductCoefficients(d * Math.min(Math.max(fill, frontFill), fullBulgeFill + 0.5), coefficients);
-    return (tau * coefficients[0] - coefficients[1] * (gradient - body)) / mu;
-  };
-
   const capacity = w * d * dx;
+  // Per cell, once per flux evaluation: capillary pressure and the duct coefficients at its equivalent depth
+  // (a face reads those of the fuller of its two cells, an end face those of its one cell).
   const cellPressure = new Float64Array(n);
+  const cellShear = new Float64Array(n);
+  const cellConductance = new Float64Array(n);
+  const fluxWithGradient = (cell: number, gradient: number): number => (tau * cellShear[cell] - cellConductance[cell] * (gradient - body)) / mu;
   const chain: ConservationChain = {
     size: n,
     capacities: new Float64Array(n).fill(capacity),
     faceFluxes(fill: Float64Array, leaving: Float64Array, entering: Float64Array): void {
-      // Each cell's capillary pressure once (every interior cell borders two faces).
-      for (let i = 0; i < n; i++) cellPressure[i] = pressureOf(fill[i]);
+      for (let i = 0; i < n; i++) {
+        const f = fill[i];
+        cellPressure[i] = pressureOf(f);
+        ductCoefficients(d * Math.min(Math.max(f, frontFill), fullBulgeFill + 0.5), coefficients);
+        cellShear[i] = coefficients[0];
+        cellConductance[i] = coefficients[1];
+      }
       for (let face = 0; face <= n; face++) {
         const left = face - 1;
         const right = face;
@@ -253,13 +258,13 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
           let out = 0;
           if (left >= 0) {
             const threshold = isDownstreamEnd && openEnds ? 0 : spillPressure;
-            const q = fluxWithGradient(fill[left], (threshold - cellPressure[left]) / (dx / 2));
+            const q = fluxWithGradient(left, (threshold - cellPressure[left]) / (dx / 2));
             out = Math.max(0, q) * smoothAvailability(fill[left], availabilityThreshold);
           }
           let into = 0;
           if (right < n) {
             const threshold = isUpstreamEnd && openEnds ? 0 : spillPressure;
-            const q = fluxWithGradient(fill[right], (cellPressure[right] - threshold) / (dx / 2));
+            const q = fluxWithGradient(right, (cellPressure[right] - threshold) / (dx / 2));
             into = Math.min(0, q) * smoothAvailability(fill[right], availabilityThreshold);
           }
           leaving[face] = out;
@@ -268,7 +273,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
         }
         const fl = fill[left];
         const fr = fill[right];
-        const q = fluxWithGradient(Math.max(fl, fr), (cellPressure[right] - cellPressure[left]) / dx);
+        const q = fluxWithGradient(fl >= fr ? left : right, (cellPressure[right] - cellPressure[left]) / dx);
         const donor = q >= 0 ? fl : fr;
         const value = q * smoothAvailability(donor, availabilityThreshold);
         leaving[face] = value;
