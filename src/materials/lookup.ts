@@ -15,6 +15,11 @@ const fluidCache = new Map<string, FluidState>();
 const FLUID_CACHE_LIMIT = 2_000;
 
 function fluidKey(spec: FluidSpec, field: string): string {
+  // The common request names a catalogue fluid and a temperature only: a key without sorting and serialising.
+  const keys = Object.keys(spec);
+  if (keys.length === 2 && typeof spec.id === 'string' && typeof spec.temperature === 'number') {
+    return `${userCatalogueGeneration()}|${field}|id-temperature|${spec.id}|${spec.temperature}`;
+  }
   const entries = Object.entries(spec)
     .filter(([, v]) => v !== undefined)
     .sort(([a], [b]) => (a < b ? -1 : 1));
