@@ -122,28 +122,37 @@ describe('flux-form BDF2 on a conservation chain', () => {
   });
 });
 
+/**
+ * Nonlinear diffusion D = y² on 60 cells with closed ends, a quarter filled against a near-empty rest: a stiff
+ * porous-medium front. Counts its flux evaluations.
+ */
+function porousMediumFront() {
+  const n = 60;
+  const dx = 1 / n;
+  const counter = { evaluations: 0 };
+  const chain: ConservationChain = {
+    size: n,
+    capacities: new Float64Array(n).fill(dx),
+    faceFluxes(y, leaving, entering) {
+      counter.evaluations++;
+      leaving[0] = entering[0] = leaving[n] = entering[n] = 0;
+      for (let face = 1; face < n; face++) {
+        const mean = 0.5 * (y[face] + y[face - 1]);
+        const q = (-mean * mean * (y[face] - y[face - 1])) / dx;
+        leaving[face] = q;
+        entering[face] = q;
+      }
+    },
+  };
+  const y0 = Array.from({ length: n }, (_, i) => (i < n / 4 ? 1 : 1e-3));
+  return { n, chain, y0, counter };
+}
+
 describe('simplified Newton (matrix kept while the iteration contracts)', () => {
   it('reaches the state full Newton reaches, with fewer flux evaluations (nonlinear diffusion D = y², a stiff porous-medium front)', () => {
-    const n = 60;
-    const dx = 1 / n;
-    let evaluations = 0;
-    const chain: ConservationChain = {
-      size: n,
-      capacities: new Float64Array(n).fill(dx),
-      faceFluxes(y, leaving, entering) {
-        evaluations++;
-        leaving[0] = entering[0] = leaving[n] = entering[n] = 0;
-        for (let face = 1; face < n; face++) {
-          const mean = 0.5 * (y[face] + y[face - 1]);
-          const q = (-mean * mean * (y[face] - y[face - 1])) / dx;
-          leaving[face] = q;
-          entering[face] = q;
-        }
-      },
-    };
-    const y0 = Array.from({ length: n }, (_, i) => (i < n / 4 ? 1 : 1e-3));
+    const { n, chain, y0, counter } = porousMediumFront();
     const run = (simplifiedNewton: boolean) => {
-      evaluations = 0;
+      counter.evaluations = 0;
       // Only the update test (newtonResidualFraction 0), so both variants iterate to the same tight tolerance.
       const r = integrateConservationChain(chain, y0, 0, 0.05, {
         initialStep: 1e-6,
@@ -153,7 +162,7 @@ describe('simplified Newton (matrix kept while the iteration contracts)', () => 
         newtonResidualFraction: 0,
         simplifiedNewton,
       });
-      return { r, evaluations };
+      return { r, evaluations: counter.evaluations };
     };
     const full = run(false);
     const simplified = run(true);
@@ -169,28 +178,10 @@ describe('simplified Newton (matrix kept while the iteration contracts)', () => 
   });
 
   it('the residual test stops Newton once the flux-form correction is a small share of the local error: fewer flux evaluations, same state within the tolerance (witness: the tight-Newton run)', () => {
-    // Porous-medium front again (D = y²), closed ends.
-    const n = 60;
-    const dx = 1 / n;
-    let evaluations = 0;
-    const chain: ConservationChain = {
-      size: n,
-      capacities: new Float64Array(n).fill(dx),
-      faceFluxes(y, leaving, entering) {
-        evaluations++;
-        leaving[0] = entering[0] = leaving[n] = entering[n] = 0;
-        for (let face = 1; face < n; face++) {
-          const mean = 0.5 * (y[face] + y[face - 1]);
-          const q = (-mean * mean * (y[face] - y[face - 1])) / dx;
-          leaving[face] = q;
-          entering[face] = q;
-        }
-      },
-    };
-    const y0 = Array.from({ length: n }, (_, i) => (i < n / 4 ? 1 : 1e-3));
+    const { n, chain, y0, counter } = porousMediumFront();
     const tolerance = 1e-5;
     const run = (newtonResidualFraction: number) => {
-      evaluations = 0;
+      counter.evaluations = 0;
       const r = integrateConservationChain(chain, y0, 0, 0.05, {
         initialStep: 1e-6,
         relativeTolerance: tolerance,
@@ -198,7 +189,7 @@ describe('simplified Newton (matrix kept while the iteration contracts)', () => 
         newtonTolerance: 1e-12,
         newtonResidualFraction,
       });
-      return { r, evaluations };
+      return { r, evaluations: counter.evaluations };
     };
     const tight = run(0);
     const residual = run(0.01);

@@ -52,6 +52,7 @@
 import { choleskyInPlace, forwardSubstitute, leadingSolution, nestedProducts } from '../../numerics/cholesky.js';
 import { extrapolateToInfiniteResolution } from '../../numerics/extrapolation.js';
 import { eulerAlternatingTail } from '../../numerics/series.js';
+import { BoundedCache } from '../../numerics/memo.js';
 import { smallestWedgeExponent } from '../../numerics/wedge-exponent.js';
 import { addWindowOverlapMatrix, windowFourierSums } from '../../numerics/window-fourier.js';
 import { type GrooveCellInput, type GrooveCellResult } from './groove-cell.js';
@@ -95,6 +96,13 @@ export type LongitudinalGrooveSlip = Pick<
 /** Lip exponent: liquid half-plane (coefficient 1) and lubricant quadrant (N) between two no-slip rays. */
 export function longitudinalEdgeExponent(viscosityRatio: number): number {
   if (viscosityRatio === 0) return 0.5;
+  // It depends on N alone, which a sweep over the geometry or a design's sensitivity steps repeat.
+  return EDGE_EXPONENTS.getOrCompute(String(viscosityRatio), () => lipExponent(viscosityRatio));
+}
+
+const EDGE_EXPONENTS = new BoundedCache<number>(64);
+
+function lipExponent(viscosityRatio: number): number {
   return smallestWedgeExponent(
     [
       { angle: Math.PI, coefficient: 1 },
