@@ -52,9 +52,14 @@ export const KADER_THERMAL_SLOPE = 2.12;
 
 /**
  * Kader's (1981) (Kader 1981) additive constant of the thermal log law,
- * β(Pr) = (3.85 Pr^(1/3) − 1.3)² + 2.12 ln Pr (form from memory: the paper's first page was read, the formula
- * is further in; Pirozzoli et al. 2022, J. Fluid Mech. 940, A45, read in full, cites it as Kader's eq. (9)
- * without printing it; wall-law implementations citing Kader use the same form, corroboration only).
+ * β(Pr) = (3.85 Pr^(1/3) − 1.3)² + 2.12 ln Pr.
+ * Witness, secondary: Kader's paper was read only to its first page (the formula is further in) and Pirozzoli
+ * et al. 2022, J. Fluid Mech. 940, A45, read in full, cites it as Kader's eq. (9) without printing it, so the
+ * form is taken from open-source CFD codes that implement Kader's thermal wall law under his name: the thermal
+ * wall-function boundary condition named after Kader in ESI's OpenFOAM-derived FOAMcore
+ * (alphatKaderWallFunctionFvPatchScalarField.C: Beta = sqr(3.85 pow(Pr, 0.333) − 1.3) + 2.12 log(Pr)), the same
+ * expression in the thermal wall law of CEA's TRUST code (Paroi_loi_WW_scal_VEF.cpp), and two smaller codes whose
+ * comments give it beside the citation "Kader (1981)"; read through the public code index (i16-cite4).
  * Example: Pr = 0.71 → 3.8306 (evaluated).
  */
 export function kaderThermalConstant(prandtl: number): number {

@@ -9,7 +9,7 @@ describe('turbulent correlations', () => {
     expect(gnielinskiNusselt(1e4, 7)).toBeCloseTo(79.5, 1);
     expect(dittusBoelterNusselt(1e4, 7)).toBeCloseTo(79.4, 1);
   });
-  it('Kader (1981) β(0.71) = 3.8306: the coded form evaluated by hand, (3.85·0.71^(1/3) − 1.3)² + 2.12 ln 0.71 (python); the form itself is unconfirmed, see src/physics/heat/turbulent.ts', () => {
+  it('Kader (1981) β(0.71) = 3.8306: the coded form evaluated by hand, (3.85·0.71^(1/3) − 1.3)² + 2.12 ln 0.71 (python); the form as the open-source wall-function codes named in src/physics/heat/turbulent.ts implement it (secondary witness; the formula page of the paper itself not read)', () => {
     expect(kaderThermalConstant(0.71)).toBeCloseTo(3.8306, 4);
   });
   it('a smooth wall gives ratio 1; a thermal resistance lowers Nu; drag reduction from ΔU+ ≈ 18 % at Re_m ≈ 1e4, ΔU+ from ℓ+ = 2 (the log-law relation checked against the scipy fixture fixtures/slip/turbulent_drag.json in test/physics/slip)', () => {
