@@ -3,7 +3,7 @@
  * as the baseline (the figures are ratios that survive a loaded machine):
  *  1. /v1/flow single points in process (runInline: parse, compute, envelope), points/s;
  *  2. a closed-form sweep (flow) in process, inline and over a pool of --threads solver threads, points/s;
- *  3. an assessment sweep through the sweep engine, designs/s on one thread, and the same designs assessed directly
+ *  3. an assessment sweep through the sweep engine (600 designs), designs/s on one thread, and the same designs assessed directly
  *     (what the design window evaluates per candidate): the engine's share of the cost;
  *  Rates are given per second of wall time and per second of the process's CPU time (all threads).
  *  4. a design window over about 10⁴ candidates (105 × 105 lattice, pitch fraction fixed) on the pool, wall time;
@@ -117,8 +117,9 @@ if (!only) {
     calculation: 'assess',
     design,
     axes: [
-      { path: 'texture.grooveWidth', range: { from: '5 um', to: '45 um', points: 6, spacing: 'log' } },
-      { path: 'texture.grooveDepth', range: { from: '2 um', to: '200 um', points: 10, spacing: 'log' } },
+      // 600 distinct designs (20 × 30): long enough a run that a timer tick or one collection does not set the rate.
+      { path: 'texture.grooveWidth', range: { from: '5 um', to: '45 um', points: 20, spacing: 'log' } },
+      { path: 'texture.grooveDepth', range: { from: '2 um', to: '200 um', points: 30, spacing: 'log' } },
     ],
   };
   const swept = planSweep(body);
