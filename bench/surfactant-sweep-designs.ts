@@ -18,7 +18,7 @@ import { evaluateSurfactant, type SurfactantMethod, type SurfactantResult } from
 export interface SweepDesign {
   id: number;
   part: string;
-  surfactant: 'sds' | 'triton-x-100';
+  surfactant: 'sds' | 'octylphenol-ethoxylate';
   concentrationOverCmc: number;
   /** mol/m³ */
   bulkConcentration: number;

@@ -173,11 +173,11 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
     },
   },
   {
-    id: 'triton-x-100',
+    id: 'octylphenol-ethoxylate',
     name: 'octylphenol ethoxylate (about 9.5 ethylene-oxide units)',
     kind: 'nonionic',
     description:
-      'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units; the id keeps its former name for compatibility. Its CMC, Γ_m and Langmuir constant are those of the pure homologues with 9 and 10 ethylene-oxide units, averaged (surfpro-2025). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
+      'Nonionic surfactant, polydisperse p-tert-octylphenol ethoxylate (p-tert-octylphenoxypolyoxyethylene ether) with about 9.5 ethylene-oxide units. Formerly catalogued under a product name ("triton-x-100"), which still resolves to this entry with a note. Its CMC, Γ_m and Langmuir constant are those of the pure homologues with 9 and 10 ethylene-oxide units, averaged (surfpro-2025). Kinetic rate constants are not catalogued (no confirmed source); calculations then assume diffusion-controlled exchange.',
     bulkDiffusivity: {
       value: OPE_BULK_DIFFUSIVITY,
       source: R.wilkeChang1955,
@@ -217,12 +217,26 @@ export const SURFACTANTS: readonly CatalogueSurfactant[] = [
 
 /** The catalogue surfactant with this id (built-in, else the user catalogue's), or undefined. */
 export function getSurfactant(id: string): CatalogueSurfactant | undefined {
-  return SURFACTANTS.find((s) => s.id === id) ?? userSurfactant(id);
+  return SURFACTANTS.find((s) => s.id === id) ?? userSurfactant(id) ?? formerBuiltIn(id);
+}
+
+/**
+ * Ids the built-in catalogue used before, mapped to the entry's current id: a product name gave way to a generic
+ * chemical name, and requests written against the former id keep working (with a note saying so).
+ */
+export const FORMER_SURFACTANT_IDS: Readonly<Record<string, string>> = { 'triton-x-100': 'octylphenol-ethoxylate' };
+
+/** The built-in entry a former id stands for (a user entry of that id, if any, wins: it is looked up first). */
+function formerBuiltIn(id: string): CatalogueSurfactant | undefined {
+  const current = Object.hasOwn(FORMER_SURFACTANT_IDS, id) ? FORMER_SURFACTANT_IDS[id] : undefined;
+  return current === undefined ? undefined : SURFACTANTS.find((s) => s.id === current);
 }
 
 /** Whether an id is a built-in surfactant or one of the user catalogue's; undefined when it is neither. */
 export function surfactantOrigin(id: string): CatalogueOrigin | undefined {
-  return SURFACTANTS.some((s) => s.id === id) ? 'built-in' : userSurfactant(id) === undefined ? undefined : 'user';
+  if (SURFACTANTS.some((s) => s.id === id)) return 'built-in';
+  if (userSurfactant(id) !== undefined) return 'user';
+  return formerBuiltIn(id) === undefined ? undefined : 'built-in';
 }
 
 const VALUE_UNITS = {
@@ -315,6 +329,13 @@ export function resolveSurfactant(spec: SurfactantResolveSpec, field = 'surfacta
   const origins: Record<string, string> = {};
   const refs = new Map<string, Reference>();
   const warnings: Warning[] = [];
+  if (entry !== undefined && spec.id !== undefined && entry.id !== spec.id) {
+    warnings.push({
+      code: 'former-catalogue-id',
+      severity: 'info',
+      message: `"${spec.id}" is the former id of the catalogue surfactant "${entry.id}" (${entry.name}); use the new id`,
+    });
+  }
   const pick = (name: keyof SurfactantParameters, catalogue: SourcedValue | undefined): number | undefined => {
     const given = p[name];
     if (given !== undefined) {

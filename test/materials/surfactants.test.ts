@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES, SURFACTANTS, getSurfactant, resolveSurfactant, surfactantListing } from '../../src/materials/surfactants.js';
+import { OCTYLPHENOL_ETHOXYLATE_HOMOLOGUES, SURFACTANTS, getSurfactant, resolveSurfactant, surfactantListing, surfactantOrigin } from '../../src/materials/surfactants.js';
 import { GAS_CONSTANT } from '../../src/core/constants.js';
 import { getFluid } from '../../src/materials/catalogue.js';
 import { wilkeChangDiffusivity } from '../../src/physics/retention/dissolution.js';
@@ -25,7 +25,7 @@ describe('surfactant catalogue', () => {
     expect(cmc?.source.key).toBe('surfpro-2025');
   });
   it('octylphenol ethoxylate: CMC, Γ_m as the mean of the 9- and 10-unit homologues (SurfPro: pCMC 3.523, 3.481; Γ_max 2.5e-6, 2.2e-6 mol/m²)', () => {
-    const s = getSurfactant('triton-x-100');
+    const s = getSurfactant('octylphenol-ethoxylate');
     // (10^-3.523 + 10^-3.481) mol/L / 2 = 0.315143 mol/m³, evaluated by hand from the two tabulated pCMC.
     expect(s?.criticalMicelleConcentration?.value).toBeCloseTo(0.315143, 5);
     expect(s?.interfaces['air-water']?.maximumSurfaceExcess?.value).toBeCloseTo(2.35e-6, 15);
@@ -36,7 +36,7 @@ describe('surfactant catalogue', () => {
     expect(s?.criticalMicelleConcentration?.value).toBeLessThan(1000 * 10 ** -n10.pCmc);
   });
   it('octylphenol ethoxylate diffusivity: the Wilke–Chang (1955) estimate with the Le Bas volume 807.3 cm³/mol, slower than the SDS monomer (7e-10 m²/s, Chang & Franses 1995)', () => {
-    const d = getSurfactant('triton-x-100')?.bulkDiffusivity;
+    const d = getSurfactant('octylphenol-ethoxylate')?.bulkDiffusivity;
     // Le Bas increments of the table read (C 14.8, H 3.7, ether O 11.0, benzene ring −15; hydroxyl O 7.4) for C33H60O10.5.
     const volume = (33 * 14.8 + 60 * 3.7 + 9.5 * 11.0 + 7.4 - 15) * 1e-6;
     expect(volume).toBeCloseTo(807.3e-6, 12);
@@ -49,13 +49,22 @@ describe('surfactant catalogue', () => {
     expect(d?.value).toBeLessThan(getSurfactant('sds')!.bulkDiffusivity!.value);
   });
   it('octylphenol ethoxylate Langmuir constant: the Langmuir–Szyszkowski equation through the tabulated Π_cmc = 37.75 mN/m (mean of 38.5 and 37 mN/m, SurfPro after Rosen & Kunjappu 2012) at the CMC', () => {
-    const s = resolveSurfactant({ id: 'triton-x-100', interfaceType: 'air-water' });
+    const s = resolveSurfactant({ id: 'octylphenol-ethoxylate', interfaceType: 'air-water' });
     const pressure = GAS_CONSTANT * 298.15 * s.maximumSurfaceExcess * Math.log1p(s.langmuirConstant * (s.criticalMicelleConcentration ?? Number.NaN));
     expect(pressure).toBeCloseTo(37.75e-3, 9);
     // K = expm1(37.75e-3/(8.314462618 × 298.15 × 2.35e-6))/0.315143 = 2065.8 m³/mol (evaluated by hand).
     expect(s.langmuirConstant).toBeCloseTo(2065.8, 0);
     // Saturated at the CMC (K·CMC ≫ 1), as a surfactant must be where micelles form.
     expect(s.langmuirConstant * (s.criticalMicelleConcentration ?? 0)).toBeGreaterThan(100);
+  });
+  it('the former product-name id still resolves to the generic entry, with a note naming the new id (our rule: ids are generic chemical names)', () => {
+    const former = resolveSurfactant({ id: 'triton-x-100', interfaceType: 'air-water' });
+    const current = resolveSurfactant({ id: 'octylphenol-ethoxylate', interfaceType: 'air-water' });
+    expect(former.criticalMicelleConcentration).toBe(current.criticalMicelleConcentration);
+    expect(former.warnings.map((w) => w.code)).toContain('former-catalogue-id');
+    expect(current.warnings.map((w) => w.code)).not.toContain('former-catalogue-id');
+    expect(surfactantOrigin('triton-x-100')).toBe('built-in');
+    expect(surfactantOrigin('no-such-surfactant')).toBeUndefined();
   });
   it('holds at least one nonionic surfactant, with Gibbs prefactor n = 1 (Gibbs equation for an uncharged solute)', () => {
     const nonionic = SURFACTANTS.filter((s) => s.kind === 'nonionic');
@@ -119,7 +128,7 @@ describe('surfactant resolver', () => {
     expect(() => resolveSurfactant({ id: 'sds', interfaceType: 'air-water', parameters: { bulkDiffusivity: -1 } })).toThrow(DomainError);
   });
   it('a nonionic without rate constants resolves to diffusion-controlled exchange (no κ_a, κ_d)', () => {
-    const s = resolveSurfactant({ id: 'triton-x-100', interfaceType: 'air-water' });
+    const s = resolveSurfactant({ id: 'octylphenol-ethoxylate', interfaceType: 'air-water' });
     expect(s.adsorptionRate).toBeUndefined();
     expect(s.gibbsPrefactor).toBe(1);
   });

@@ -16,7 +16,7 @@ import { solveLongWaveGroove, solveTransverseInterface } from '../../../src/phys
 import { marangoniScaling, philipTransverse } from '../../../src/physics/surfactant/scaling.js';
 
 const sds = resolveSurfactant({ id: 'sds', interfaceType: 'air-water' });
-const triton = resolveSurfactant({ id: 'triton-x-100', interfaceType: 'air-water' });
+const triton = resolveSurfactant({ id: 'octylphenol-ethoxylate', interfaceType: 'air-water' });
 const T = 298.15;
 const mu = 1e-3;
 
