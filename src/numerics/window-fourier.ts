@@ -65,13 +65,16 @@ function scaledHurwitzZeta(p: number, n0: number): number {
 }
 
 /**
- * Σ_{n≥N} cos(nθ) f(n) from f(N), f(N+1), …, f(N+T) (overwritten) by Euler's transformation
- * Σ_{n≥N} zⁿ f(n) = zᴺ/(1 − z) Σ_j (z/(1 − z))ʲ Δʲf(N), z = e^{iθ}: the j-th term shrinks like
- * j!/(N·|1 − z|)ʲ for f varying on the scale N, so it converges fast when N·|1 − z| ≫ 1; the series
- * is asymptotic and is stopped at its smallest term.
+ * Σ_{n≥N} cos(nθ) f(n) from f(N), f(N+1), …, f(N+T) (values[0 … count − 1], T = count − 1; `values` is used as
+ * scratch) by Euler's transformation Σ_{n≥N} zⁿ f(n) = zᴺ/(1 − z) Σ_j (z/(1 − z))ʲ Δʲf(N), z = e^{iθ}: the j-th
+ * term shrinks like j!/(N·|1 − z|)ʲ for f varying on the scale N, so it converges fast when N·|1 − z| ≫ 1; the
+ * series is asymptotic and is stopped at its smallest term. The differences Δʲf(N) are built one value at a time
+ * along the table's last diagonal (after f(N+j), diagonal[i] = Δⁱf(N+j−i)), so a series stopped at term j costs
+ * O(j²) subtractions, not O(j·T); each difference is the same subtraction of the same two numbers as in the
+ * full table, so the values are those of the table.
  */
-function oscillatingTail(values: Float64Array, n0: number, theta: number): number {
-  const terms = values.length - 1;
+function oscillatingTail(values: Float64Array, count: number, n0: number, theta: number, diagonal: Float64Array): number {
+  const terms = count - 1;
   // q = z/(1 − z), prefactor zᴺ/(1 − z), both complex.
   const zr = Math.cos(theta);
   const zi = Math.sin(theta);
@@ -90,15 +93,23 @@ function oscillatingTail(values: Float64Array, n0: number, theta: number): numbe
   let wi = 0;
   let last = Infinity;
   for (let j = 0; j <= terms; j++) {
-    const tr = wr * values[0];
-    const ti = wi * values[0];
+    // Extend the diagonal by f(N+j): diagonal[i] = Δⁱf(N+j−i), so diagonal[j] = Δʲf(N).
+    let carried = values[j];
+    for (let i = 0; i < j; i++) {
+      const previous = diagonal[i];
+      diagonal[i] = carried;
+      carried -= previous;
+    }
+    diagonal[j] = carried;
+    const difference = carried;
+    const tr = wr * difference;
+    const ti = wi * difference;
     const size = Math.hypot(tr, ti);
     if (size > last) break;
     sr += tr;
     si += ti;
     if (size <= 1e-18 * Math.hypot(sr, si)) break;
     last = size;
-    for (let i = 0; i < terms - j; i++) values[i] = values[i + 1] - values[i];
     const nr = wr * qr - wi * qi;
     wi = wr * qi + wi * qr;
     wr = nr;
@@ -155,6 +166,7 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
   const gap = 2 * Math.abs(Math.sin(Math.PI * fraction)); // |1 − e^{iθ}|
   const sigmaValues = new Float64Array(EULER_TERMS + 1);
   const curvatureValues = new Float64Array(EULER_TERMS + 1);
+  const diagonal = new Float64Array(EULER_TERMS + 1);
   for (let j = 0; j < count; j++) {
     const c = wavenumbers[j] / beta;
     const c2 = c * c;
@@ -197,8 +209,8 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
       sigmaValues[i] = (c2 * u) / n;
       curvatureValues[i] = n * u * u;
     }
-    s += 0.5 * oscillatingTail(sigmaValues.subarray(0, eulerTerms + 1), n0, theta);
-    d += 0.5 * oscillatingTail(curvatureValues.subarray(0, eulerTerms + 1), n0, theta);
+    s += 0.5 * oscillatingTail(sigmaValues, eulerTerms + 1, n0, theta, diagonal);
+    d += 0.5 * oscillatingTail(curvatureValues, eulerTerms + 1, n0, theta, diagonal);
     sigma[j] = s / beta;
     curvature[j] = d / (beta * beta * beta);
   }
