@@ -135,6 +135,29 @@ function integerTables(k: number): { squares: Float64Array; inverse: Float64Arra
 
 /** Powers of μ²/α² kept in the tail's non-oscillating part (ratio ≤ ¼ there: 26 terms reach 1e-16). */
 const TAIL_TERMS = 26;
+/**
+ * ½ (K/N)^{2q+2} N^{2q+2} Σ_{n≥N} n^{−2q−3} scaled as the tail needs it (K = N − 1, q = 0 … TAIL_TERMS): the moments
+ * of the plain half of the tail depend on N alone, which many modes and many cells share, so each N's are formed
+ * once (the same products in the same order as formed per mode before) and kept, for N below a bound.
+ */
+function tailMoments(n0: number): Float64Array {
+  const kept = n0 < TAIL_MOMENTS_KEPT ? tailMomentCache[n0] : undefined;
+  if (kept !== undefined) return kept;
+  const k = n0 - 1;
+  const shrink = (k / n0) * (k / n0);
+  const moments = new Float64Array(TAIL_TERMS + 1);
+  let factor = 0.5 * shrink;
+  for (let q = 0; q <= TAIL_TERMS; q++) {
+    moments[q] = factor * scaledHurwitzZeta(2 * q + 3, n0);
+    factor *= shrink;
+  }
+  if (n0 < TAIL_MOMENTS_KEPT) tailMomentCache[n0] = moments;
+  return moments;
+}
+/** Cut-offs below this keep their tail moments (about 220 bytes each; the cut-offs met stay below a few thousand). */
+const TAIL_MOMENTS_KEPT = 8192;
+const tailMomentCache: (Float64Array | undefined)[] = [];
+
 /** Values of the summand passed to Euler's transformation for the oscillating part of the tail. */
 const EULER_TERMS = 24;
 
@@ -188,17 +211,15 @@ export function windowFourierSums(input: WindowSumsInput): WindowSums {
     // Plain half of the tail n > K: c²/(n(n² − c²)) = Σ_q c^{2q+2} n^{−2q−3}, n/(n² − c²)² = Σ_q (q+1) c^{2q} n^{−2q−3},
     // with moments K^{2q+2} Σ_{n>K} n^{−2q−3} from the Euler–Maclaurin Hurwitz zeta.
     const n0 = k + 1;
-    const shrink = (k / n0) * (k / n0);
     const k2 = k * k;
     const r2 = c2 / k2;
-    let factor = 0.5 * shrink;
+    const moments = tailMoments(n0);
     let rq = 1;
     for (let q = 0; q <= TAIL_TERMS && rq > 1e-18; q++) {
-      const moment = factor * scaledHurwitzZeta(2 * q + 3, n0);
+      const moment = moments[q];
       s += rq * r2 * moment;
       d += ((q + 1) * rq * moment) / k2;
       rq *= r2;
-      factor *= shrink;
     }
     // Oscillating half: ½ Σ_{n>K} cos(nθ) f(n) for both summands; Euler's transformation needs about as many
     // differences as it takes the ratio (3 + j)/(K|1 − e^{iθ}|) of its terms to bring them to rounding.
