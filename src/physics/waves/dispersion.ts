@@ -66,7 +66,8 @@ interface DispersionTerms {
 }
 
 function dispersionTerms(layers: TwoLayerInterface, streamwiseWavenumber: number): DispersionTerms {
-  const total = Math.hypot(streamwiseWavenumber, layers.spanwiseWavenumber);
+  // √(k² + m²) written out: Math.hypot's overflow guard is not needed below k ≈ 1e154 and costs several products.
+  const total = Math.sqrt(streamwiseWavenumber * streamwiseWavenumber + layers.spanwiseWavenumber * layers.spanwiseWavenumber);
   return {
     total,
     inertia1: layerInertia(layers.wallSideDensity, layers.wallSideDepth, total),
