@@ -73,7 +73,11 @@ try {
     console.log(`design answers: ${body.result?.overall?.verdict}, slip method ${body.result?.couplings?.slipMethod}`);
   }
   const without = designs.map((d) => ({ ...d, options: { ...(d.options as object), marginSensitivities: { enabled: false } } }));
+  // Warm-up, not measured: each solver thread compiles the assessment's code on its first calls (the first round used
+  // to run 2–4× slower than the others), and the flow route on the main thread likewise.
   await measure('/v1/flow', flowBodies, 100);
+  await measure('/v1/assess', without, 4 * amount);
+  await measure('/v1/assess', designs, 2 * amount);
   console.log('oilskin HTTP latency: POST /v1/assess against POST /v1/flow');
   console.log(
     `node ${process.version}, ${os.cpus().length} logical cores (${os.cpus()[0]?.model ?? 'unknown'}), load average ${os.loadavg().map((x) => x.toFixed(2)).join(' ')}; ` +
