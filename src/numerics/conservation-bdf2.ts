@@ -22,7 +22,6 @@
  * extrapolation of the two previous states (a second-difference estimate of
  * the local error) against atol + rtol·|y|, with the usual cube-root update.
  */
-import { solveTridiagonal } from './linalg.js';
 import { compensatedSum } from './series.js';
 
 /**
@@ -150,11 +149,19 @@ export function integrateConservationChain(
   let jacobianEvaluations = 0;
   let fluxEvaluations = 0;
   const trial = new Float64Array(n);
+  /** The step's predictor (also the error reference). */
+  const predicted = new Float64Array(n);
   // Rate Jacobian bands: jLower[i] = ∂rate_i/∂y_{i−1}, jDiag[i] = ∂rate_i/∂y_i, jUpper[i] = ∂rate_i/∂y_{i+1}.
   const jLower = new Float64Array(n);
   const jDiag = new Float64Array(n);
   const jUpper = new Float64Array(n);
   let haveJacobian = false;
+  const step = new Float64Array(n);
+  const multipliers = new Float64Array(n);
+  const pivots = new Float64Array(n);
+  /** b·h and the J (its formation count) the factored Newton matrix belongs to. */
+  let factoredStep = Number.NaN;
+  let factoredJacobian = -1;
   /** J was formed during the current step's iteration. */
   let freshJacobian = false;
   /** Forms J at `trial`, whose rates are in `rate` (three flux evaluations, one per colour). */
@@ -187,7 +194,7 @@ export function integrateConservationChain(
     for (let i = 0; i < n; i++) base[i] = a1 * y[i] - a2 * yPrev[i];
 
     // Predictor: linear extrapolation (also the error reference).
-    const predictor = new Float64Array(n);
+    const predictor = predicted;
     for (let i = 0; i < n; i++) predictor[i] = first ? y[i] : y[i] + omega * (y[i] - yPrev[i]);
     trial.set(predictor);
     freshJacobian = false;
@@ -234,12 +241,26 @@ export function integrateConservationChain(
         haveJacobian = true;
         freshJacobian = true;
       }
-      for (let i = 0; i < n; i++) {
-        diag[i] = 1 - b * h * jDiag[i];
-        upper[i] = -b * h * jUpper[i];
-        lower[i] = -b * h * jLower[i];
+      if (b * h !== factoredStep || jacobianEvaluations !== factoredJacobian) {
+        // The Newton matrix I − b·h·J and its elimination (the Thomas algorithm's multipliers and pivots), kept
+        // while neither J nor b·h changes: each kept iteration then costs only the two substitutions.
+        for (let i = 0; i < n; i++) {
+          diag[i] = 1 - b * h * jDiag[i];
+          upper[i] = -b * h * jUpper[i];
+          lower[i] = -b * h * jLower[i];
+        }
+        pivots[0] = diag[0];
+        for (let i = 1; i < n; i++) {
+          multipliers[i] = upper[i - 1] / pivots[i - 1];
+          pivots[i] = diag[i] - lower[i] * multipliers[i];
+        }
+        factoredStep = b * h;
+        factoredJacobian = jacobianEvaluations;
       }
-      const step = solveTridiagonal(lower, diag, upper, residual);
+      // Same arithmetic as linalg's solveTridiagonal on this matrix.
+      step[0] = residual[0] / pivots[0];
+      for (let i = 1; i < n; i++) step[i] = (residual[i] - lower[i] * step[i - 1]) / pivots[i];
+      for (let i = n - 2; i >= 0; i--) step[i] -= multipliers[i + 1] * step[i + 1];
       updates++;
       newtonTotal++;
       let largest = 0;
