@@ -232,6 +232,7 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
   const capacity = w * d * dx;
   // Per cell, once per flux evaluation: capillary pressure and the duct coefficients at its equivalent depth
   // (a face reads those of the fuller of its two cells, an end face those of its one cell).
+  const cellFill = new Float64Array(n).fill(Number.NaN);
   const cellPressure = new Float64Array(n);
   const cellShear = new Float64Array(n);
   const cellConductance = new Float64Array(n);
@@ -242,6 +243,10 @@ export function solveDrainage(input: DrainageInput): DrainageResult {
     faceFluxes(fill: Float64Array, leaving: Float64Array, entering: Float64Array): void {
       for (let i = 0; i < n; i++) {
         const f = fill[i];
+        // A cell whose filling is the one of the previous evaluation keeps its values (the Jacobian's colour
+        // evaluations move a third of the cells).
+        if (f === cellFill[i]) continue;
+        cellFill[i] = f;
         cellPressure[i] = pressureOf(f);
         ductCoefficients(d * Math.min(Math.max(f, frontFill), fullBulgeFill + 0.5), coefficients);
         cellShear[i] = coefficients[0];
