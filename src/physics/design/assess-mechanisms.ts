@@ -202,7 +202,10 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   const water = ctx.document.waterQuality;
   const stated = water === undefined ? undefined : Array.isArray(water.bulkConcentration) ? water.bulkConcentration[0] : water.bulkConcentration;
   const concentrations = stated === undefined ? undefined : tolerable !== null && tolerable !== stated ? [stated, tolerable] : [stated];
-  const surfactant = attempt(() => surfactantSensitivity(ctx, concentrations ? { bulkConcentration: concentrations } : {}));
+  // A sensitivity step reads the points at the stated and tolerable concentrations only: no curve.
+  const surfactant = attempt(() =>
+    surfactantSensitivity(ctx, { ...(concentrations ? { bulkConcentration: concentrations } : {}), ...(options.marginsOnly ? { pointsOnly: true } : {}) }),
+  );
   let slipKept = 1;
   let dragWithSurfactant = dragClean;
   let surfactantCurve: MechanismEvaluation['surfactantCurve'] = null;

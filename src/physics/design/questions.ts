@@ -274,7 +274,7 @@ export interface SurfactantAnswer extends SurfactantResult {
 }
 
 /** POST /v1/surfactant: how much of the slip survives the water's surfactant? */
-export function surfactantSensitivity(ctx: DesignContext, overrides: { bulkConcentration?: number | number[] } = {}): Answer<SurfactantAnswer> {
+export function surfactantSensitivity(ctx: DesignContext, overrides: { bulkConcentration?: number | number[]; pointsOnly?: boolean } = {}): Answer<SurfactantAnswer> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
     const doc = ctx.document;
@@ -319,6 +319,7 @@ export function surfactantSensitivity(ctx: DesignContext, overrides: { bulkConce
       },
       ...(grooveContent === undefined ? {} : { underlying: grooveContent }),
       ...(doc.texture?.grooveLength === undefined ? {} : { grooveLength: doc.texture.grooveLength }),
+      ...(overrides.pointsOnly === true ? { pointsOnly: true } : {}),
     });
     notes.merge(out);
     notes.assume('Drag with surfactant: slip along the flow and spanwise both scaled by the retained fraction, then the slip model’s drag function.');

@@ -85,6 +85,11 @@ export interface SurfactantInput {
   cleanTension?: number;
   /** Curve of slip retained against concentration: number of points and range (mol/m³). */
   curve?: { points?: number; minimum?: number; maximum?: number };
+  /**
+   * Leave out the curve and the half-slip concentration (empty curve, null concentration): for a caller that reads
+   * only the points, such as an assessment's sensitivity steps. Default false.
+   */
+  pointsOnly?: boolean;
   /** Solver resolution, tolerance and iteration budget (linear solves per solve, default 400). */
   solver?: { cells?: number; grooveCells?: number; tolerance?: number; maxIterations?: number };
 }
@@ -488,13 +493,13 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   const retainedAt = (c: number): number => evaluatePoint(input, pr, c, quiet, curveRun).slipRetained;
   const cs: number[] = [];
   const rs: number[] = [];
-  for (let i = 0; i < nCurve; i++) {
+  for (let i = 0; i < (input.pointsOnly === true ? 0 : nCurve); i++) {
     const c = cMin * Math.pow(cMax / cMin, i / (nCurve - 1));
     cs.push(c);
     rs.push(retainedAt(c));
   }
   let half: number | null = null;
-  for (let i = 0; i + 1 < nCurve; i++) {
+  for (let i = 0; i + 1 < cs.length; i++) {
     if ((rs[i] - 0.5) * (rs[i + 1] - 0.5) <= 0) {
       const root = brent((lc) => retainedAt(Math.pow(10, lc)) - 0.5, Math.log10(cs[i]), Math.log10(cs[i + 1]), { xTolerance: 1e-6 });
       if (root.converged) half = Math.pow(10, root.root);
@@ -505,7 +510,7 @@ export function evaluateSurfactant(input: SurfactantInput): Outcome<SurfactantRe
   if (curveFallbacks > 0) {
     notes.warn('curve-solver-fallback', `${curveFallbacks} point(s) of the concentration curve (or of the half-slip search) come from the scaling theory: the interface solver found no steady state there`, 'warning');
   }
-  if (half === null) notes.warn('no-half-slip', 'half of the clean slip is not lost anywhere in the curve range', 'info');
+  if (half === null && input.pointsOnly !== true) notes.warn('no-half-slip', 'half of the clean slip is not lost anywhere in the curve range', 'info');
   notes.assume('drag change: recompute with slipLength through the slip endpoint drag model');
   const cleanFlow = input.cleanSlip.slipLengthLongitudinal * cos2 + input.cleanSlip.slipLengthTransverse * (1 - cos2);
   return outcome(
