@@ -10,7 +10,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { parse as parseYaml } from 'yaml';
 import { FLUIDS } from '../materials/catalogue.js';
-import { SURFACTANTS } from '../materials/surfactants.js';
+import { FORMER_SURFACTANT_IDS, SURFACTANTS } from '../materials/surfactants.js';
 import { installUserCatalogue, type UserCatalogueData } from '../materials/user-catalogue.js';
 import { zodFieldErrors } from './problem.js';
 import { UserCatalogueFileSchema } from './schemas/user-catalogue.js';
@@ -77,7 +77,8 @@ export function readUserCatalogue(file: string): UserCatalogueData {
     });
   };
   checkIds('fluids', fluids.map((f) => f.id), new Set(FLUIDS.map((f) => f.id)));
-  checkIds('surfactants', surfactants.map((s) => s.id), new Set(SURFACTANTS.map((s) => s.id)));
+  // A former built-in id (it still resolves to its entry) is reserved like a current one.
+  checkIds('surfactants', surfactants.map((s) => s.id), new Set([...SURFACTANTS.map((s) => s.id), ...Object.keys(FORMER_SURFACTANT_IDS)]));
   if (fluids.length + surfactants.length === 0) problems.push('(top level): the file has no fluids and no surfactants');
   if (problems.length > 0) throw new CatalogueFileError(file, problems);
   return {

@@ -141,6 +141,9 @@ describe('a broken user catalogue', () => {
     expect(negative).toMatch(/fluids\[0\] \(id "lab-polyalphaolefin-6"\)\.properties\.viscosity/);
     const shadow = refusal(variant('shadow', (c) => (c.fluids[1].id = 'water')));
     expect(shadow).toMatch(/fluids\[1\] \(id "water"\)\.id: "water" is a built-in entry/);
+    // A former built-in id still resolves to its entry, so it is reserved too.
+    const former = refusal(variant('former', (c) => (c.surfactants[0].id = 'triton-x-100')));
+    expect(former).toMatch(/surfactants\[0\] \(id "triton-x-100"\)\.id: "triton-x-100" is a built-in entry/);
     const twice = refusal(variant('twice', (c) => (c.fluids[1].id = c.fluids[0].id)));
     expect(twice).toMatch(/appears twice/);
     const unit = refusal(variant('unit', (c) => (c.surfactants[0].molarMass = '364 g/m')));
