@@ -59,7 +59,15 @@ export function requireFraction(value: number, field: string): void {
 export class MissingInputError extends DomainError {
   readonly question: string;
   constructor(field: string, question: string, why: string) {
-    super(`${field} is required: ${question} needs ${why}`, { field, code: 'missing-property' });
+    // An expected outcome, not a fault: an assessment meets one for every part a document leaves out (each
+    // sensitivity step and sweep point again), and the stack trace V8 captures would cost more than the question.
+    const limit = Error.stackTraceLimit;
+    Error.stackTraceLimit = 0;
+    try {
+      super(`${field} is required: ${question} needs ${why}`, { field, code: 'missing-property' });
+    } finally {
+      Error.stackTraceLimit = limit;
+    }
     this.name = 'MissingInputError';
     this.question = question;
   }
