@@ -238,7 +238,13 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   // Retention on the assessment's slip solution; the timeline runs to the service time. A sensitivity step of a
   // design whose drainage settled early needs only the steady share: no finite-volume timeline.
   const retention = attempt(() =>
-    lubricantRetention(ctx, { method, duration: serviceTime, ...(options.drainageSettled === true ? { finiteVolumeTimeline: false } : {}) }),
+    lubricantRetention(ctx, {
+      method,
+      duration: serviceTime,
+      // The assessment reads the binding mechanism's share and timeline, never the column of one that does not bind.
+      unboundSteadyColumn: false,
+      ...(options.drainageSettled === true ? { finiteVolumeTimeline: false } : {}),
+    }),
   );
   let times = [0, serviceTime];
   let filled = [1, 1];

@@ -220,7 +220,7 @@ export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 've
 /** POST /v1/retention: how much lubricant stays in the grooves, and how fast the rest drains. */
 export function lubricantRetention(
   ctx: DesignContext,
-  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean } = {},
+  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean; unboundSteadyColumn?: boolean } = {},
 ): Answer<Omit<RetentionResult, 'verdict'>> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
@@ -260,6 +260,7 @@ export function lubricantRetention(
       ...(inclination ? { inclination } : {}),
       ...(solubility === undefined ? {} : { solubility: { value: solubility, unit: 'kg/m3' as const } }),
       ...(overrides.finiteVolumeTimeline === undefined ? {} : { finiteVolumeTimeline: overrides.finiteVolumeTimeline }),
+      ...(overrides.unboundSteadyColumn === undefined ? {} : { unboundSteadyColumn: overrides.unboundSteadyColumn }),
     });
     notes.merge(retention);
     return lift(retention.result);

@@ -95,6 +95,12 @@ export interface RetentionInput {
   /** Furmidge shape factor k (default 1, module comment). */
   pinningShapeFactor?: number;
   /**
+   * Report the steady capillary column where it does not bind (pinning binds, or nothing holds) as well (default
+   * true). false leaves `steadyColumn` null there: for a caller that reads only the binding mechanism's results
+   * (an assessment).
+   */
+  unboundSteadyColumn?: boolean;
+  /**
    * Solve the finite-volume timeline where capillary back-pressure binds (default true). false takes the
    * lumped plug's timeline instead: for a caller that already knows the drainage has settled long before the
    * duration and reads only the steady share (an assessment's sensitivity steps).
@@ -119,7 +125,9 @@ export interface RetentionResult {
       retainedLengthWithGravity: number;
       /**
        * Steady column of the drainage model with the meniscus sag (shear, gravity and end
-       * meniscus included; cut at the segment length): filled length and volume/(w d), m.
+       * meniscus included; cut at the segment length): filled length and volume/(w d), m. Null
+       * without a receding-front suction, or where the column does not bind and the caller
+       * asked for the binding mechanism alone (`unboundSteadyColumn: false`).
        */
       steadyColumn: { length: number; equivalentLength: number } | null;
     };
@@ -291,8 +299,10 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   const spillCurvature = (2 * Math.sin(Math.min(90, angles.advancing) * DEG)) / w;
   const endCurvature = input.grooveEnds === 'closed' || segments > 1 ? spillCurvature : 0;
   // One sampling of the column's integrand serves every cut (the segment, and the barrier-spacing search below).
+  // Where pinning binds the column is only reported, and a caller may leave it out.
+  const columnWanted = binding === 'capillary-back-pressure' || input.unboundSteadyColumn !== false;
   const columnFor =
-    curvature.curvature > 0
+    curvature.curvature > 0 && columnWanted
       ? steadyColumnProfile({
           grooveWidth: w,
           grooveDepth: d,
