@@ -77,14 +77,20 @@ function allFinite(value: unknown): boolean {
     for (let i = 0; i < view.length; i++) if (!Number.isFinite(view[i])) return false;
     return true;
   }
+  // Members that are numbers or strings (most of them) are checked here, without a call.
   if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
+    for (let i = 0; i < value.length; i++) if (!finiteMember(value[i])) return false;
     return true;
   }
   // Object.values walks own enumerable properties only, as JSON does (faster than for…in with a hasOwn test).
   const values = Object.values(value);
-  for (let i = 0; i < values.length; i++) if (!allFinite(values[i])) return false;
+  for (let i = 0; i < values.length; i++) if (!finiteMember(values[i])) return false;
   return true;
+}
+
+function finiteMember(member: unknown): boolean {
+  if (typeof member === 'number') return Number.isFinite(member);
+  return member === null || typeof member !== 'object' || allFinite(member);
 }
 
 /** Path of the first non-finite number in a value, or null when every number is finite. */
