@@ -136,8 +136,9 @@ export interface MechanismOptions {
    */
   marginsOnly?: boolean;
   /**
-   * The base design's drainage settled early (its evaluation's `drainageSettled`): a sensitivity step near it
-   * reads the steady share without solving the finite-volume timeline.
+   * How the base design's share at the service time was read (its evaluation's `drainageSettled`), for a sensitivity
+   * step near it: true, the steady share, without solving the finite-volume timeline; false, its own timeline's last
+   * point. Undefined: decided from this design's own timeline.
    */
   drainageSettled?: boolean;
 }
@@ -244,6 +245,8 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
       // The assessment reads the binding mechanism's share and timeline, never the column of one that does not bind.
       unboundSteadyColumn: false,
       ...(options.drainageSettled === true ? { finiteVolumeTimeline: false } : {}),
+      // A sensitivity step told how to read the share needs the timeline's last point only (it lies at the service time).
+      ...(options.marginsOnly && options.drainageSettled !== undefined ? { timelinePoints: 2 } : {}),
     }),
   );
   let times = [0, serviceTime];

@@ -8,7 +8,8 @@
  * jumps (a wave regime changing within the step) shows as a large value. Where the
  * base design's drainage settled long before the service time, its retention margin
  * is the steady column's, and so is each step's: the steps skip the finite-volume
- * timeline, which a few-percent change of one knob cannot make unsettled.
+ * timeline, which a few-percent change of one knob cannot make unsettled. Where it did
+ * not, each step reads its own timeline at the service time, as the base does.
  */
 import type { DesignDocument } from './document.js';
 import type { EffectiveRequirements } from './assess-requirements.js';
@@ -105,7 +106,7 @@ export function assessSensitivities(
     const factor = forward ? 1 + relativeStep : 1 - relativeStep;
     const perturbedValue = value * factor;
     const perturbed = new DesignContext(withKnob(ctx.document, knob, perturbedValue), ctx.catalogue);
-    const outcome = evaluateMechanisms(perturbed, requirements, { marginsOnly: true, ...(drainageSettled ? { drainageSettled } : {}) }).mechanisms;
+    const outcome = evaluateMechanisms(perturbed, requirements, { marginsOnly: true, drainageSettled }).mechanisms;
     const derivatives: KnobSensitivity['marginDerivatives'] = {};
     for (const name of MECHANISMS) {
       const before = baseMargins[name];

@@ -220,7 +220,7 @@ export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 've
 /** POST /v1/retention: how much lubricant stays in the grooves, and how fast the rest drains. */
 export function lubricantRetention(
   ctx: DesignContext,
-  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean; unboundSteadyColumn?: boolean } = {},
+  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean; unboundSteadyColumn?: boolean; timelinePoints?: number } = {},
 ): Answer<Omit<RetentionResult, 'verdict'>> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
@@ -261,6 +261,7 @@ export function lubricantRetention(
       ...(solubility === undefined ? {} : { solubility: { value: solubility, unit: 'kg/m3' as const } }),
       ...(overrides.finiteVolumeTimeline === undefined ? {} : { finiteVolumeTimeline: overrides.finiteVolumeTimeline }),
       ...(overrides.unboundSteadyColumn === undefined ? {} : { unboundSteadyColumn: overrides.unboundSteadyColumn }),
+      ...(overrides.timelinePoints === undefined ? {} : { timelinePoints: overrides.timelinePoints }),
     });
     notes.merge(retention);
     return lift(retention.result);

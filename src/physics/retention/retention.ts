@@ -100,6 +100,8 @@ export interface RetentionInput {
    * (an assessment).
    */
   unboundSteadyColumn?: boolean;
+  /** Points of the returned timeline (default 150; 2 to 200): fewer for a caller that reads only its ends. */
+  timelinePoints?: number;
   /**
    * Solve the finite-volume timeline where capillary back-pressure binds (default true). false takes the
    * lumped plug's timeline instead: for a caller that already knows the drainage has settled long before the
@@ -347,6 +349,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       duration: input.duration,
       retainedLength,
       finiteVolume: useFiniteVolume,
+      ...(input.timelinePoints === undefined ? {} : { timelinePoints: input.timelinePoints }),
     },
     notes,
   );

@@ -11,7 +11,7 @@ import { pressureDrivenGrooveFlux, shearDrivenGrooveFlux } from '../groove/groov
 import { lumpedDrainageTime, lumpedRetainedLength, solveDrainage, type DrainageInput, type TimelinePoint } from './drainage.js';
 
 /** The drainage model's inputs, plus what the choice between the two timelines needs. */
-export interface TimelineInput extends Omit<DrainageInput, 'cellsPerSegment' | 'timelinePoints' | 'maxSteps'> {
+export interface TimelineInput extends Omit<DrainageInput, 'cellsPerSegment' | 'maxSteps'> {
   /** Steady retained length of the binding mechanism, m (where the lumped plug stops). */
   retainedLength: number;
   /** Whether the capillary mechanism binds, so the finite-volume model applies. */
@@ -34,7 +34,7 @@ function lumpedTimeline(input: TimelineInput, notes: Notes): Timeline {
   );
   const initialLength = input.initialFill * segmentLength;
   const stopLength = Math.min(input.retainedLength, initialLength);
-  const points = 150;
+  const points = Math.max(2, Math.min(200, input.timelinePoints ?? 150));
   const timeline: TimelinePoint[] = [];
   for (let k = 0; k < points; k++) {
     const t = input.duration * (k / (points - 1)) ** 2;
