@@ -22,4 +22,6 @@ EXPOSE 8080
 HEALTHCHECK --interval=15s --timeout=3s --start-period=10s --retries=3 \
   CMD node -e "fetch('http://127.0.0.1:'+(process.env.OILSKIN_PORT||process.env.PORT||8080)+'/healthz').then(r=>process.exit(r.ok?0:1)).catch(()=>process.exit(1))"
 STOPSIGNAL SIGTERM
-CMD ["node", "dist/src/api/server.js"]
+# The main thread's heap is bounded (the solver threads have their own limits, OILSKIN_WORKER_MEMORY_MB): within it V8
+# collects before its committed heap drifts, so the RSS stays flat while a sweep streams (bench/sweep.ts).
+CMD ["node", "--max-old-space-size=384", "dist/src/api/server.js"]

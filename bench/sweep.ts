@@ -7,14 +7,16 @@
  *     (what the design window evaluates per candidate): the engine's share of the cost;
  *  Rates are given per second of wall time and per second of the process's CPU time (all threads).
  *  4. a design window over about 10⁴ candidates (105 × 105 lattice, pitch fraction fixed) on the pool, wall time;
- *  5. peak RSS while streaming --rows NDJSON rows of a flow sweep to a sink that honours back-pressure.
- * Run: npx tsx bench/sweep.ts [--threads 2] [--points 20000] [--rows 1000000] [--skip-window] [--skip-rss] [--only-rss]
+ *  5. peak RSS while streaming --rows NDJSON rows of a flow sweep to a sink that honours back-pressure (run it with
+ *     the service's heap bound, --max-old-space-size=384 as in `npm start` and the image, for the service's figure).
+ * Run: node --expose-gc --max-old-space-size=384 --import tsx bench/sweep.ts [--threads 2] [--points 20000] [--rows 1000000] [--skip-window] [--skip-rss] [--only-rss]
  */
 import { readFileSync } from 'node:fs';
 import os from 'node:os';
 import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { Readable } from 'node:stream';
+import { getHeapStatistics } from 'node:v8';
 import { runInline } from '../src/api/calculation.js';
 import { createSolverPool } from '../src/api/pool.js';
 import { flowCalculation } from '../src/api/routes/flow.js';
@@ -198,6 +200,6 @@ if (!process.argv.includes('--skip-rss')) {
   clearInterval(sampler);
   await streamPool.close();
   console.log(
-    `NDJSON stream of ${fmt(rows)} rows: ${((performance.now() - start) / 1000).toFixed(1)} s, RSS at start ${(rssStart / 2 ** 20).toFixed(0)} MB, peak ${(peak / 2 ** 20).toFixed(0)} MB; ${marks.join(', ')}`,
+    `NDJSON stream of ${fmt(rows)} rows: ${((performance.now() - start) / 1000).toFixed(1)} s, main heap limit ${(getHeapStatistics().heap_size_limit / 2 ** 20).toFixed(0)} MB, RSS at start ${(rssStart / 2 ** 20).toFixed(0)} MB, peak ${(peak / 2 ** 20).toFixed(0)} MB; ${marks.join(', ')}`,
   );
 }

@@ -65,6 +65,14 @@ describe('Dockerfile and compose', () => {
     expect(dockerfile).toContain('dist/src/api/server.js');
     expect(pkg.scripts.start).toContain('dist/src/api/server.js');
   });
+  it('bounds the main thread’s heap the same way in the image and in `npm start` (RSS flat while a sweep streams: bench/sweep.ts)', () => {
+    const pkg = JSON.parse(read('package.json'));
+    const flag = /--max-old-space-size=(\d+)/;
+    const image = dockerfile.match(new RegExp(`CMD \\[[^\\]]*"${flag.source}"`));
+    const start = (pkg.scripts.start as string).match(flag);
+    expect(image?.[1]).toBeDefined();
+    expect(start?.[1]).toBe(image?.[1]);
+  });
   it('compose maps the container port the service listens on', () => {
     const docs = parseAllDocuments(read('docker/compose.yaml')).map((d) => d.toJS());
     const svc = docs[0].services.oilskin;
