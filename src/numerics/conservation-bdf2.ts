@@ -60,6 +60,12 @@ export interface ChainIntegrationOptions {
   maxNewtonIterations?: number;
   /** Keep the Newton matrix while the iteration contracts fast (default true); false forms it every iteration. */
   simplifiedNewton?: boolean;
+  /**
+   * End early once the chain is at rest: when, after an accepted step, no cell's rate times the time left exceeds
+   * this (state units), nor the loss rate times the time left this fraction of the initial amount, the state is
+   * kept to t1 (reported there through onStep, not counted as a step). Off by default.
+   */
+  restTolerance?: number;
   /** Budget of step attempts, accepted and rejected alike, so that the work is bounded before the integration starts (default 200 000). */
   maxSteps?: number;
   /** Called after every accepted step with the time, state and cumulative loss. */
@@ -111,6 +117,7 @@ export function integrateConservationChain(
   const newtonTol = options.newtonTolerance ?? 1e-12;
   const maxNewton = options.maxNewtonIterations ?? 12;
   const residualFraction = options.newtonResidualFraction ?? 0.01;
+  const restTolerance = options.restTolerance;
   const simplified = options.simplifiedNewton ?? true;
   const maxSteps = options.maxSteps ?? 200_000;
   const maxStep = options.maxStep ?? t1 - t0;
@@ -336,6 +343,18 @@ export function integrateConservationChain(
     hPrev = h;
     steps++;
     options.onStep?.(t, y, loss);
+    if (restTolerance !== undefined && t < t1) {
+      // At rest: the rates of the converged state (those the flux-form update used) would move no cell by more than
+      // restTolerance over the rest of the interval, and in an autonomous chain a state at rest stays there. The
+      // integration ends at t1 with the state unchanged (conservation untouched).
+      let fastest = 0;
+      for (let i = 0; i < n; i++) fastest = Math.max(fastest, Math.abs(rate[i]));
+      if (fastest * (t1 - t) <= restTolerance && Math.abs(lossRate) * (t1 - t) <= restTolerance * Math.abs(scale)) {
+        t = t1;
+        options.onStep?.(t, y, loss);
+        break;
+      }
+    }
     const factor = errorNorm > 0 ? Math.min(2, Math.max(0.2, 0.9 * Math.cbrt(1 / errorNorm))) : 2;
     h = Math.min(maxStep, h * factor);
   }
