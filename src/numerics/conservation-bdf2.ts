@@ -22,6 +22,7 @@
  * extrapolation of the two previous states (a second-difference estimate of
  * the local error) against atol + rtol·|y|, with the usual cube-root update.
  */
+import { factorTridiagonal, solveFactoredTridiagonal } from './linalg.js';
 import { compensatedSum } from './series.js';
 
 /**
@@ -157,7 +158,7 @@ export function integrateConservationChain(
   let fluxEvaluations = 0;
   const trial = new Float64Array(n);
   /** The step's predictor (also the error reference). */
-  const predicted = new Float64Array(n);
+  const predictor = new Float64Array(n);
   // Rate Jacobian bands: jLower[i] = ∂rate_i/∂y_{i−1}, jDiag[i] = ∂rate_i/∂y_i, jUpper[i] = ∂rate_i/∂y_{i+1}.
   const jLower = new Float64Array(n);
   const jDiag = new Float64Array(n);
@@ -201,7 +202,6 @@ export function integrateConservationChain(
     for (let i = 0; i < n; i++) base[i] = a1 * y[i] - a2 * yPrev[i];
 
     // Predictor: linear extrapolation (also the error reference).
-    const predictor = predicted;
     for (let i = 0; i < n; i++) predictor[i] = first ? y[i] : y[i] + omega * (y[i] - yPrev[i]);
     trial.set(predictor);
     freshJacobian = false;
@@ -256,18 +256,11 @@ export function integrateConservationChain(
           upper[i] = -b * h * jUpper[i];
           lower[i] = -b * h * jLower[i];
         }
-        pivots[0] = diag[0];
-        for (let i = 1; i < n; i++) {
-          multipliers[i] = upper[i - 1] / pivots[i - 1];
-          pivots[i] = diag[i] - lower[i] * multipliers[i];
-        }
+        factorTridiagonal(lower, diag, upper, multipliers, pivots);
         factoredStep = b * h;
         factoredJacobian = jacobianEvaluations;
       }
-      // Same arithmetic as linalg's solveTridiagonal on this matrix.
-      step[0] = residual[0] / pivots[0];
-      for (let i = 1; i < n; i++) step[i] = (residual[i] - lower[i] * step[i - 1]) / pivots[i];
-      for (let i = n - 2; i >= 0; i--) step[i] -= multipliers[i + 1] * step[i + 1];
+      solveFactoredTridiagonal(lower, multipliers, pivots, residual, step);
       updates++;
       newtonTotal++;
       let largest = 0;

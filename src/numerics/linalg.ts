@@ -65,17 +65,46 @@ export function solveTridiagonal(
   rhs: ArrayLike<number>,
 ): Float64Array {
   const n = diag.length;
-  const c = new Float64Array(n);
+  const multipliers = new Float64Array(n);
+  const pivots = new Float64Array(n);
+  factorTridiagonal(lower, diag, upper, multipliers, pivots);
   const x = new Float64Array(n);
-  let beta = diag[0];
-  x[0] = rhs[0] / beta;
-  for (let i = 1; i < n; i++) {
-    c[i] = upper[i - 1] / beta;
-    beta = diag[i] - lower[i] * c[i];
-    x[i] = (rhs[i] - lower[i] * x[i - 1]) / beta;
-  }
-  for (let i = n - 2; i >= 0; i--) x[i] -= c[i + 1] * x[i + 1];
+  solveFactoredTridiagonal(lower, multipliers, pivots, rhs, x);
   return x;
+}
+
+/**
+ * The elimination of {@link solveTridiagonal} (the Thomas algorithm) kept apart from the substitutions, for a
+ * matrix solved with several right-hand sides: multipliers[i] = upper[i−1]/pivots[i−1], pivots[i] = diag[i] −
+ * lower[i]·multipliers[i] (pivots[0] = diag[0]).
+ */
+export function factorTridiagonal(
+  lower: ArrayLike<number>,
+  diag: ArrayLike<number>,
+  upper: ArrayLike<number>,
+  multipliers: Float64Array,
+  pivots: Float64Array,
+): void {
+  const n = diag.length;
+  pivots[0] = diag[0];
+  for (let i = 1; i < n; i++) {
+    multipliers[i] = upper[i - 1] / pivots[i - 1];
+    pivots[i] = diag[i] - lower[i] * multipliers[i];
+  }
+}
+
+/** Forward and back substitution with the factors of {@link factorTridiagonal}; writes the solution to x. */
+export function solveFactoredTridiagonal(
+  lower: ArrayLike<number>,
+  multipliers: ArrayLike<number>,
+  pivots: ArrayLike<number>,
+  rhs: ArrayLike<number>,
+  x: Float64Array,
+): void {
+  const n = pivots.length;
+  x[0] = rhs[0] / pivots[0];
+  for (let i = 1; i < n; i++) x[i] = (rhs[i] - lower[i] * x[i - 1]) / pivots[i];
+  for (let i = n - 2; i >= 0; i--) x[i] -= multipliers[i + 1] * x[i + 1];
 }
 
 /**

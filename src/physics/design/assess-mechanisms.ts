@@ -115,15 +115,14 @@ function valueAt(times: readonly number[], values: readonly number[], t: number)
 const SETTLED_SHARE = 0.05;
 
 /**
- * Whether a finite-volume drainage (capillary back-pressure binding) settled long before the service time:
+ * Whether a finite-volume drainage (capillary back-pressure binding), sampled at `times` as `filled`, settled long
+ * before the service time:
  * 90 % of its change within {@link SETTLED_SHARE} of it, and no visible change over its second half (a slow
  * creep towards the retained length, which the timeline's end would show, is not settled).
  */
-function settledEarly(r: Omit<RetentionResult, 'verdict'>, serviceTime: number): boolean {
+function settledEarly(r: Omit<RetentionResult, 'verdict'>, times: readonly number[], filled: readonly number[], serviceTime: number): boolean {
   if (r.timelineModel !== 'finite-volume' || r.bindingMechanism !== 'capillary-back-pressure' || r.timeTo90PercentChange === null) return false;
   if (r.timeTo90PercentChange > SETTLED_SHARE * serviceTime) return false;
-  const times = r.timeline.map((p) => p.time);
-  const filled = r.timeline.map((p) => p.retainedFraction);
   return Math.abs(valueAt(times, filled, serviceTime) - valueAt(times, filled, serviceTime / 2)) <= 1e-3;
 }
 
@@ -258,7 +257,7 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     const r = retention.answer.result;
     times = r.timeline.map((p) => p.time);
     filled = r.timeline.map((p) => p.retainedFraction);
-    drainageSettled = options.drainageSettled ?? settledEarly(r, serviceTime);
+    drainageSettled = options.drainageSettled ?? settledEarly(r, times, filled, serviceTime);
     const atService = drainageSettled ? r.retainedFraction : valueAt(times, filled, serviceTime);
     filledAtService = atService;
     if (drainageSettled && options.drainageSettled === undefined) {

@@ -59,7 +59,7 @@ export const KADER_THERMAL_SLOPE = 2.12;
  * wall-function boundary condition named after Kader in ESI's OpenFOAM-derived FOAMcore
  * (alphatKaderWallFunctionFvPatchScalarField.C: Beta = sqr(3.85 pow(Pr, 0.333) − 1.3) + 2.12 log(Pr)), the same
  * expression in the thermal wall law of CEA's TRUST code (Paroi_loi_WW_scal_VEF.cpp), and two smaller codes whose
- * comments give it beside the citation "Kader (1981)"; read through the public code index (i16-cite4).
+ * comments give it beside the citation "Kader (1981)"; read through the public code index.
  * Example: Pr = 0.71 → 3.8306 (evaluated).
  */
 export function kaderThermalConstant(prandtl: number): number {

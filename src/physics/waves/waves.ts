@@ -218,55 +218,6 @@ export function waveMarginAtDesign(input: WavesInput): { regime: WaveRegime; mar
 }
 
 /**
- * Evaluate interface wave stability for one design.
- *
- * Inputs (SI): scenario.texture.grooveWidth w and grooveDepth d (m);
- * scenario.lubricant and scenario.workingFluid densities (kg/m³) and the
- * working fluid's viscosity μ_w (Pa·s); scenario.flow.frictionVelocity u_τ
- * (m/s); scenario.interfacialTension γ (N/m, required); gravity.inclination
- * (degrees from horizontal) and facing; slipLengthLongitudinal b_∥ (m).
- *
- * Choices (documented where the issue is silent):
- *  - ℓ_ν = ν_w/u_τ from the working fluid, so We_τ = μ_w u_τ/γ = ρu_τ²ℓ_ν/γ
- *    holds exactly.
- *  - Velocity difference across the interface at the wave's scale: the mean
- *    velocity (Spalding's law, linear in laminar flow) at the decay height
- *    1/K* = w/(√3π) of the most dangerous confined wave, relative to the
- *    interface. Both layers drift with the interface slip velocity
- *    u_s = u_τ² b_∥/ν (the lubricant is an inviscid plug at the interface
- *    speed), which changes the wave's speed relative to the wall but not ΔU.
- *  - Layer depths: h₁ = d; h₂ = channel height (half of it with two textured
- *    walls), pipe radius, or deep. Inertia a_j = ρ_j coth(K h_j) with the
- *    total wavenumber K = √(k² + (π/w)²).
- *  - g_⊥ = g cos(inclination) towards the wall for an upward-facing wall,
- *    away from it for a downward-facing one, 0 for a vertical wall.
- *  - p′_rms band 2.5–3.4 τ_w; the upper value is used for the check
- *    (conservative); zero in laminar flow. Transitional flow is treated as
- *    turbulent.
- *  - Critical layer: the slowest confined wave travels at u_s + c_min
- *    relative to the wall (drift of the interface plus its intrinsic speed;
- *    advection by the outer stream is left out), and its critical height is
- *    where the mean velocity relative to the interface equals c_min. The
- *    largest mean velocity is the Poiseuille centreline (laminar), the wall
- *    law at y⁺ = Re_τ (turbulent channel or pipe), the free stream (plate), or
- *    unknown (wall-shear input).
- *  - Rayleigh–Taylor: the pinned fundamental mode with k → 0 (long grooves)
- *    is stable while Δρ g_⊥ w²/γ < π² (the capillary cut-off √(Δρg/γ) of
- *    Chandrasekhar 1961 ch. X must stay below π/w).
- *  - Design limits vary one quantity with everything else fixed (for the
- *    friction velocity: the flow class and p′/τ_w band stay as given).
- *
- * Worked example (examples/waves-worked-example.json, an invented demo):
- * 30 µm wide, 30 µm deep n-hexadecane grooves (γ = 53 mN/m), water at 1 m/s
- * in a 10 mm channel (u_τ = 0.0604 m/s): w⁺ = 1.81, We_τ = 1.14×10⁻³,
- * Λ = 0.189 → calm, margin 0.987; ΔU_c = 5.75 m/s against ΔU = 0.020 m/s;
- * widest calm groove 126 µm (w⁺ = 7.6), lowest calm tension 0.71 mN/m,
- * highest calm friction velocity 0.177 m/s.
- *
- * @throws DomainError when interfacialTension is absent or a length,
- *   density, viscosity or the friction velocity is not positive and finite.
- */
-/**
  * The waves verdict at the design point with every note it carries (models, sources, assumptions and the
  * design-point warnings: laminar flow, oblique grooves, static instability, critical layer, Rayleigh–Taylor,
  * depinning, roughness): what {@link evaluateWaves} and {@link wavesVerdict} share. Leaves out the growth-rate
@@ -386,6 +337,55 @@ export function wavesVerdict(input: WavesInput): Outcome<{ regime: WaveRegime; m
   return outcome({ regime, margin, governingCriterion: governing(at.ratios) }, notes);
 }
 
+/**
+ * Evaluate interface wave stability for one design.
+ *
+ * Inputs (SI): scenario.texture.grooveWidth w and grooveDepth d (m);
+ * scenario.lubricant and scenario.workingFluid densities (kg/m³) and the
+ * working fluid's viscosity μ_w (Pa·s); scenario.flow.frictionVelocity u_τ
+ * (m/s); scenario.interfacialTension γ (N/m, required); gravity.inclination
+ * (degrees from horizontal) and facing; slipLengthLongitudinal b_∥ (m).
+ *
+ * Choices (documented where the issue is silent):
+ *  - ℓ_ν = ν_w/u_τ from the working fluid, so We_τ = μ_w u_τ/γ = ρu_τ²ℓ_ν/γ
+ *    holds exactly.
+ *  - Velocity difference across the interface at the wave's scale: the mean
+ *    velocity (Spalding's law, linear in laminar flow) at the decay height
+ *    1/K* = w/(√3π) of the most dangerous confined wave, relative to the
+ *    interface. Both layers drift with the interface slip velocity
+ *    u_s = u_τ² b_∥/ν (the lubricant is an inviscid plug at the interface
+ *    speed), which changes the wave's speed relative to the wall but not ΔU.
+ *  - Layer depths: h₁ = d; h₂ = channel height (half of it with two textured
+ *    walls), pipe radius, or deep. Inertia a_j = ρ_j coth(K h_j) with the
+ *    total wavenumber K = √(k² + (π/w)²).
+ *  - g_⊥ = g cos(inclination) towards the wall for an upward-facing wall,
+ *    away from it for a downward-facing one, 0 for a vertical wall.
+ *  - p′_rms band 2.5–3.4 τ_w; the upper value is used for the check
+ *    (conservative); zero in laminar flow. Transitional flow is treated as
+ *    turbulent.
+ *  - Critical layer: the slowest confined wave travels at u_s + c_min
+ *    relative to the wall (drift of the interface plus its intrinsic speed;
+ *    advection by the outer stream is left out), and its critical height is
+ *    where the mean velocity relative to the interface equals c_min. The
+ *    largest mean velocity is the Poiseuille centreline (laminar), the wall
+ *    law at y⁺ = Re_τ (turbulent channel or pipe), the free stream (plate), or
+ *    unknown (wall-shear input).
+ *  - Rayleigh–Taylor: the pinned fundamental mode with k → 0 (long grooves)
+ *    is stable while Δρ g_⊥ w²/γ < π² (the capillary cut-off √(Δρg/γ) of
+ *    Chandrasekhar 1961 ch. X must stay below π/w).
+ *  - Design limits vary one quantity with everything else fixed (for the
+ *    friction velocity: the flow class and p′/τ_w band stay as given).
+ *
+ * Worked example (examples/waves-worked-example.json, an invented demo):
+ * 30 µm wide, 30 µm deep n-hexadecane grooves (γ = 53 mN/m), water at 1 m/s
+ * in a 10 mm channel (u_τ = 0.0604 m/s): w⁺ = 1.81, We_τ = 1.14×10⁻³,
+ * Λ = 0.189 → calm, margin 0.987; ΔU_c = 5.75 m/s against ΔU = 0.020 m/s;
+ * widest calm groove 126 µm (w⁺ = 7.6), lowest calm tension 0.71 mN/m,
+ * highest calm friction velocity 0.177 m/s.
+ *
+ * @throws DomainError when interfacialTension is absent or a length,
+ *   density, viscosity or the friction velocity is not positive and finite.
+ */
 export function evaluateWaves(input: WavesInput): Outcome<WavesResult> {
   const notes = new Notes();
   const core = wavesAtDesign(input, notes);

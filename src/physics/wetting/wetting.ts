@@ -64,7 +64,7 @@ export function warnNotWetting(notes: Notes): void {
 /**
  * Dispersive part of water's surface tension, N/m: 21.8 mN/m (Fowkes 1964; the ±0.7 and 20 °C from memory:
  * the paper was not reachable; probe-liquid tables read list the same 21.8 mN/m, corroboration only; searched
- * again in i16-cite4 by the citation "Fowkes (1964)" in the public code index: probe-liquid tables giving 21.8
+ * again by the citation "Fowkes (1964)" in the public code index: probe-liquid tables giving 21.8
  * for water cite Jasper 1972 and Good & van Oss 1991, not Fowkes).
  */
 export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
