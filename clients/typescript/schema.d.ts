@@ -95,7 +95,7 @@ export interface paths {
         put?: never;
         /**
          * Interface wave stability: calm, marginal or wavy
-         * @description Wall-unit numbers and the inertial–capillary number Λ = w⁺ We_τ^(1/3) (trade boundary Λ = 1; a calm verdict needs Λ below 2^(−1/3) ≈ 0.794, a factor two in pressure under it), confined Kelvin–Helmholtz stability with capillarity, gravity and finite depths (pinned fundamental spanwise mode), a critical-layer screen, depinning and Rayleigh–Taylor checks; design limits; the regime map when asked for (options.map, computed in the worker pool; without it the answer is computed inline). The interface drift comes from the closed-form slip length. Needs texture, lubricant, workingFluid, flow and an interfacial tension; orientation.facing on an inclined, not vertical wall.
+         * @description Wall-unit numbers and the inertial–capillary number Λ = w⁺ We_τ^(1/3) (trade boundary Λ = 1; a calm verdict needs Λ below 2^(−1/12) ≈ 0.944, a factor 2^(1/4) in pressure under it), confined Kelvin–Helmholtz stability with capillarity, gravity and finite depths (pinned fundamental spanwise mode), a critical-layer screen, depinning and Rayleigh–Taylor checks; design limits; the regime map when asked for (options.map, computed in the worker pool; without it the answer is computed inline). The interface drift comes from the closed-form slip length. Needs texture, lubricant, workingFluid, flow and an interfacial tension; orientation.facing on an inclined, not vertical wall.
          */
         post: operations["waves"];
         delete?: never;
@@ -1284,7 +1284,7 @@ export interface components {
                 bulkWeberNumber: number | null;
                 /** @description Λ = w⁺ We_τ^(1/3) */
                 inertialCapillaryNumber: number;
-                /** @description The trade boundary Λ = 1 between calm and wavy; the calm band ends at 2^(−1/3) ≈ 0.794 */
+                /** @description The trade boundary Λ = 1 between calm and wavy; the calm band ends at 2^(−1/12) ≈ 0.944 */
                 inertialCapillaryBoundary: number;
                 /** @description u_s = u_τ² b_∥/ν, m/s */
                 interfaceSlipVelocity: number;
@@ -1360,7 +1360,7 @@ export interface components {
                     maxGrooveWidth: number | null;
                 };
             };
-            /** @description Load ratio Π of each criterion (calm below ½ for all) */
+            /** @description Load ratio Π of each criterion (calm below 2^(−1/4) ≈ 0.841 for all) */
             loadRatios: {
                 "inertial-capillary": number;
                 "kelvin-helmholtz": number;
@@ -1370,7 +1370,7 @@ export interface components {
             /** @enum {string} */
             governingCriterion: "inertial-capillary" | "kelvin-helmholtz" | "depinning" | "rayleigh-taylor";
             /**
-             * @description calm: every Π < ½ (Λ < 0.794); wavy: Λ > 1.26 or a physical threshold crossed; marginal between
+             * @description calm: every Π < 2^(−1/4) ≈ 0.841 (Λ < 0.944); wavy: Λ > 2^(1/12) ≈ 1.059 or a physical threshold crossed; marginal between
              * @enum {string}
              */
             regime: "calm" | "marginal" | "wavy";
@@ -1901,7 +1901,7 @@ export interface components {
             dragReduction: number | null;
             /** @description Retained share of the groove volume at the service time */
             retainedFraction: number | null;
-            /** @description Waves margin 1 − Π_max/½ */
+            /** @description Waves margin 1 − Π_max/Π_calm (Π_calm = 2^(−1/4), the calm band edge) */
             waveMargin: number | null;
             problem?: string;
         } | null;

@@ -16,7 +16,7 @@ const WindowDesignSchema = z
     margins: z.record(z.string(), z.number()).openapi({ description: 'Margin of each requirement evaluated (dimensionless, ≥ 0 exactly when met)' }),
     dragReduction: nullableNumber.openapi({ description: 'Drag reduction credited at the service time' }),
     retainedFraction: nullableNumber.openapi({ description: 'Retained share of the groove volume at the service time' }),
-    waveMargin: nullableNumber.openapi({ description: 'Waves margin 1 − Π_max/½' }),
+    waveMargin: nullableNumber.openapi({ description: 'Waves margin 1 − Π_max/Π_calm (Π_calm = 2^(−1/4), the calm band edge)' }),
     problem: z.string().optional(),
   })
   .openapi('WindowDesign');

@@ -184,7 +184,7 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     const margin = (calmMargin - reserve) / (1 - reserve);
     mechanisms.waves = assessed(
       margin,
-      `${waveRegime}: the waves margin 1 − Π_max/½ (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
+      `${waveRegime}: the waves margin 1 − Π_max/Π_calm (${calmMargin.toPrecision(3)}) reaches the required reserve ${reserve}; margin = (m − reserve)/(1 − reserve)`,
       `${waveRegime} (governing: ${waves.answer.governing})`,
     );
     if (waveRegime === 'wavy') {

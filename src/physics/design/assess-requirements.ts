@@ -14,7 +14,7 @@ export interface AssessmentRequirements {
   minRetainedFraction?: number;
   /**
    * Share of the calm band's load that must stay unused, 0–1 (default 0: calm is enough).
-   * The waves verdict's margin m = 1 − Π_max/½ must reach it.
+   * The waves verdict's margin m = 1 − Π_max/Π_calm (physics/waves/criteria.ts) must reach it.
    */
   minWaveMargin?: number;
   /** Highest surfactant concentration the design must tolerate, mol/m³ (default: the water's stated concentration). */
@@ -36,7 +36,7 @@ export type EffectiveRequirements = {
  *   friction measurement (common practice, no source);
  * - retained half of the groove volume: a surface that has lost more than half of its lubricant within its service
  *   time is draining, not holding (our choice);
- * - calm band with no extra reserve: the calm band already sits a factor two in pressure under the trade boundary
+ * - calm band with no extra reserve: the calm band already sits a factor 2^(1/4) in pressure under the trade boundary
  *   (src/physics/waves/criteria.ts);
  * - half the clean slip kept at the tolerable concentration: the same "half-slip" concentration the surfactant
  *   endpoint reports;

@@ -46,7 +46,7 @@ export interface CandidateOutcome {
   label: string;
   /** The assessment's margin of every assessed mechanism. */
   margins: Partial<Record<RequirementName, number>>;
-  /** Drag reduction credited at the service time, retained share at the service time, waves margin m = 1 − Π_max/½. */
+  /** Drag reduction credited at the service time, retained share at the service time, waves margin m = 1 − Π_max/Π_calm. */
   dragReduction: number | null;
   retainedFraction: number | null;
   waveMargin: number | null;

@@ -9,18 +9,25 @@
  * wavy interfaces is Λ = 1, i.e. Π_Λ = 1 (common practice, no source); the
  * physical criteria have their thresholds at Π = 1.
  *
- * Bands (our own choice, a factor of two in the pressure ratio either side of
- * the boundary, so that a verdict of "calm" keeps a reserve):
- *   calm      every Π < ½             (Λ < 2^(−1/3) ≈ 0.794)
- *   marginal  otherwise, unless wavy   (0.794 ≤ Λ ≤ 2^(1/3) ≈ 1.26)
- *   wavy      Π_Λ > 2 (Λ > 1.26), or Π_KH, Π_dep or Π_RT ≥ 1
+ * Bands (our own choice): the marginal band spans a factor √2 in the load
+ * ratio, centred on the boundary (a factor 2^(1/4) either side), so that a
+ * verdict of "calm" keeps a reserve and yet one doubling of the Weber number
+ * (halving the tension doubles every Π) can carry a design from calm to
+ * wavy, as the trade reports it does for a liquid-infused channel wall at a
+ * bulk Reynolds number of about 3000 (calm at We = 100, wavy at We = 200;
+ * common practice, no source). An earlier band of a factor two either side
+ * put calm and wavy a factor four apart, so no doubling could cross it.
+ *   calm      every Π < 2^(−1/4) ≈ 0.841  (Λ < 2^(−1/12) ≈ 0.944)
+ *   marginal  otherwise, unless wavy      (0.944 ≤ Λ ≤ 2^(1/12) ≈ 1.059)
+ *   wavy      Π_Λ > 2^(1/4) ≈ 1.189 (Λ > 1.059), or Π_KH, Π_dep or Π_RT ≥ 1
  * So a design at Λ = 0.997 is marginal, not calm: it sits on the trade
  * boundary without the reserve a calm verdict promises.
  *
- * Verdict: passes when the regime is calm. Margin = 1 − Π_max/½ (the fraction
- * of the calm band's load still unused): 1 for an unloaded interface, 0 at the
- * calm edge, −1 on the trade boundary Λ = 1 (Π = 1), −3 at the wavy edge of
- * the scaling criterion (Π = 2). The design limits are where the margin is 0.
+ * Verdict: passes when the regime is calm. Margin = 1 − Π_max/Π_calm with
+ * Π_calm = 2^(−1/4) (the fraction of the calm band's load still unused): 1
+ * for an unloaded interface, 0 at the calm edge, 1 − 2^(1/4) ≈ −0.189 on the
+ * trade boundary Λ = 1 (Π = 1), 1 − √2 ≈ −0.414 at the wavy edge of the
+ * scaling criterion. The design limits are where the margin is 0.
  */
 import { brent } from '../../numerics/roots.js';
 import { criticalVelocityDifference, type TwoLayerInterface, type WavenumberExtremum } from './dispersion.js';
@@ -29,9 +36,11 @@ import { velocityPlusAtWallDistance } from '../flow/wall-profile.js';
 export type WaveRegime = 'calm' | 'marginal' | 'wavy';
 export type WaveCriterion = 'inertial-capillary' | 'kelvin-helmholtz' | 'depinning' | 'rayleigh-taylor';
 
+/** Half-width of the marginal band as a factor on the load ratio Π (see the module comment). */
+const BAND_FACTOR = 2 ** 0.25;
 /** Cut-offs of the load ratio Π (see the module comment). */
-export const CALM_LIMIT = 0.5;
-export const SCALING_WAVY_LIMIT = 2;
+export const CALM_LIMIT = 1 / BAND_FACTOR;
+export const SCALING_WAVY_LIMIT = BAND_FACTOR;
 export const PHYSICAL_WAVY_LIMIT = 1;
 /**
  * p′_rms/τ_w band attributed to Farabee & Casarella 1991 (farabeeCasarella1991, whose citation says the band
@@ -159,7 +168,7 @@ export function regimeOf(ratios: Record<WaveCriterion, number>): WaveRegime {
   return Math.max(...Object.values(ratios)) >= CALM_LIMIT ? 'marginal' : 'calm';
 }
 
-/** Verdict margin: 1 − Π_max/½ (module comment). */
+/** Verdict margin: 1 − Π_max/Π_calm (module comment). */
 export function marginOf(ratios: Record<WaveCriterion, number>): number {
   return 1 - Math.max(...Object.values(ratios)) / CALM_LIMIT;
 }
@@ -186,11 +195,15 @@ const CRITERION_WORDS: Record<WaveCriterion, string> = {
   'rayleigh-taylor': 'Rayleigh–Taylor load Δρg_⊥w²/(π²γ)',
 };
 
+/** The calm band's edge in words, for the criterion and the endpoint's description. */
+export const CALM_WORDS =
+  `${CALM_LIMIT.toPrecision(3)} (Λ = w⁺We_τ^(1/3) below ${Math.cbrt(CALM_LIMIT).toPrecision(3)}, a factor 2^(1/4) in pressure under the trade boundary Λ = 1)`;
+
 /** The criterion of the waves verdict in words, with the governing load. */
 export function wavesCriterion(ratios: Record<WaveCriterion, number>): string {
   const key = governing(ratios);
   return (
-    `calm: every load ratio Π below ½ (Λ = w⁺We_τ^(1/3) below 2^(−1/3) ≈ 0.794, a factor two in pressure under the trade boundary Λ = 1); ` +
-    `governing: ${CRITERION_WORDS[key]} = ${ratios[key].toPrecision(3)}; margin = 1 − Π_max/½`
+    `calm: every load ratio Π below ${CALM_WORDS}; ` +
+    `governing: ${CRITERION_WORDS[key]} = ${ratios[key].toPrecision(3)}; margin = 1 − Π_max/${CALM_LIMIT.toPrecision(3)}`
   );
 }

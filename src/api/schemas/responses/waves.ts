@@ -16,7 +16,7 @@ export const WavesResultSchema = z
         frictionWeberNumber: num('We_f = ρ_w u_τ² w/γ = w⁺ We_τ'),
         bulkWeberNumber: numOrNull('We_b = ρ_w U_b² w/γ; null without a bulk velocity'),
         inertialCapillaryNumber: num('Λ = w⁺ We_τ^(1/3)'),
-        inertialCapillaryBoundary: num('The trade boundary Λ = 1 between calm and wavy; the calm band ends at 2^(−1/3) ≈ 0.794'),
+        inertialCapillaryBoundary: num('The trade boundary Λ = 1 between calm and wavy; the calm band ends at 2^(−1/12) ≈ 0.944'),
         interfaceSlipVelocity: num('u_s = u_τ² b_∥/ν, m/s'),
       })
       .openapi({ description: 'The wall-unit scaling of the design' }),
@@ -60,9 +60,9 @@ export const WavesResultSchema = z
     }),
     loadRatios: z
       .strictObject(Object.fromEntries(criteria.map((c) => [c, z.number()])) as Record<(typeof criteria)[number], z.ZodNumber>)
-      .openapi({ description: 'Load ratio Π of each criterion (calm below ½ for all)' }),
+      .openapi({ description: 'Load ratio Π of each criterion (calm below 2^(−1/4) ≈ 0.841 for all)' }),
     governingCriterion: z.enum(criteria),
-    regime: WaveRegimeSchema.openapi({ description: 'calm: every Π < ½ (Λ < 0.794); wavy: Λ > 1.26 or a physical threshold crossed; marginal between' }),
+    regime: WaveRegimeSchema.openapi({ description: 'calm: every Π < 2^(−1/4) ≈ 0.841 (Λ < 0.944); wavy: Λ > 2^(1/12) ≈ 1.059 or a physical threshold crossed; marginal between' }),
     designLimits: z.strictObject({
       maxGrooveWidth: numOrNull('Widest groove keeping the regime calm, m'),
       maxGrooveWidthPlus: numOrNull('In viscous lengths'),
