@@ -1119,6 +1119,8 @@ export interface components {
             timeTo90PercentChange: number | null;
             /** @description Relative volume conservation of the finite-volume solve */
             conservationError: number | null;
+            /** @description Cells per segment of the finite-volume timeline (null for the lumped plug model) */
+            timelineCellsPerSegment: number | null;
             /** @description s */
             dissolutionLifetime: number | null;
             recommendations: {

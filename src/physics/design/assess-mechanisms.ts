@@ -12,6 +12,7 @@ import { DomainError, MissingInputError } from '../../core/errors.js';
 import { Notes } from '../../core/notes.js';
 import type { Verdict } from '../../core/values.js';
 import type { RetentionResult } from '../retention/retention.js';
+import { COARSE_CELLS_PER_SEGMENT } from '../retention/timeline.js';
 import type { DragChange } from '../slip/drag.js';
 import type { SlipMethod } from '../slip/slip.js';
 import type { WaveRegime } from '../waves/criteria.js';
@@ -236,18 +237,38 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
   }
 
   // Retention on the assessment's slip solution; the timeline runs to the service time. A sensitivity step of a
-  // design whose drainage settled early needs only the steady share: no finite-volume timeline.
-  const retention = attempt(() =>
-    lubricantRetention(ctx, {
-      method,
-      duration: serviceTime,
-      // The assessment reads the binding mechanism's share and timeline, never the column of one that does not bind.
-      unboundSteadyColumn: false,
-      ...(options.drainageSettled === true ? { finiteVolumeTimeline: false } : {}),
-      // A sensitivity step told how to read the share needs the timeline's last point only (it lies at the service time).
-      ...(options.marginsOnly && options.drainageSettled !== undefined ? { timelinePoints: 2 } : {}),
-    }),
-  );
+  // design whose drainage settled early needs only the steady share: no finite-volume timeline. A design that
+  // decides this from its own timeline lets a drainage the lumped plug settles early be solved on the coarse grid
+  // (the share is then the steady column's), and solves it again on the full grid if it did not settle after all.
+  const retentionWith = (settledBy: number | undefined) =>
+    attempt(() =>
+      lubricantRetention(ctx, {
+        method,
+        duration: serviceTime,
+        // The assessment reads the binding mechanism's share and timeline, never the column of one that does not bind.
+        unboundSteadyColumn: false,
+        ...(options.drainageSettled === true ? { finiteVolumeTimeline: false } : {}),
+        // A sensitivity step told how to read the share needs the timeline's last point only (it lies at the service time).
+        ...(options.marginsOnly && options.drainageSettled !== undefined ? { timelinePoints: 2 } : {}),
+        ...(settledBy === undefined ? {} : { settledBy }),
+      }),
+    );
+  let retention = retentionWith(options.drainageSettled === undefined ? SETTLED_SHARE * serviceTime : undefined);
+  if ('answer' in retention) {
+    const r = retention.answer.result;
+    const coarse = r.timelineCellsPerSegment === COARSE_CELLS_PER_SEGMENT;
+    if (
+      coarse &&
+      !settledEarly(
+        r,
+        r.timeline.map((p) => p.time),
+        r.timeline.map((p) => p.retainedFraction),
+        serviceTime,
+      )
+    ) {
+      retention = retentionWith(undefined);
+    }
+  }
   let times = [0, serviceTime];
   let filled = [1, 1];
   let filledAtService = 1;
@@ -262,7 +283,7 @@ export function evaluateMechanisms(ctx: DesignContext, requirements: EffectiveRe
     filledAtService = atService;
     if (drainageSettled && options.drainageSettled === undefined) {
       notes.assume(
-        `Retention at the service time: the drainage settles within ${r.timeTo90PercentChange?.toPrecision(3)} s (90 % of its change), long before ${serviceTime} s, so the share at the service time is the steady column's (${r.retainedFraction.toPrecision(4)}, by quadrature); the finite-volume timeline, first order in its cells, ends at ${r.finalRetainedFraction.toPrecision(4)}.`,
+        `Retention at the service time: the drainage settles within ${r.timeTo90PercentChange?.toPrecision(3)} s (90 % of its change), long before ${serviceTime} s, so the share at the service time is the steady column's (${r.retainedFraction.toPrecision(4)}, by quadrature); the finite-volume timeline, first order in its ${r.timelineCellsPerSegment} cells per segment, ends at ${r.finalRetainedFraction.toPrecision(4)}.`,
       );
     }
     const required = requirements.minRetainedFraction.value as number;

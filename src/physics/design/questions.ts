@@ -220,7 +220,7 @@ export function interfaceWaves(ctx: DesignContext): Answer<Omit<WavesResult, 've
 /** POST /v1/retention: how much lubricant stays in the grooves, and how fast the rest drains. */
 export function lubricantRetention(
   ctx: DesignContext,
-  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean; unboundSteadyColumn?: boolean; timelinePoints?: number } = {},
+  overrides: { method?: SlipMethod; duration?: number; finiteVolumeTimeline?: boolean; unboundSteadyColumn?: boolean; timelinePoints?: number; settledBy?: number } = {},
 ): Answer<Omit<RetentionResult, 'verdict'>> {
   const notes = new Notes();
   return answer(ctx, notes, () => {
@@ -262,6 +262,7 @@ export function lubricantRetention(
       ...(overrides.finiteVolumeTimeline === undefined ? {} : { finiteVolumeTimeline: overrides.finiteVolumeTimeline }),
       ...(overrides.unboundSteadyColumn === undefined ? {} : { unboundSteadyColumn: overrides.unboundSteadyColumn }),
       ...(overrides.timelinePoints === undefined ? {} : { timelinePoints: overrides.timelinePoints }),
+      ...(overrides.settledBy === undefined ? {} : { settledBy: overrides.settledBy }),
     });
     notes.merge(retention);
     return lift(retention.result);

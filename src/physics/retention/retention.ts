@@ -108,6 +108,12 @@ export interface RetentionInput {
    * duration and reads only the steady share (an assessment's sensitivity steps).
    */
   finiteVolumeTimeline?: boolean;
+  /**
+   * For a caller that reads the steady share instead of the timeline's end once the drainage has settled within
+   * this time, s (an assessment): a drainage the lumped plug settles well within it gets a coarser finite-volume
+   * timeline (./timeline.ts `settledBy`); `timelineCellsPerSegment` says which.
+   */
+  settledBy?: number;
 }
 
 export type RetentionMechanism = 'capillary-back-pressure' | 'contact-line-pinning' | 'dissolution' | 'none';
@@ -173,6 +179,8 @@ export interface RetentionResult {
   timeTo90PercentChange: number | null;
   /** Volume conservation of the finite-volume solve (relative), null for the lumped model. */
   conservationError: number | null;
+  /** Cells per segment of the finite-volume timeline, null for the lumped model. */
+  timelineCellsPerSegment: number | null;
   dissolutionLifetime: number | null;
   recommendations: {
     /** Longest barrier spacing that keeps the target fill at steady state, m. */
@@ -332,7 +340,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
   // Timeline.
   const useFiniteVolume =
     input.finiteVolumeTimeline !== false && (binding === 'capillary-back-pressure' || binding === 'dissolution') && curvature.curvature > 0 && holds.capillary >= holds.pinning;
-  const { timeline, timelineModel, finalRetainedFraction, timeTo90, conservationError } = drainageTimeline(
+  const { timeline, timelineModel, finalRetainedFraction, timeTo90, conservationError, cellsPerSegment } = drainageTimeline(
     {
       grooveWidth: w,
       grooveDepth: d,
@@ -350,6 +358,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       retainedLength,
       finiteVolume: useFiniteVolume,
       ...(input.timelinePoints === undefined ? {} : { timelinePoints: input.timelinePoints }),
+      ...(input.settledBy === undefined ? {} : { settledBy: input.settledBy }),
     },
     notes,
   );
@@ -442,6 +451,7 @@ export function evaluateRetention(input: RetentionInput): Outcome<RetentionResul
       finalRetainedFraction,
       timeTo90PercentChange: timeTo90,
       conservationError,
+      timelineCellsPerSegment: cellsPerSegment,
       dissolutionLifetime: dissolution.lifetime,
       recommendations: {
         maxSegmentLength,

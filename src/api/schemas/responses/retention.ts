@@ -53,6 +53,7 @@ export const RetentionResultSchema = z
     finalRetainedFraction: num('Retained share at the end of the timeline (a warning explains a difference from retainedFraction)'),
     timeTo90PercentChange: numOrNull('s'),
     conservationError: numOrNull('Relative volume conservation of the finite-volume solve'),
+    timelineCellsPerSegment: z.number().int().nullable().openapi({ description: 'Cells per segment of the finite-volume timeline (null for the lumped plug model)' }),
     dissolutionLifetime: numOrNull('s'),
     recommendations: z.strictObject({
       maxSegmentLength: num('Longest barrier spacing that keeps the target fill at steady state, m'),
