@@ -27,42 +27,34 @@ function largestGap(a: { time: number; retainedFraction: number }[], b: { time: 
 // Measured gaps: 0.0095 and 0.042 of the groove volume, both in the steep part of the drainage (the 120-cell solution
 // is itself first order in its cells: its steady volume lies 2.8 % off the steady column's quadrature in a 50 mm
 // groove, src/physics/retention/drainage.ts).
-const designs: [string, RetentionInput, number][] = [
-  [
-    'a 20 mm groove settling within seconds',
-    {
-      scenario: {
-        texture: { grooveWidth: 30e-6, grooveDepth: 15e-6, pitch: 60e-6, flowAngle: 0 },
-        lubricant: fluid('oil', { density: 773, viscosity: 3.4e-3 }),
-        workingFluid: fluid('water', {}),
-        flow: evaluateFlow({ density: 998, viscosity: 1.0e-3 }, { kind: 'channel', height: 2e-3, bulkVelocity: 0.5 }).result,
-        interfacialTension: 0.0535,
-      } satisfies Scenario,
-      contactAngles: { underWorkingFluid: { advancing: 60, receding: 20 } },
-      grooveLength: 0.02,
-      grooveEnds: 'open',
-      duration: 7200,
-    },
-    0.012,
-  ],
-  [
-    'a 100 mm groove of a wetting lubricant draining within a minute',
-    {
-      scenario: {
-        texture: { grooveWidth: 50e-6, grooveDepth: 20e-6, pitch: 100e-6, flowAngle: 0 },
-        lubricant: fluid('decane', { density: 730, viscosity: 0.92e-3 }),
-        workingFluid: fluid('water', {}),
-        flow: evaluateFlow({ density: 998, viscosity: 1.0e-3 }, { kind: 'channel', height: 10e-3, bulkVelocity: 1 }).result,
-        interfacialTension: 0.0523,
-      } satisfies Scenario,
-      contactAngles: { underWorkingFluid: { advancing: 46, receding: 0 } },
-      grooveLength: 0.1,
-      grooveEnds: 'open',
-      duration: 7200,
-    },
-    0.05,
-  ],
+/** A groove of the given size and lubricant under water in a channel flow, open ends, a 2 h duration. */
+function grooveUnderChannel(
+  groove: { width: number; depth: number; pitch: number; length: number },
+  lubricant: { density: number; viscosity: number; interfacialTension: number },
+  channel: { height: number; bulkVelocity: number },
+  angles: { advancing: number; receding: number },
+): RetentionInput {
+  const scenario: Scenario = {
+    texture: { grooveWidth: groove.width, grooveDepth: groove.depth, pitch: groove.pitch, flowAngle: 0 },
+    lubricant: fluid('oil', { density: lubricant.density, viscosity: lubricant.viscosity }),
+    workingFluid: fluid('water', {}),
+    flow: evaluateFlow({ density: 998, viscosity: 1.0e-3 }, { kind: 'channel', ...channel }).result,
+    interfacialTension: lubricant.interfacialTension,
+  };
+  return { scenario, contactAngles: { underWorkingFluid: angles }, grooveLength: groove.length, grooveEnds: 'open', duration: 7200 };
+}
+
+// [name, groove w/d/P/length (m), lubricant ρ/μ/γ, channel height/bulk velocity, angles θ_A/θ_R, bound on the gap]
+type Row = [string, [number, number, number, number], [number, number, number], [number, number], [number, number], number];
+const rows: Row[] = [
+  ['a 20 mm groove settling within seconds', [30e-6, 15e-6, 60e-6, 0.02], [773, 3.4e-3, 0.0535], [2e-3, 0.5], [60, 20], 0.012],
+  ['a 100 mm groove of a wetting lubricant draining within a minute', [50e-6, 20e-6, 100e-6, 0.1], [730, 0.92e-3, 0.0523], [10e-3, 1], [46, 0], 0.05],
 ];
+const designs: [string, RetentionInput, number][] = rows.map(([name, [width, depth, pitch, length], [density, viscosity, interfacialTension], [height, bulkVelocity], [advancing, receding], bound]) => [
+  name,
+  grooveUnderChannel({ width, depth, pitch, length }, { density, viscosity, interfacialTension }, { height, bulkVelocity }, { advancing, receding }),
+  bound,
+]);
 
 describe('drainage timeline on the coarse grid for a caller that reads the steady share once settled', () => {
   for (const [name, input, bound] of designs) {
