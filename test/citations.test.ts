@@ -7,7 +7,7 @@ import { recalledClaims, recalledClaimsDocument } from '../scripts/recalled-clai
  * (docs/citations-ledger.md has the research). Lower the ceiling when you
  * confirm one; never raise it.
  */
-const CEILING_SRC = 24;
+const CEILING_SRC = 23;
 /** The same in tests: expected values recalled rather than read. */
 const CEILING_TEST = 2;
 

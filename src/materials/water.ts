@@ -209,8 +209,5 @@ export function waterSurfaceTension(temperature: number): number {
   return 235.8e-3 * tau ** 1.256 * (1 - 0.625 * tau);
 }
 
-/**
- * Dispersive (London) component of the surface tension of water, 21.8 mN/m at
- * 20 °C (Fowkes 1964, Ind. Eng. Chem. 56(12), 40–52, doi:10.1021/ie50660a008).
- */
-export const WATER_SURFACE_TENSION_DISPERSIVE = 21.8e-3;
+/** Dispersive (London) component of the surface tension of water: one definition, in core (its sources there). */
+export { WATER_SURFACE_TENSION_DISPERSIVE } from '../core/constants.js';

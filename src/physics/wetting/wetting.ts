@@ -42,6 +42,7 @@
  *      and Young contact angles. Langmuir 20(18), 7659–7664. doi:10.1021/la049410h
  */
 import type { FluidState } from '../../core/fluid.js';
+import { WATER_SURFACE_TENSION_DISPERSIVE } from '../../core/constants.js';
 import { DomainError } from '../../core/errors.js';
 import { Notes, outcome, type Outcome } from '../../core/notes.js';
 import { REFERENCES } from '../../core/references.js';
@@ -61,13 +62,6 @@ export function warnNotWetting(notes: Notes): void {
   );
 }
 
-/**
- * Dispersive part of water's surface tension, N/m: 21.8 mN/m (Fowkes 1964; the ±0.7 and 20 °C from memory:
- * the paper was not reachable; probe-liquid tables read list the same 21.8 mN/m, corroboration only; searched
- * again by the citation "Fowkes (1964)" in the public code index: probe-liquid tables giving 21.8
- * for water cite Jasper 1972 and Good & van Oss 1991, not Fowkes).
- */
-export const WATER_DISPERSIVE_SURFACE_TENSION = 0.0218;
 
 /** Contact angles (degrees) of the lubricant on the flat solid under the working fluid, through the lubricant. */
 export interface AnglesUnderWorkingFluid {
@@ -261,7 +255,7 @@ export function resolveInterfacialTension(
         field: 'workingFluid.surfaceTensionDispersive',
       });
     }
-    gammaWd = WATER_DISPERSIVE_SURFACE_TENSION;
+    gammaWd = WATER_SURFACE_TENSION_DISPERSIVE;
   }
   const value = fowkesInterfacialTension(gammaO, gammaOd, gammaW, gammaWd);
   notes.cite(REFERENCES.fowkes1964);
